@@ -1,0 +1,75 @@
+// Builds Heatpath's Express app (no listen): API routes under /api, and the built web app with
+// a fallback to index.html for client routes. Tests import this.
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import cookieParser from 'cookie-parser';
+import express from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { createSessionSigner } from './lib/session-token';
+import { authenticate } from './middlewares/authenticate';
+import { crossSiteGuard } from './middlewares/cross-site-guard';
+import { apiNotFound, errorHandler } from './middlewares/error-handler';
+import { authRouter } from './routes/auth/auth.router';
+import { healthRouter } from './routes/health/health.router';
+import { meRouter } from './routes/me/me.router';
+import { staffRouter } from './routes/staff/staff.router';
+
+export interface AppDeps {
+  config: Config;
+  sequelize: Sequelize;
+  logger: Logger;
+}
+
+export function createApp(deps: AppDeps): express.Express {
+  const { config, sequelize, logger } = deps;
+  const signer = createSessionSigner(config.sessionSecret, config.sessionTtlHours);
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+  app.set('query parser', 'simple');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': config.cookieSecure ? [] : null,
+        },
+      },
+      strictTransportSecurity: config.cookieSecure,
+    }),
+  );
+
+  const api = express.Router();
+  api.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/health' } }));
+  api.use(express.json({ limit: config.bodyLimit, strict: true }));
+  api.use(cookieParser());
+  api.use(crossSiteGuard);
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  api.use('/health', healthRouter({ sequelize }));
+  api.use('/auth', authRouter({ config, sequelize, signer }));
+  api.use(authenticate(signer));
+  api.use('/me', meRouter());
+  api.use('/staff', staffRouter());
+  api.use(apiNotFound);
+  api.use(errorHandler);
+  app.use('/api', api);
+
+  const webDist = config.webDist ? resolve(config.webDist) : null;
+  if (webDist && existsSync(join(webDist, 'index.html'))) {
+    app.use(express.static(webDist, { index: false, maxAge: '1h' }));
+    app.get('/{*path}', (_req, res) => {
+      res.set('Cache-Control', 'no-cache');
+      res.sendFile(join(webDist, 'index.html'));
+    });
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,43 @@
+// Database chores for the bootstrap scripts: `migrate`, `seed-demo` (only on an empty
+// database) and `reset` (drop everything; development and test only).
+import { loadConfig } from '../config';
+import { initModels } from './models/index';
+import { migrateUp } from './migrator';
+import { createSequelize } from './sequelize';
+import { seedDemo } from './seeders/demo';
+
+const command = process.argv[2];
+const config = loadConfig();
+const sequelize = createSequelize(config.databaseUrl, { poolMax: 4 });
+initModels(sequelize);
+
+async function main(): Promise<void> {
+  switch (command) {
+    case 'migrate': {
+      const done = await migrateUp(sequelize);
+      console.log(done.length ? `✓ Applied migrations: ${done.join(', ')}` : '✓ Database schema is up to date.');
+      break;
+    }
+    case 'seed-demo': {
+      const seeded = await seedDemo(sequelize);
+      console.log(seeded ? '✓ Seeded the demo workshops.' : '✓ Demo data already present; left as it is.');
+      break;
+    }
+    case 'reset': {
+      if (config.env === 'production') throw new Error('Refusing to reset a production database.');
+      await sequelize.query('DROP SCHEMA public CASCADE; CREATE SCHEMA public;');
+      console.log('✓ Database emptied.');
+      break;
+    }
+    default:
+      throw new Error(`Unknown command "${command}". Use migrate, seed-demo or reset.`);
+  }
+}
+
+main()
+  .then(() => sequelize.close())
+  .catch(async (error: unknown) => {
+    console.error(`✗ ${error instanceof Error ? error.message : String(error)}`);
+    await sequelize.close();
+    process.exit(1);
+  });

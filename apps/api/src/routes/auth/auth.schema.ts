@@ -1,0 +1,2 @@
+// Request shapes for /api/auth.
+export { signInRequestSchema } from '@heatpath/contracts';

@@ -1,0 +1,130 @@
+// The areas of Heatpath, who may enter each, and whether it is built yet. The navigation, the
+// home screens and the route guards all read this one list, so a role never sees a link to a
+// screen that would turn it away.
+import type { Role } from '@heatpath/contracts';
+
+export type AreaId =
+  | 'home'
+  | 'staff'
+  | 'trees'
+  | 'cases'
+  | 'training'
+  | 'casebook'
+  | 'findings'
+  | 'calculators';
+
+export interface Area {
+  id: AreaId;
+  path: string;
+  /** Label in the navigation; a role may see its own wording ("My cases"). */
+  label: string;
+  labelFor?: Partial<Record<Role, string>>;
+  roles: readonly Role[];
+  /** What this area is for, as the home screen explains it to each role. */
+  summary: Partial<Record<Role, string>>;
+  /** Set while the capability behind this area is not built; its screen is a placeholder. */
+  comingWith?: string;
+}
+
+const everyone: readonly Role[] = ['lead', 'technician', 'apprentice', 'advisor'];
+
+export const areas: readonly Area[] = [
+  {
+    id: 'home',
+    path: '/',
+    label: 'Home',
+    roles: everyone,
+    summary: {},
+  },
+  {
+    id: 'staff',
+    path: '/staff',
+    label: 'Staff',
+    roles: ['lead'],
+    summary: {
+      lead: 'Add people to the workshop, set their role and first password, or deactivate them.',
+    },
+  },
+  {
+    id: 'trees',
+    path: '/trees',
+    label: 'Decision trees',
+    roles: ['lead'],
+    summary: {
+      lead: 'Write the order of checks once, test a change against solved cases, then publish it.',
+    },
+    comingWith: 'decision trees',
+  },
+  {
+    id: 'cases',
+    path: '/cases',
+    label: 'Cases',
+    labelFor: { technician: 'My cases' },
+    roles: ['lead', 'technician'],
+    summary: {
+      lead: 'Review the workshop’s open and finished cases and the findings they reached.',
+      technician:
+        'Open a case for a vehicle, answer the guided checks, record readings and reach a finding.',
+    },
+    comingWith: 'cases',
+  },
+  {
+    id: 'training',
+    path: '/training',
+    label: 'Training',
+    roles: ['lead'],
+    summary: {
+      lead: 'Choose finished cases for apprentices to replay, and sign off their scores.',
+    },
+    comingWith: 'the training casebook',
+  },
+  {
+    id: 'casebook',
+    path: '/casebook',
+    label: 'Casebook',
+    roles: ['apprentice'],
+    summary: {
+      apprentice:
+        'Replay finished cases step by step, predict the next check, and see how you scored.',
+    },
+    comingWith: 'the training casebook',
+  },
+  {
+    id: 'findings',
+    path: '/findings',
+    label: 'Findings',
+    roles: ['advisor'],
+    summary: {
+      advisor:
+        'Receive finished findings and export concern, cause and correction into the repair order.',
+    },
+    comingWith: 'repair-order export',
+  },
+  {
+    id: 'calculators',
+    path: '/calculators',
+    label: 'Calculators',
+    roles: everyone,
+    summary: {
+      lead: 'Coolant protection, mix adjustment, boiling margin, temperature drop, pressure test and heat flow.',
+      technician:
+        'At the car: coolant protection, mix, boiling margin, temperature drop, pressure test, heat flow.',
+      apprentice: 'Work the same figures the technicians use, with where each one comes from.',
+      advisor: 'Check a figure before you explain it to a customer.',
+    },
+  },
+];
+
+export function areasFor(role: Role): Area[] {
+  return areas.filter((area) => area.roles.includes(role));
+}
+
+export function areaLabel(area: Area, role: Role): string {
+  return area.labelFor?.[role] ?? area.label;
+}
+
+export function getArea(id: AreaId): Area {
+  const area = areas.find((candidate) => candidate.id === id);
+  if (!area) throw new Error(`Unknown area ${id}`);
+  return area;
+}

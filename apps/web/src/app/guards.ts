@@ -1,0 +1,56 @@
+// Loader helpers that decide who may see a screen before it renders: no session → sign-in (with
+// the way back), wrong role → a 403 the route's error page explains.
+import { roleLabels, type Me } from '@heatpath/contracts';
+import type { QueryClient } from '@tanstack/react-query';
+import { data, redirect } from 'react-router';
+import { isUnauthenticated } from '../lib/api-client';
+import { meQueryOptions } from '../lib/auth';
+import { getArea, type AreaId } from './areas';
+
+export interface ForbiddenData {
+  message: string;
+}
+
+/** Where to send someone whose session is missing, remembering the screen they wanted. */
+export function signInPath(wanted: string): string {
+  return wanted === '/' || wanted.startsWith('/sign-in')
+    ? '/sign-in'
+    : `/sign-in?next=${encodeURIComponent(wanted)}`;
+}
+
+/** Accepts only a path inside this app, so a crafted link cannot bounce a person elsewhere. */
+export function safeNextPath(next: string | null): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/sign-in')) {
+    return '/';
+  }
+  return next;
+}
+
+export async function requireMe(queryClient: QueryClient, request: Request): Promise<Me> {
+  try {
+    return await queryClient.ensureQueryData(meQueryOptions());
+  } catch (error) {
+    if (isUnauthenticated(error)) {
+      const url = new URL(request.url);
+      throw redirect(signInPath(url.pathname + url.search));
+    }
+    throw error;
+  }
+}
+
+export async function requireArea(
+  queryClient: QueryClient,
+  request: Request,
+  areaId: AreaId,
+): Promise<Me> {
+  const me = await requireMe(queryClient, request);
+  const area = getArea(areaId);
+  if (!area.roles.includes(me.role)) {
+    const who = area.roles.map((role) => roleLabels[role]).join(', ');
+    throw data<ForbiddenData>(
+      { message: `${area.label} is open to: ${who}. You are signed in as ${roleLabels[me.role]}.` },
+      { status: 403 },
+    );
+  }
+  return me;
+}

@@ -1,0 +1,76 @@
+// Lint for the whole workspace: typescript-eslint strict, kebab-case file names, and import
+// boundaries (packages never import apps; web features never import each other; the flow is
+// components/lib -> features -> app).
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import checkFile from 'eslint-plugin-check-file';
+import reactHooks from 'eslint-plugin-react-hooks';
+import globals from 'globals';
+
+export default tseslint.config(
+  {
+    ignores: ['**/node_modules/**', '**/dist/**', '.data/**', 'test-results/**', 'coverage/**'],
+  },
+  js.configs.recommended,
+  ...tseslint.configs.strict,
+  {
+    languageOptions: { globals: { ...globals.node } },
+    plugins: { 'check-file': checkFile },
+    rules: {
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
+      '@typescript-eslint/consistent-type-imports': 'error',
+      'check-file/filename-naming-convention': [
+        'error',
+        { '**/*.{ts,tsx,js,mjs}': 'KEBAB_CASE' },
+        { ignoreMiddleExtensions: true },
+      ],
+      'check-file/folder-naming-convention': [
+        'error',
+        { '{apps,packages,tests,scripts}/**/': 'KEBAB_CASE' },
+      ],
+    },
+  },
+  {
+    files: ['apps/web/**/*.{ts,tsx}'],
+    languageOptions: { globals: { ...globals.browser } },
+    plugins: { 'react-hooks': reactHooks },
+    rules: { ...reactHooks.configs.recommended.rules },
+  },
+  {
+    // Pure packages: no I/O, no app imports.
+    files: ['packages/**/*.ts'],
+    ignores: ['packages/**/*.test.ts', 'packages/*/bench/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['@heatpath/api', '@heatpath/web', '**/apps/**'], message: 'Packages never import the apps.' },
+            { group: ['node:fs', 'fs', 'node:net', 'node:http', 'pg', 'sequelize', 'express'], message: 'Packages have no I/O.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['apps/web/src/components/**/*.{ts,tsx}', 'apps/web/src/lib/**/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/features/**', '**/app/**'], message: 'Shared code knows no features or routes.' }] },
+      ],
+    },
+  },
+  {
+    files: ['apps/web/src/features/**/*.{ts,tsx}'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['**/app/**'], message: 'Features never import the app layer.' }] },
+      ],
+    },
+  },
+);

@@ -1,0 +1,28 @@
+// Public API of @heatpath/coolant: coolant and thermal computations for cooling-system
+// diagnosis, each with the source of its figures. No I/O.
+export { CoolantInputError } from './errors.js';
+export type { SourceNote } from './sources.js';
+export type { CoolantWarning, CoolantWarningCode } from './warnings.js';
+export {
+  CANONICAL_UNITS,
+  DISPLAY_UNITS,
+  formatQuantity,
+  fromCanonical,
+  toCanonical,
+} from './units.js';
+export type { DisplayUnit, FormatOptions, Quantity, QuantityInput } from './units.js';
+export type { Basis, FreezeTableRow, Glycol } from './glycol-tables.js';
+export { ETHYLENE_GLYCOL_FREEZE_TABLE, PROPYLENE_GLYCOL_FREEZE_TABLE } from './glycol-tables.js';
+export { convertBasis } from './concentration-basis.js';
+export type { ConvertBasisOptions } from './concentration-basis.js';
+export { freezePoint } from './freeze-point.js';
+export type { FreezePointOptions, FreezePointResult } from './freeze-point.js';
+export { concentrationForFreezePoint } from './concentration-for-freeze-point.js';
+export type {
+  ConcentrationForFreezePointOptions,
+  ConcentrationForFreezePointResult,
+} from './concentration-for-freeze-point.js';
+export { boilingPoint, STANDARD_ATMOSPHERE_BAR } from './boiling-point.js';
+export type { BoilingPointOptions, BoilingPointResult } from './boiling-point.js';
+export { formulaFunctions } from './formula-functions.js';
+export type { CoolantFormulaFunctions } from './formula-functions.js';

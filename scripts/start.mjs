@@ -1,0 +1,84 @@
+// `npm start`: install, start the private PostgreSQL, migrate, seed the demo on an empty
+// database, build the web app and serve Heatpath from one Node process. Plain Node, no
+// dependencies: it runs before node_modules exists.
+import { spawn } from 'node:child_process';
+import { join } from 'node:path';
+import { ensureSecret, portIsFree, startCluster } from './lib/postgres.mjs';
+import { installDependencies } from './lib/install.mjs';
+import { fail, ok, step, BootstrapError } from './lib/log.mjs';
+import { root, runPnpm, mustRun } from './lib/run.mjs';
+
+const began = Date.now();
+const port = Number(process.env.PORT ?? 3000);
+const pgPort = Number(process.env.PGPORT ?? 54329);
+const dataRoot = join(root, '.data');
+
+async function main() {
+  if (!Number.isInteger(port) || port < 1 || port > 65535) throw new BootstrapError(`PORT must be a port number, got "${process.env.PORT}".`);
+  if (!Number.isInteger(pgPort) || pgPort < 1 || pgPort > 65535) throw new BootstrapError(`PGPORT must be a port number, got "${process.env.PGPORT}".`);
+  if (!(await portIsFree(port))) {
+    throw new BootstrapError(`Port ${port} is already in use: stop the program using it or run with another port, e.g. PORT=${port + 1} npm start.`);
+  }
+  await installDependencies();
+  const db = await startCluster({
+    dataDir: join(dataRoot, 'pg'),
+    port: pgPort,
+    database: process.env.PGDATABASE ?? 'heatpath',
+  });
+  const stopDb = () => db.stop();
+  process.once('exit', stopDb);
+
+  const env = {
+    ...process.env,
+    NODE_ENV: process.env.NODE_ENV ?? 'production',
+    DATABASE_URL: db.url,
+    SESSION_SECRET: process.env.SESSION_SECRET ?? ensureSecret(join(dataRoot, 'session-secret')),
+    HEATPATH_DEMO: process.env.HEATPATH_DEMO ?? 'true',
+    PORT: String(port),
+    UPLOAD_DIR: process.env.UPLOAD_DIR ?? join(dataRoot, 'uploads'),
+  };
+  const api = join(root, 'apps', 'api');
+  step('Migrating the database…');
+  await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'migrate'], 'Migrating the database failed; see the message above.', { cwd: api, env });
+  if (env.HEATPATH_DEMO === 'true') {
+    await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'], 'Seeding the demo workshop failed; see the message above.', { cwd: api, env });
+  }
+  step('Building the web app…');
+  await runPnpm(['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'], 'Building the web app failed; see the message above.');
+
+  step('Starting Heatpath…');
+  const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], { cwd: api, env, stdio: ['ignore', 'pipe', 'inherit'] });
+  let announced = false;
+  server.stdout.on('data', (chunk) => {
+    const text = chunk.toString();
+    if (!announced && text.includes('"msg":"listening"')) {
+      announced = true;
+      const seconds = ((Date.now() - began) / 1000).toFixed(1);
+      ok(`Heatpath is ready after ${seconds} s.`);
+      console.log(`\n  Open  http://127.0.0.1:${port}\n`);
+      if (env.HEATPATH_DEMO === 'true') {
+        console.log('  Demo sign-ins (password heatpath-demo):');
+        console.log('    Harbour Lane Garage  lead@harbourlane.test        workshop lead');
+        console.log('                         tech@harbourlane.test        technician');
+        console.log('                         apprentice@harbourlane.test  apprentice');
+        console.log('                         advisor@harbourlane.test     service advisor');
+        console.log('    Millbrook Autos      lead@millbrook.test          workshop lead\n');
+      }
+      console.log('  Press Ctrl-C to stop the server and the database.\n');
+    }
+    if (process.env.HEATPATH_VERBOSE === 'true') process.stdout.write(text);
+  });
+  const shutdown = (signal) => {
+    step(`Stopping (${signal})…`);
+    server.kill('SIGTERM');
+  };
+  process.on('SIGINT', () => shutdown('Ctrl-C'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  server.on('exit', (code) => {
+    stopDb();
+    ok('Server and database stopped.');
+    process.exit(code ?? 0);
+  });
+}
+
+main().catch(fail);

@@ -1,0 +1,126 @@
+// `npm test`: the start command's bootstrap against a throw-away cluster, then lint, type-check,
+// unit, API-against-PostgreSQL and browser tests. Ends with one summary line; non-zero on any
+// failure. Plain Node, no dependencies: it runs before node_modules exists.
+import { spawn } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { ensureChromium, ensureIapws, installDependencies } from './lib/install.mjs';
+import { BootstrapError, fail, ok, step, warn } from './lib/log.mjs';
+import { portIsFree, startCluster } from './lib/postgres.mjs';
+import { pnpm, root, run, runPnpm, mustRun } from './lib/run.mjs';
+
+const began = Date.now();
+const results = [];
+const resultsDir = join(root, 'test-results');
+const only = process.env.HEATPATH_TEST_ONLY?.split(',').map((s) => s.trim());
+const wanted = (stage) => !only || only.includes(stage);
+
+function record(stage, counts, seconds) {
+  results.push({ stage, ...counts, seconds });
+  const line = `${stage}: ${counts.passed} passed, ${counts.failed} failed${counts.skipped ? `, ${counts.skipped} skipped` : ''} (${seconds.toFixed(1)} s)`;
+  (counts.failed ? warn : ok)(line);
+}
+
+async function check(stage, cmd, args, options) {
+  step(`${stage}…`);
+  const t = Date.now();
+  const code = await run(cmd, args, options);
+  record(stage, { passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0 }, (Date.now() - t) / 1000);
+}
+
+async function vitest(stage, projects, env = {}) {
+  step(`${stage} tests…`);
+  const t = Date.now();
+  const report = join(resultsDir, `${stage}.json`);
+  rmSync(report, { force: true });
+  const args = [...pnpm[1], 'exec', 'vitest', 'run', ...projects.flatMap((p) => ['--project', p]), '--reporter=default', '--reporter=json', `--outputFile.json=${report}`];
+  const code = await run(pnpm[0], args, { env: { ...process.env, ...env } });
+  let counts = { passed: 0, failed: code === 0 ? 0 : 1, skipped: 0 };
+  if (existsSync(report)) {
+    const json = JSON.parse(readFileSync(report, 'utf8'));
+    counts = {
+      passed: json.numPassedTests,
+      failed: json.numFailedTests + (code !== 0 && json.numFailedTests === 0 ? 1 : 0),
+      skipped: json.numPendingTests + json.numTodoTests,
+    };
+    if (json.numTotalTests === 0) counts.failed += 1;
+  }
+  record(stage, counts, (Date.now() - t) / 1000);
+}
+
+function freePort(start) {
+  return (async () => {
+    for (let p = start; p < start + 200; p += 1) if (await portIsFree(p)) return p;
+    throw new BootstrapError(`No free port found near ${start}: free one or set E2E_PORT.`);
+  })();
+}
+
+async function main() {
+  mkdirSync(resultsDir, { recursive: true });
+  await installDependencies();
+  const chromium = wanted('e2e') ? await ensureChromium() : null;
+  if (wanted('unit')) await ensureIapws();
+
+  const db = await startCluster({
+    dataDir: join(root, '.data', 'test-pg'),
+    port: Number(process.env.PGPORT_TEST ?? 54339),
+    database: 'heatpath_test',
+    fresh: true,
+    fast: true,
+  });
+  process.once('exit', () => {
+    db.stop();
+    db.remove();
+  });
+
+  if (wanted('lint')) {
+    await check('lint', pnpm[0], [...pnpm[1], 'exec', 'eslint', '.', '--max-warnings', '0']);
+    await check('format', pnpm[0], [...pnpm[1], 'exec', 'prettier', '--check', '--log-level', 'warn', '.']);
+  }
+  if (wanted('typecheck')) await check('typecheck', pnpm[0], [...pnpm[1], 'exec', 'tsc', '-b']);
+  if (wanted('unit')) await vitest('unit', ['unit', 'web']);
+  if (wanted('api')) await vitest('api', ['api'], { DATABASE_URL: db.url, NODE_ENV: 'test' });
+
+  if (wanted('e2e')) {
+    const e2eUrl = db.createDatabase('heatpath_e2e');
+    const port = await freePort(Number(process.env.E2E_PORT ?? 3900));
+    const env = {
+      ...process.env,
+      NODE_ENV: 'production',
+      DATABASE_URL: e2eUrl,
+      SESSION_SECRET: 'heatpath-e2e-session-secret-0123456789abcdef',
+      HEATPATH_DEMO: 'true',
+      PORT: String(port),
+      LOG_LEVEL: 'warn',
+      UPLOAD_DIR: join(root, '.data', 'test-uploads'),
+    };
+    const api = join(root, 'apps', 'api');
+    await runPnpm(['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'], 'Building the web app failed; see above.');
+    await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'migrate'], 'Migrating the e2e database failed.', { cwd: api, env });
+    await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'], 'Seeding the e2e database failed.', { cwd: api, env });
+    const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], { cwd: api, env, stdio: ['ignore', 'ignore', 'inherit'] });
+    const baseUrl = `http://127.0.0.1:${port}`;
+    const deadline = Date.now() + 30_000;
+    while (Date.now() < deadline) {
+      try {
+        if ((await fetch(`${baseUrl}/api/health`)).ok) break;
+      } catch {
+        /* not up yet */
+      }
+      await new Promise((r) => setTimeout(r, 200));
+    }
+    try {
+      await vitest('e2e', ['e2e'], { E2E_BASE_URL: baseUrl, CHROMIUM_PATH: chromium, E2E_ARTIFACTS: join(resultsDir, 'screenshots') });
+    } finally {
+      server.kill('SIGTERM');
+    }
+  }
+
+  const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), { passed: 0, failed: 0, skipped: 0 });
+  console.log(`\nHeatpath test run took ${((Date.now() - began) / 1000).toFixed(0)} s.`);
+  for (const r of results) console.log(`  ${r.stage.padEnd(10)} ${r.passed} passed, ${r.failed} failed${r.skipped ? `, ${r.skipped} skipped` : ''}`);
+  console.log(`Summary: ${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`);
+  process.exit(total.failed ? 1 : 0);
+}
+
+main().catch(fail);

@@ -1,0 +1,46 @@
+// One Vitest run, three projects: pure packages, the web app (jsdom), and the API against
+// the real PostgreSQL that scripts/test.mjs starts. `vitest run --project NAME` picks one.
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['packages/*/src/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        extends: './apps/web/vite.config.ts',
+        test: {
+          name: 'web',
+          root: './apps/web',
+          include: ['src/**/*.test.{ts,tsx}'],
+          environment: 'jsdom',
+        },
+      },
+      {
+        test: {
+          name: 'api',
+          include: ['apps/api/src/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['./apps/api/src/test/global-setup.ts'],
+          testTimeout: 20_000,
+          hookTimeout: 30_000,
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/src/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 60_000,
+        },
+      },
+    ],
+  },
+});
