@@ -49,9 +49,13 @@ async function main() {
   step('Starting Heatpath…');
   const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], { cwd: api, env, stdio: ['ignore', 'pipe', 'inherit'] });
   let announced = false;
+  let pending = '';
   server.stdout.on('data', (chunk) => {
-    const text = chunk.toString();
-    if (!announced && text.includes('"msg":"listening"')) {
+    pending += chunk.toString();
+    const lines = pending.split('\n');
+    pending = lines.pop() ?? '';
+    for (const line of lines) showLogLine(line);
+    if (!announced && lines.some((l) => l.includes('"msg":"listening"'))) {
       announced = true;
       const seconds = ((Date.now() - began) / 1000).toFixed(1);
       ok(`Heatpath is ready after ${seconds} s.`);
@@ -66,7 +70,6 @@ async function main() {
       }
       console.log('  Press Ctrl-C to stop the server and the database.\n');
     }
-    if (process.env.HEATPATH_VERBOSE === 'true') process.stdout.write(text);
   });
   const shutdown = (signal) => {
     step(`Stopping (${signal})…`);
@@ -79,6 +82,18 @@ async function main() {
     ok('Server and database stopped.');
     process.exit(code ?? 0);
   });
+}
+
+// Warnings and errors always reach the terminal; everything else only when HEATPATH_VERBOSE=true.
+function showLogLine(line) {
+  if (!line.trim()) return;
+  let level = 30;
+  try {
+    level = JSON.parse(line).level ?? 30;
+  } catch {
+    level = 50;
+  }
+  if (level >= 40 || process.env.HEATPATH_VERBOSE === 'true') console.log(line);
 }
 
 main().catch(fail);

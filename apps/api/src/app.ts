@@ -17,6 +17,8 @@ import { authRouter } from './routes/auth/auth.router';
 import { healthRouter } from './routes/health/health.router';
 import { meRouter } from './routes/me/me.router';
 import { staffRouter } from './routes/staff/staff.router';
+import { customersRouter } from './routes/customers/customers.router';
+import { vehiclesRouter } from './routes/vehicles/vehicles.router';
 
 export interface AppDeps {
   config: Config;
@@ -58,6 +60,8 @@ export function createApp(deps: AppDeps): express.Express {
   api.use(authenticate(signer));
   api.use('/me', meRouter());
   api.use('/staff', staffRouter());
+  api.use('/vehicles', vehiclesRouter());
+  api.use('/customers', customersRouter());
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -1,2 +1,6 @@
 export * from './auth';
 export * from './errors';
+export * from './vin';
+export * from './vehicles';
+export * from './cases';
+export * from './findings';

@@ -13,8 +13,8 @@ export const STANDARD_ATMOSPHERE_BAR = 1.01325;
 
 // IAPWS-IF97 region 4, saturation-temperature (backward) equation, coefficients n1..n10.
 const N = [
-  0.11670521452767e4, -0.72421316703206e6, -0.17073846940092e2, 0.12020824702470e5,
-  -0.32325550322333e7, 0.14915108613530e2, -0.48232657361591e4, 0.40511340542057e6,
+  0.11670521452767e4, -0.72421316703206e6, -0.17073846940092e2, 0.1202082470247e5,
+  -0.32325550322333e7, 0.1491510861353e2, -0.48232657361591e4, 0.40511340542057e6,
   -0.23855557567849, 0.65017534844798e3,
 ] as const;
 
@@ -73,7 +73,10 @@ export function boilingPointOf(gaugeBar: number): BoilingPointResult {
   const warnings: CoolantWarning[] = [];
   if (gaugeBar < 0) {
     warnings.push(
-      warning('vacuum', 'A negative gauge pressure is a partial vacuum: water boils below 100 °C here.'),
+      warning(
+        'vacuum',
+        'A negative gauge pressure is a partial vacuum: water boils below 100 °C here.',
+      ),
     );
   } else if (gaugeBar > 3) {
     warnings.push(

@@ -14,7 +14,7 @@ export interface ConvertBasisOptions {
   readonly to: Basis;
 }
 
-/** Mass % ↔ volume %; null beyond the table's richest row, where Heatpath has no pairing. */
+/** Mass % ↔ volume %; null beyond the table's richest row, where the table pairs no columns. */
 export function convertBasis(options: ConvertBasisOptions): number | null {
   const glycol = readGlycol(options.glycol);
   const from = readBasis(options.from, 'from');
@@ -23,19 +23,29 @@ export function convertBasis(options: ConvertBasisOptions): number | null {
   return convertPercent(glycol, percent, from, to);
 }
 
-export function convertPercent(glycol: Glycol, percent: number, from: Basis, to: Basis): number | null {
+export function convertPercent(
+  glycol: Glycol,
+  percent: number,
+  from: Basis,
+  to: Basis,
+): number | null {
+  if (from === to) {
+    return percent;
+  }
   const curves = GLYCOL_CURVES[glycol];
   if (percent > curves.maxPercent[from]) {
     return null;
-  }
-  if (from === to) {
-    return percent;
   }
   return from === 'volume' ? curves.massFromVolume(percent) : curves.volumeFromMass(percent);
 }
 
 /** Volume % for checks that are stated by volume (ASTM D3306); throws past the table. */
-export function volumePercentOf(glycol: Glycol, percent: number, basis: Basis, field: string): number {
+export function volumePercentOf(
+  glycol: Glycol,
+  percent: number,
+  basis: Basis,
+  field: string,
+): number {
   const v = convertPercent(glycol, percent, basis, 'volume');
   if (v === null) {
     throw new CoolantInputError(

@@ -4,6 +4,7 @@
 import { CoolantInputError } from './errors.js';
 import { ASHRAE_GLYCOL_TABLE, IAPWS_IF97_WATER_85C } from './sources.js';
 import type { SourceNote } from './sources.js';
+import { at } from './table-access.js';
 import { warning } from './warnings.js';
 import type { CoolantWarning } from './warnings.js';
 
@@ -48,10 +49,15 @@ export interface CoolantProperties {
   readonly sources: readonly SourceNote[];
 }
 
-function linear<T>(points: readonly T[], x: number, key: (p: T) => number, value: (p: T) => number): number {
+function linear<T>(
+  points: readonly T[],
+  x: number,
+  key: (p: T) => number,
+  value: (p: T) => number,
+): number {
   for (let i = 0; i < points.length - 1; i++) {
-    const a = points[i]!;
-    const b = points[i + 1]!;
+    const a = at(points, i);
+    const b = at(points, i + 1);
     if (x >= key(a) && x <= key(b)) {
       const t = (x - key(a)) / (key(b) - key(a));
       return value(a) + t * (value(b) - value(a));
@@ -66,7 +72,10 @@ function linear<T>(points: readonly T[], x: number, key: (p: T) => number, value
  * temperature series the 50 % series' change with temperature is borrowed, with a warning.
  */
 export function coolantProperties(volumePercent: number, meanCelsius: number): CoolantProperties {
-  if (meanCelsius < PROPERTY_TEMPERATURE_RANGE.min || meanCelsius > PROPERTY_TEMPERATURE_RANGE.max) {
+  if (
+    meanCelsius < PROPERTY_TEMPERATURE_RANGE.min ||
+    meanCelsius > PROPERTY_TEMPERATURE_RANGE.max
+  ) {
     throw new CoolantInputError(
       'inletCelsius',
       `The mean coolant temperature is ${meanCelsius.toFixed(1)} °C; the cited density and specific-heat figures cover only 80–90 °C, so no heat flow is computed outside that.`,
@@ -94,11 +103,32 @@ export function coolantProperties(volumePercent: number, meanCelsius: number): C
       `Density and specific heat are cited for ethylene glycol at 40, 50 and 60 vol % (and for plain water); ${volumePercent.toFixed(1)} vol % is outside that, so no heat flow is computed.`,
     );
   }
-  const density85 = linear(EG_AT_85C, volumePercent, (p) => p.volumePercent, (p) => p.density);
-  const cp85 = linear(EG_AT_85C, volumePercent, (p) => p.volumePercent, (p) => p.cp);
+  const density85 = linear(
+    EG_AT_85C,
+    volumePercent,
+    (p) => p.volumePercent,
+    (p) => p.density,
+  );
+  const cp85 = linear(
+    EG_AT_85C,
+    volumePercent,
+    (p) => p.volumePercent,
+    (p) => p.cp,
+  );
   const densityShift =
-    linear(EG50_BY_TEMPERATURE, meanCelsius, (p) => p.celsius, (p) => p.density) - EG_AT_85C[1]!.density;
-  const cpShift = linear(EG50_BY_TEMPERATURE, meanCelsius, (p) => p.celsius, (p) => p.cp) - EG_AT_85C[1]!.cp;
+    linear(
+      EG50_BY_TEMPERATURE,
+      meanCelsius,
+      (p) => p.celsius,
+      (p) => p.density,
+    ) - at(EG_AT_85C, 1).density;
+  const cpShift =
+    linear(
+      EG50_BY_TEMPERATURE,
+      meanCelsius,
+      (p) => p.celsius,
+      (p) => p.cp,
+    ) - at(EG_AT_85C, 1).cp;
   const warnings: CoolantWarning[] = [];
   if (offTableTemperature && volumePercent !== 50) {
     warnings.push(

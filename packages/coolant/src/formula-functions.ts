@@ -39,10 +39,19 @@ export const formulaFunctions: CoolantFormulaFunctions = {
   egFreezePoint: (volPercent) => freezeByVolume('ethylene', volPercent, 'volPercent'),
   pgFreezePoint: (volPercent) => freezeByVolume('propylene', volPercent, 'volPercent'),
   waterBoilingPoint: (gaugeBar) =>
-    boilingPointOf(toCanonical(numberArgument(gaugeBar, 'gaugeBar'), 'pressure', 'gaugeBar')).celsius,
+    boilingPointOf(toCanonical(numberArgument(gaugeBar, 'gaugeBar'), 'pressure', 'gaugeBar'))
+      .celsius,
   temperatureDrop: (inletCelsius, outletCelsius) => {
-    const inlet = toCanonical(numberArgument(inletCelsius, 'inletCelsius'), 'temperature', 'inletCelsius');
-    const outlet = toCanonical(numberArgument(outletCelsius, 'outletCelsius'), 'temperature', 'outletCelsius');
+    const inlet = toCanonical(
+      numberArgument(inletCelsius, 'inletCelsius'),
+      'temperature',
+      'inletCelsius',
+    );
+    const outlet = toCanonical(
+      numberArgument(outletCelsius, 'outletCelsius'),
+      'temperature',
+      'outletCelsius',
+    );
     return inlet - outlet;
   },
 };

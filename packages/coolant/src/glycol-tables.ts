@@ -1,8 +1,9 @@
 // The handbook freezing-point tables for glycol in water, with their mass %/vol % columns, and
 // the interpolating curves built from them. Every figure here is copied from the table named in
 // ASHRAE_GLYCOL_TABLE; nothing is fitted or smoothed beyond the monotone interpolation.
-import { createMonotoneInterpolator } from './monotone-interpolation.js';
+import { createMonotoneInterpolator, invertMonotone } from './monotone-interpolation.js';
 import type { MonotoneInterpolator } from './monotone-interpolation.js';
+import { at } from './table-access.js';
 
 export type Glycol = 'ethylene' | 'propylene';
 export type Basis = 'mass' | 'volume';
@@ -50,8 +51,9 @@ export const FREEZE_TABLES: Record<Glycol, readonly FreezeTableRow[]> = {
 
 export interface GlycolCurves {
   readonly freezeByMass: MonotoneInterpolator;
-  readonly massFromVolume: MonotoneInterpolator;
   readonly volumeFromMass: MonotoneInterpolator;
+  /** The exact inverse of volumeFromMass, so a mix converted there and back is the same mix. */
+  readonly massFromVolume: (volumePercent: number) => number;
   /** Highest concentration the table covers, on each basis. */
   readonly maxPercent: Record<Basis, number>;
   /** Coldest freezing point in the table (at its richest row). */
@@ -62,11 +64,12 @@ function buildCurves(table: readonly FreezeTableRow[]): GlycolCurves {
   const mass = table.map((r) => r.massPercent);
   const volume = table.map((r) => r.volumePercent);
   const freeze = table.map((r) => r.freezeCelsius);
-  const last = table[table.length - 1]!;
+  const last = at(table, table.length - 1);
+  const volumeFromMass = createMonotoneInterpolator(mass, volume);
   return {
     freezeByMass: createMonotoneInterpolator(mass, freeze),
-    massFromVolume: createMonotoneInterpolator(volume, mass),
-    volumeFromMass: createMonotoneInterpolator(mass, volume),
+    volumeFromMass,
+    massFromVolume: (volumePercent) => invertMonotone(volumeFromMass, volumePercent),
     maxPercent: { mass: last.massPercent, volume: last.volumePercent },
     coldestCelsius: last.freezeCelsius,
   };

@@ -26,3 +26,22 @@ export { boilingPoint, STANDARD_ATMOSPHERE_BAR } from './boiling-point.js';
 export type { BoilingPointOptions, BoilingPointResult } from './boiling-point.js';
 export { formulaFunctions } from './formula-functions.js';
 export type { CoolantFormulaFunctions } from './formula-functions.js';
+export { mixAdjustment } from './mix-adjustment.js';
+export type { MixAdjustmentOptions, MixAdjustmentResult } from './mix-adjustment.js';
+export { heatFlow } from './heat-flow.js';
+export type { HeatFlowOptions, HeatFlowResult } from './heat-flow.js';
+export { assessTemperatureDrop } from './temperature-drop.js';
+export type {
+  AssessTemperatureDropOptions,
+  Circuit,
+  TemperatureDropResult,
+  TemperatureDropRule,
+  TemperatureDropVerdict,
+} from './temperature-drop.js';
+export { pressureTest } from './pressure-test.js';
+export type {
+  PressureTestOptions,
+  PressureTestResult,
+  PressureTestRule,
+  PressureTestVerdict,
+} from './pressure-test.js';

@@ -52,7 +52,10 @@ export function mixAdjustment(options: MixAdjustmentOptions): MixAdjustmentResul
   const current = toCanonical(options.currentPercent, 'percent', 'currentPercent');
   const target = toCanonical(options.targetPercent, 'percent', 'targetPercent');
   if (system <= 0) {
-    throw new CoolantInputError('systemLitres', 'Enter the system capacity; it must be more than 0 litres.');
+    throw new CoolantInputError(
+      'systemLitres',
+      'Enter the system capacity; it must be more than 0 litres.',
+    );
   }
   const strengthening = target > current;
   const add =

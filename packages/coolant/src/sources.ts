@@ -49,7 +49,8 @@ export const SYSTEM_PRESSURE_TEST: SourceNote = {
 };
 
 export const CAP_RATING_TYPICAL: SourceNote = {
-  source: 'Rules of thumb of the trade: pressure cap rating typically 0.8–1.2 bar (12–18 psi) gauge',
+  source:
+    'Rules of thumb of the trade: pressure cap rating typically 0.8–1.2 bar (12–18 psi) gauge',
   status: 'common practice',
 };
 

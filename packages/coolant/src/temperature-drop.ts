@@ -1,7 +1,11 @@
 // Judges the temperature difference across the engine, radiator or heater core, the quick
 // infrared check that separates a circulation problem from an air-side (radiator, fan) problem.
 import { CoolantInputError } from './errors.js';
-import { ENGINE_TEMPERATURE_DIFFERENCE, HEATPATH_WORKING_BAND, THERMOSTAT_OPENING } from './sources.js';
+import {
+  ENGINE_TEMPERATURE_DIFFERENCE,
+  HEATPATH_WORKING_BAND,
+  THERMOSTAT_OPENING,
+} from './sources.js';
 import type { SourceNote } from './sources.js';
 import { toCanonical } from './units.js';
 import type { QuantityInput } from './units.js';
@@ -11,10 +15,7 @@ import type { CoolantWarning } from './warnings.js';
 export type Circuit = 'radiator' | 'engine' | 'heater';
 
 export type TemperatureDropVerdict =
-  | 'normal'
-  | 'low-flow-suspected'
-  | 'air-side-suspected'
-  | 'implausible';
+  'normal' | 'low-flow-suspected' | 'air-side-suspected' | 'implausible';
 
 export interface AssessTemperatureDropOptions {
   readonly circuit: Circuit;
@@ -65,12 +66,6 @@ const RULE_TEXT: Record<Circuit, string> = {
     'No published figure for the heater core was found; Heatpath uses 3–15 K with the blower on full heat as a prompt to look further: a large drop suggests low flow or air in the heater loop, a very small one that air is not passing the core (blower, flap, blocked fins).',
 };
 
-const BAND_SOURCE: Record<Circuit, SourceNote> = {
-  engine: HEATPATH_WORKING_BAND,
-  radiator: HEATPATH_WORKING_BAND,
-  heater: HEATPATH_WORKING_BAND,
-};
-
 function readCircuit(value: unknown): Circuit {
   if (value === 'radiator' || value === 'engine' || value === 'heater') {
     return value;
@@ -79,7 +74,9 @@ function readCircuit(value: unknown): Circuit {
 }
 
 /** Verdict on the temperature difference across one part of the cooling system. */
-export function assessTemperatureDrop(options: AssessTemperatureDropOptions): TemperatureDropResult {
+export function assessTemperatureDrop(
+  options: AssessTemperatureDropOptions,
+): TemperatureDropResult {
   const circuit = readCircuit(options.circuit);
   const inlet = toCanonical(options.inletCelsius, 'temperature', 'inletCelsius');
   const outlet = toCanonical(options.outletCelsius, 'temperature', 'outletCelsius');
@@ -88,13 +85,16 @@ export function assessTemperatureDrop(options: AssessTemperatureDropOptions): Te
     text: RULE_TEXT[circuit],
     normalBandKelvin: band,
     source: circuit === 'heater' ? HEATPATH_WORKING_BAND : ENGINE_TEMPERATURE_DIFFERENCE,
-    bandSource: BAND_SOURCE[circuit],
+    bandSource: HEATPATH_WORKING_BAND,
   };
   const difference = circuit === 'engine' ? outlet - inlet : inlet - outlet;
   const warnings: CoolantWarning[] = [];
   if (circuit === 'heater') {
     warnings.push(
-      warning('no-published-band', 'The heater-core band is Heatpath’s own, not a published figure: use it as a prompt, not a finding.'),
+      warning(
+        'no-published-band',
+        'The heater-core band is Heatpath’s own, not a published figure: use it as a prompt, not a finding.',
+      ),
     );
   }
 
@@ -137,7 +137,7 @@ export function assessTemperatureDrop(options: AssessTemperatureDropOptions): Te
     explanation = `${difference.toFixed(1)} K is above the ${band.min}–${band.max} K band: the coolant is moving slowly enough to give up (or take up) much more heat than usual. Suspect circulation: pump or its shroud, thermostat, air lock, restriction.`;
   } else if (difference < band.min) {
     verdict = 'air-side-suspected';
-    explanation = `${difference.toFixed(1)} K is below the ${band.min}–${band.max} K band: the coolant circulates but little heat leaves it. Suspect the air side: fan, blocked fins, airflow.`;
+    explanation = `${difference.toFixed(1)} K is below the ${band.min}–${band.max} K band: the coolant circulates but little heat changes hands across this part. Suspect the air side: fan, blocked radiator fins, airflow.`;
   } else {
     verdict = 'normal';
     explanation = `${difference.toFixed(1)} K is within the ${band.min}–${band.max} K band.`;

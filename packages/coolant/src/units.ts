@@ -91,10 +91,16 @@ const PLAIN_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
  */
 function normaliseTyped(text: string, quantity: Quantity): string {
   let t = text.trim().replace(/[−–]/g, '-');
-  t = t.replace(/\s*(?:°|º|deg\s*)\s*([CFcf])\b/g, ' deg$1').replace(/℃/g, ' degC').replace(/℉/g, ' degF');
+  t = t
+    .replace(/\s*(?:°|º|deg\s*)\s*([CFcf])\b/g, ' deg$1')
+    .replace(/℃/g, ' degC')
+    .replace(/℉/g, ' degF');
   t = t.replace(/deg([cf])\b/g, (_m, c: string) => `deg${c.toUpperCase()}`);
   if (quantity === 'temperature' || quantity === 'temperatureDifference') {
-    t = t.replace(/^([-+]?[\d.eE+-]+)\s*([CF])$/i, (_m, n: string, c: string) => `${n} deg${c.toUpperCase()}`);
+    t = t.replace(
+      /^([-+]?[\d.eE+-]+)\s*([CF])$/i,
+      (_m, n: string, c: string) => `${n} deg${c.toUpperCase()}`,
+    );
   }
   if (quantity === 'pressure') {
     t = t.replace(/\b(psi|bar)\s*\(?g\)?$/i, (_m, u: string) => u.toLowerCase());
@@ -170,7 +176,10 @@ function checkPhysical(value: number, quantity: Quantity, field: string, shown: 
     case 'volumeFlow':
     case 'duration':
       if (value < 0) {
-        throw new CoolantInputError(field, `"${shown}" is negative; ${QUANTITY_WORDS[quantity]} cannot be.`);
+        throw new CoolantInputError(
+          field,
+          `"${shown}" is negative; ${QUANTITY_WORDS[quantity]} cannot be.`,
+        );
       }
       break;
     case 'percent':
@@ -191,7 +200,11 @@ function checkPhysical(value: number, quantity: Quantity, field: string, shown: 
  * physically impossible value (below absolute zero, below vacuum, negative volume, percent outside
  * 0–100).
  */
-export function toCanonical(value: QuantityInput, quantity: Quantity, field: string = quantity): number {
+export function toCanonical(
+  value: QuantityInput,
+  quantity: Quantity,
+  field: string = quantity,
+): number {
   if (typeof value === 'number') {
     return checkPhysical(value, quantity, field, String(value));
   }
@@ -203,7 +216,10 @@ export function toCanonical(value: QuantityInput, quantity: Quantity, field: str
     if (quantity === 'percent') {
       const bare = text.replace(/\s*%$/, '');
       if (!PLAIN_NUMBER.test(bare)) {
-        throw new CoolantInputError(field, `Could not read "${text}" as a percentage, for example "50 %".`);
+        throw new CoolantInputError(
+          field,
+          `Could not read "${text}" as a percentage, for example "50 %".`,
+        );
       }
       return checkPhysical(Number(bare), quantity, field, text);
     }
@@ -224,7 +240,11 @@ export function toCanonical(value: QuantityInput, quantity: Quantity, field: str
 }
 
 /** Converts a canonical value to one of the display units offered for its quantity. */
-export function fromCanonical<Q extends Quantity>(value: number, quantity: Q, unit: DisplayUnit<Q>): number {
+export function fromCanonical<Q extends Quantity>(
+  value: number,
+  quantity: Q,
+  unit: DisplayUnit<Q>,
+): number {
   const canonical = CANONICAL_UNITS[quantity];
   if (unit === canonical || quantity === 'percent') {
     return value;
@@ -252,6 +272,8 @@ export function formatQuantity<Q extends Quantity>(
   const digits = options.digits ?? 1;
   const shown = fromCanonical(value, quantity, unit);
   const symbol = DISPLAY_SYMBOLS[unit] ?? unit;
-  const number = Object.is(Number(shown.toFixed(digits)), -0) ? (0).toFixed(digits) : shown.toFixed(digits);
+  const number = Object.is(Number(shown.toFixed(digits)), -0)
+    ? (0).toFixed(digits)
+    : shown.toFixed(digits);
   return symbol === '%' ? `${number} %` : `${number} ${symbol}`;
 }

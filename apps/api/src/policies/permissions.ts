@@ -6,6 +6,15 @@ import { forbidden } from '../errors';
 export const permissions = {
   'staff.manage': ['lead'],
   'preferences.update': ['lead', 'technician', 'apprentice', 'advisor'],
+  // Live work: apprentices learn from the training casebook, never from live cases.
+  'vehicles.read': ['lead', 'technician', 'advisor'],
+  'vehicles.write': ['lead', 'technician', 'advisor'],
+  'cases.read': ['lead', 'technician', 'advisor'],
+  'cases.create': ['lead', 'technician', 'advisor'],
+  'cases.walk': ['lead', 'technician'],
+  'cases.assign': ['lead'],
+  'findings.edit': ['lead', 'technician'],
+  'trees.read': ['lead', 'technician', 'advisor'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

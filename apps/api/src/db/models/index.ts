@@ -1,13 +1,47 @@
 // Attaches every model to a Sequelize instance and declares their associations.
 import type { Sequelize } from 'sequelize';
+import { Attachment } from './attachment';
+import { CaseEvent } from './case-event';
+import { Customer } from './customer';
+import { DiagnosticCase } from './diagnostic-case';
+import { Finding } from './finding';
+import { Tree } from './tree';
+import { TreeVersion } from './tree-version';
 import { User } from './user';
+import { Vehicle } from './vehicle';
 import { Workshop } from './workshop';
 
-export { User, Workshop };
+export { Attachment, CaseEvent, Customer, DiagnosticCase, Finding, Tree, TreeVersion, User, Vehicle, Workshop };
 
 export function initModels(sequelize: Sequelize): void {
-  Workshop.initModel(sequelize);
-  User.initModel(sequelize);
+  for (const model of [Workshop, User, Customer, Vehicle, Tree, TreeVersion, DiagnosticCase, CaseEvent, Attachment, Finding]) {
+    model.initModel(sequelize);
+  }
+  const fk = (name: string) => ({ foreignKey: { name, allowNull: false } });
   Workshop.hasMany(User, { foreignKey: 'workshopId', as: 'users' });
   User.belongsTo(Workshop, { foreignKey: 'workshopId', as: 'workshop' });
+  Customer.belongsTo(Workshop, fk('workshopId'));
+  Vehicle.belongsTo(Workshop, fk('workshopId'));
+  Vehicle.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  Tree.belongsTo(Workshop, fk('workshopId'));
+  Tree.hasMany(TreeVersion, { foreignKey: 'treeId', as: 'versions' });
+  TreeVersion.belongsTo(Tree, { foreignKey: 'treeId', as: 'tree' });
+  TreeVersion.belongsTo(Workshop, fk('workshopId'));
+  TreeVersion.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  TreeVersion.belongsTo(User, { foreignKey: 'publishedBy', as: 'publisher' });
+  DiagnosticCase.belongsTo(Workshop, fk('workshopId'));
+  DiagnosticCase.belongsTo(Vehicle, { foreignKey: 'vehicleId', as: 'vehicle' });
+  DiagnosticCase.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  DiagnosticCase.belongsTo(TreeVersion, { foreignKey: 'treeVersionId', as: 'treeVersion' });
+  DiagnosticCase.belongsTo(User, { foreignKey: 'assignedTo', as: 'assignee' });
+  DiagnosticCase.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  CaseEvent.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  CaseEvent.belongsTo(Workshop, fk('workshopId'));
+  CaseEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  Attachment.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  Attachment.belongsTo(Workshop, fk('workshopId'));
+  Attachment.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader' });
+  Finding.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  Finding.belongsTo(Workshop, fk('workshopId'));
+  Finding.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor' });
 }

@@ -23,7 +23,7 @@ export function AddStaffForm() {
   const [added, setAdded] = useState<string | null>(null);
   const form = useForm({
     resolver: zodResolver(createStaffRequestSchema),
-    defaultValues: { name: '', email: '', role: 'technician', password: '' },
+    defaultValues: { name: '', email: '', role: 'technician' as const, password: '' },
   });
   const { errors } = form.formState;
 

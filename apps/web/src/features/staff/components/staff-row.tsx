@@ -53,10 +53,10 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
             {roleChanged ? (
               <>
                 <Button busy={update.isPending} busyLabel="Saving…" onClick={() => change({ role })}>
-                  Save role<span className="sr-only"> for {member.name}</span>
+                  {'Save role '}<span className="sr-only">for {member.name}</span>
                 </Button>
                 <Button variant="quiet" onClick={() => setRole(member.role)}>
-                  Undo<span className="sr-only"> role change for {member.name}</span>
+                  {'Undo '}<span className="sr-only">role change for {member.name}</span>
                 </Button>
               </>
             ) : null}
@@ -83,7 +83,7 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
                     busyLabel="Deactivating…"
                     onClick={() => change({ active: false })}
                   >
-                    Yes, deactivate<span className="sr-only"> {member.name}</span>
+                    {'Yes, deactivate '}<span className="sr-only">{member.name}</span>
                   </Button>
                   <Button variant="secondary" onClick={() => setConfirming(false)}>
                     Keep active
@@ -92,7 +92,7 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
               </div>
             ) : (
               <Button variant="secondary" onClick={() => setConfirming(true)}>
-                Deactivate<span className="sr-only"> {member.name}</span>
+                {'Deactivate '}<span className="sr-only">{member.name}</span>
               </Button>
             )
           ) : (
@@ -102,7 +102,7 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
               busyLabel="Reactivating…"
               onClick={() => change({ active: true })}
             >
-              Reactivate<span className="sr-only"> {member.name}</span>
+              {'Reactivate '}<span className="sr-only">{member.name}</span>
             </Button>
           )}
           {update.error ? (

@@ -1,0 +1,140 @@
+// Stores an uploaded photo or file for a case (or one of its steps). The content is sniffed,
+// never trusted from the name or the browser; bytes are stored first and the row written last,
+// and a failure removes what was stored, so no record ever points at a missing file.
+import { randomUUID } from 'node:crypto';
+import { fileTypeFromBuffer } from 'file-type';
+import sharp from 'sharp';
+import { Attachment, CaseEvent, DiagnosticCase } from '../../db/models/index';
+import { AppError } from '../../errors';
+import type { FileStore } from '../../lib/storage/file-store';
+import { assertCan } from '../../policies/permissions';
+import type { Actor } from '../../policies/permissions';
+import { findCase } from '../cases/find-case';
+
+export const attachmentLimits = {
+  maxBytes: 12 * 1024 * 1024,
+  maxPerCase: 60,
+} as const;
+
+const imageTypes = new Set(['image/jpeg', 'image/png', 'image/webp', 'image/heic', 'image/avif']);
+const documentTypes = new Set(['application/pdf']);
+const textExtensions = /\.(csv|txt|log|tsv)$/i;
+
+export interface UploadedFile {
+  originalName: string;
+  bytes: Buffer;
+}
+
+function isUtf8(bytes: Buffer): boolean {
+  try {
+    // stream: a multi-byte character cut at the end of the sample is not an error.
+    new TextDecoder('utf-8', { fatal: true }).decode(bytes, { stream: true });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+async function sniff(file: UploadedFile): Promise<{ mediaType: string; isImage: boolean }> {
+  const detected = await fileTypeFromBuffer(file.bytes);
+  if (detected) {
+    if (imageTypes.has(detected.mime)) return { mediaType: detected.mime, isImage: true };
+    if (documentTypes.has(detected.mime)) return { mediaType: detected.mime, isImage: false };
+    throw new AppError('unsupported_media_type', `Files of type ${detected.mime} cannot be attached. Attach a photo (JPEG, PNG, WebP, HEIC), a PDF, or a CSV or text log.`);
+  }
+  // No magic number: accept only genuine text (a data-logger export), judged by its content.
+  const sample = file.bytes.subarray(0, 64 * 1024);
+  const looksText = textExtensions.test(file.originalName) && !sample.includes(0) && isUtf8(sample);
+  if (looksText) return { mediaType: 'text/plain', isImage: false };
+  throw new AppError('unsupported_media_type', 'That file’s content is not a photo, PDF or text log, whatever its name says.');
+}
+
+export async function addAttachment(options: {
+  actor: Actor;
+  caseId: string;
+  nodeId: string | null;
+  photoOnly: boolean;
+  file: UploadedFile;
+  store: FileStore;
+}) {
+  const { actor, caseId, nodeId, file, store } = options;
+  assertCan(actor, 'cases.walk');
+  const kase = await findCase({ actor, caseId });
+  if (file.bytes.length === 0) throw new AppError('bad_request', 'The file is empty.');
+  if (file.bytes.length > attachmentLimits.maxBytes) {
+    throw new AppError('payload_too_large', `A file can be at most ${attachmentLimits.maxBytes / 1024 / 1024} MB.`);
+  }
+  const { mediaType, isImage } = await sniff(file);
+  if (options.photoOnly && !isImage) {
+    throw new AppError('unsupported_media_type', 'This step asks for a photo: attach a JPEG, PNG, WebP or HEIC image.');
+  }
+
+  const id = randomUUID();
+  const storageKey = `${actor.workshopId}/${kase.id}/${id}`;
+  let thumbnailKey: string | null = null;
+  let width: number | null = null;
+  let height: number | null = null;
+  const stored: string[] = [];
+  try {
+    await store.put(storageKey, file.bytes, mediaType);
+    stored.push(storageKey);
+    if (isImage && mediaType !== 'image/heic') {
+      const image = sharp(file.bytes, { failOn: 'error' }).rotate();
+      const meta = await image.metadata();
+      width = meta.autoOrient?.width ?? meta.width ?? null;
+      height = meta.autoOrient?.height ?? meta.height ?? null;
+      const thumb = await image.resize(360, 360, { fit: 'inside', withoutEnlargement: true }).webp({ quality: 72 }).toBuffer();
+      thumbnailKey = `${storageKey}.thumb.webp`;
+      await store.put(thumbnailKey, thumb, 'image/webp');
+      stored.push(thumbnailKey);
+    }
+    const sequelize = Attachment.sequelize;
+    if (!sequelize) throw new Error('Models are not initialised.');
+    return await sequelize.transaction(async (transaction) => {
+      const locked = await findCase({ actor, caseId, transaction, lock: true });
+      const count = await Attachment.count({ where: { caseId: locked.id }, transaction });
+      if (count >= attachmentLimits.maxPerCase) {
+        throw new AppError('payload_too_large', `A case can hold at most ${attachmentLimits.maxPerCase} files.`);
+      }
+      const attachment = await Attachment.create(
+        {
+          id,
+          caseId: locked.id,
+          workshopId: actor.workshopId,
+          nodeId,
+          kind: isImage ? 'photo' : mediaType === 'text/plain' ? 'log' : 'file',
+          storageKey,
+          thumbnailKey,
+          originalName: file.originalName.slice(0, 255),
+          mediaType,
+          byteSize: file.bytes.length,
+          width,
+          height,
+          uploadedBy: actor.userId,
+        },
+        { transaction },
+      );
+      await CaseEvent.create(
+        {
+          caseId: locked.id,
+          workshopId: actor.workshopId,
+          seq: locked.eventCount + 1,
+          kind: 'attachment',
+          nodeId,
+          payload: { attachmentId: attachment.id, name: attachment.originalName },
+          idempotencyKey: null,
+          actorId: actor.userId,
+        },
+        { transaction },
+      );
+      await DiagnosticCase.update({ eventCount: locked.eventCount + 1 }, { where: { id: locked.id }, transaction });
+      return attachment;
+    });
+  } catch (error) {
+    await Promise.all(stored.map((key) => store.remove(key).catch(() => undefined)));
+    if (error instanceof Error && /unsupported image format|Input buffer/i.test(error.message)) {
+      throw new AppError('unsupported_media_type', 'That image could not be read; it may be damaged.');
+    }
+    throw error;
+  }
+}

@@ -1,0 +1,61 @@
+// Every route of the web app. Routes are thin: a loader that guards and prefetches with the
+// feature's query options, and a page that composes feature components. The calculators load
+// lazily because they bring mathjs, the heaviest dependency, which most screens never need.
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, type RouteObject } from 'react-router';
+import type { AreaId } from './areas';
+import { ComingLaterArea, comingLaterLoader } from './routes/coming-later-area';
+import { HomeRoute } from './routes/home';
+import { SignInRoute, signInLoader } from './routes/sign-in';
+import { SignedInLayout, signedInLoader } from './routes/signed-in-layout';
+import { StaffRoute, staffLoader } from './routes/staff';
+import { AppErrorPage, NotFoundPage, RouteErrorPage, StartingUp } from './shell/error-pages';
+
+const comingLaterAreas: readonly AreaId[] = ['trees', 'cases', 'training', 'casebook', 'findings'];
+
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      id: 'root',
+      errorElement: <AppErrorPage />,
+      hydrateFallbackElement: <StartingUp />,
+      children: [
+        { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute },
+        {
+          id: 'signed-in',
+          loader: signedInLoader(queryClient),
+          Component: SignedInLayout,
+          children: [
+            {
+              // Pathless: errors below render inside the frame, so the navigation stays usable.
+              errorElement: <RouteErrorPage />,
+              children: [
+                { index: true, Component: HomeRoute },
+                { path: 'staff', loader: staffLoader(queryClient), Component: StaffRoute },
+                ...comingLaterAreas.map((areaId) => ({
+                  path: areaId,
+                  loader: comingLaterLoader(queryClient, areaId),
+                  element: <ComingLaterArea areaId={areaId} />,
+                })),
+                {
+                  path: 'calculators/*',
+                  lazy: async () => {
+                    const { calculatorsLoader, CalculatorsRoute } = await import(
+                      './routes/calculators'
+                    );
+                    return { loader: calculatorsLoader(queryClient), Component: CalculatorsRoute };
+                  },
+                },
+                { path: '*', Component: NotFoundPage },
+              ],
+            },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter(createRoutes(queryClient));
+}

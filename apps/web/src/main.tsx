@@ -1,0 +1,14 @@
+// Entry point: styles, then the app.
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { AppProvider } from './app/provider';
+import './styles/index.css';
+
+const root = document.getElementById('root');
+if (!root) throw new Error('index.html has no #root element');
+
+createRoot(root).render(
+  <StrictMode>
+    <AppProvider />
+  </StrictMode>,
+);

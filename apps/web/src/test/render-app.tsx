@@ -1,0 +1,18 @@
+// Renders the real route tree in memory, so tests walk the same loaders, guards and screens as
+// the browser does.
+import { QueryClientProvider } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import { createRoutes } from '../app/router';
+import { createQueryClient } from '../lib/query-client';
+
+export function renderApp(path: string) {
+  const queryClient = createQueryClient();
+  const router = createMemoryRouter(createRoutes(queryClient), { initialEntries: [path] });
+  const view = render(
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>,
+  );
+  return { ...view, router, queryClient };
+}

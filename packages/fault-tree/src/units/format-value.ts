@@ -1,0 +1,45 @@
+// Formats numbers and quantities for the sentences Heatpath shows: a few decimals at most, the
+// unit symbol after the number, and the canonical and entered units side by side where they differ.
+import { fromCanonical } from './convert-units.js';
+import type { Quantity, UnitCode } from './quantities.js';
+import { canonicalUnitOf, unitSymbol } from './quantities.js';
+
+/** Up to `decimals` decimals, no trailing zeros, never "-0". */
+export function formatNumber(value: number, decimals = 2): string {
+  if (!Number.isFinite(value)) {
+    return String(value);
+  }
+  const rounded = Number(value.toFixed(decimals));
+  return String(Object.is(rounded, -0) ? 0 : rounded);
+}
+
+/** "90 °C", "12.5 %", "3" (a plain number has no symbol). */
+export function formatWithUnit(value: number, unit: UnitCode): string {
+  const symbol = unitSymbol(unit);
+  if (symbol === '') {
+    return formatNumber(value);
+  }
+  return unit === '%' ? `${formatNumber(value)} %` : `${formatNumber(value)} ${symbol}`;
+}
+
+/** A canonical value shown in `unit` (defaults to the canonical unit). */
+export function formatCanonical(value: number, quantity: Quantity, unit?: UnitCode): string {
+  const shown = unit ?? canonicalUnitOf(quantity);
+  return formatWithUnit(fromCanonical(value, shown, quantity), shown);
+}
+
+/** "between 0 and 150 °C" or, when a person typed another unit, "between 32 and 302 °F (0 and 150 °C)". */
+export function formatRange(
+  range: { readonly min: number; readonly max: number },
+  quantity: Quantity,
+  enteredUnit?: UnitCode,
+): string {
+  const canonical = canonicalUnitOf(quantity);
+  const inCanonical = `${formatNumber(range.min)} and ${formatWithUnit(range.max, canonical)}`;
+  if (enteredUnit === undefined || enteredUnit === canonical) {
+    return `between ${inCanonical}`;
+  }
+  const min = fromCanonical(range.min, enteredUnit, quantity);
+  const max = fromCanonical(range.max, enteredUnit, quantity);
+  return `between ${formatNumber(min)} and ${formatWithUnit(max, enteredUnit)} (${inCanonical})`;
+}

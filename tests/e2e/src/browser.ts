@@ -1,0 +1,62 @@
+// Browser tests drive Debian's chromium through playwright-core against the real stack that
+// scripts/test.mjs started. Never downloads a browser.
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium } from 'playwright-core';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+
+export const baseUrl = process.env.E2E_BASE_URL ?? 'http://127.0.0.1:3000';
+const artifacts = process.env.E2E_ARTIFACTS ?? join(process.cwd(), 'test-results', 'screenshots');
+
+export const demoPassword = 'heatpath-demo';
+
+export interface BrowserSession {
+  browser: Browser;
+  close: () => Promise<void>;
+  newPage: (viewport?: { width: number; height: number }) => Promise<{ page: Page; context: BrowserContext }>;
+}
+
+export async function launch(): Promise<BrowserSession> {
+  const userDataDir = mkdtempSync(join(tmpdir(), 'heatpath-chromium-'));
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      `--user-data-dir=${userDataDir}`,
+    ],
+  });
+  return {
+    browser,
+    async newPage(viewport = { width: 1024, height: 768 }) {
+      const context = await browser.newContext({ viewport, baseURL: baseUrl });
+      const page = await context.newPage();
+      return { page, context };
+    },
+    async close() {
+      await browser.close();
+      rmSync(userDataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function screenshot(page: Page, name: string): Promise<string> {
+  mkdirSync(artifacts, { recursive: true });
+  const path = join(artifacts, `${name}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}
+
+export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
