@@ -30,6 +30,16 @@ const routes: RouteCase[] = [
     ok: 201,
   },
   { method: 'patch', path: (w) => `/api/staff/${w.people.advisor.id}`, body: () => ({ name: 'Renamed' }), allowed: ['lead'], ok: 200 },
+  { method: 'get', path: () => '/api/vehicles?q=ZZ', allowed: ['lead', 'technician', 'advisor'], ok: 200 },
+  {
+    method: 'post',
+    path: () => '/api/vehicles',
+    body: () => ({ plate: `M${Math.random().toString(36).slice(2, 8)}`, make: 'Brisa', model: 'Orlo' }),
+    allowed: ['lead', 'technician', 'advisor'],
+    ok: 201,
+  },
+  { method: 'get', path: () => '/api/customers?q=Zz', allowed: ['lead', 'technician', 'advisor'], ok: 200 },
+  { method: 'post', path: () => '/api/customers', body: () => ({ name: 'Matrix Customer' }), allowed: ['lead', 'technician', 'advisor'], ok: 201 },
 ];
 
 const label = (r: RouteCase) =>
