@@ -11,6 +11,9 @@ export default defineConfig({
     // The initial page and the calculator chunk are measured in gzip in docs/design.md; keep the
     // report so a regression in weight is visible in every build log.
     reportCompressedSize: true,
+    // The entry chunk is ~520 KB raw / ~160 KB gzip by design (React, Router, Query, zod); what
+    // matters is gzip and keeping mathjs out of it, both tracked in docs/design.md.
+    chunkSizeWarningLimit: 600,
   },
   server: {
     // In development the API runs as its own process; the browser still sees one origin, so the

@@ -19,15 +19,21 @@ import { meRouter } from './routes/me/me.router';
 import { staffRouter } from './routes/staff/staff.router';
 import { customersRouter } from './routes/customers/customers.router';
 import { vehiclesRouter } from './routes/vehicles/vehicles.router';
+import { casesRouter } from './routes/cases/cases.router';
+import { treesRouter } from './routes/trees/trees.router';
+import { createDiskFileStore } from './lib/storage/disk-file-store';
+import type { FileStore } from './lib/storage/file-store';
 
 export interface AppDeps {
   config: Config;
   sequelize: Sequelize;
   logger: Logger;
+  store?: FileStore;
 }
 
 export function createApp(deps: AppDeps): express.Express {
   const { config, sequelize, logger } = deps;
+  const store = deps.store ?? createDiskFileStore(config.uploadDir);
   const signer = createSessionSigner(config.sessionSecret, config.sessionTtlHours);
   const app = express();
   app.disable('x-powered-by');
@@ -62,6 +68,8 @@ export function createApp(deps: AppDeps): express.Express {
   api.use('/staff', staffRouter());
   api.use('/vehicles', vehiclesRouter());
   api.use('/customers', customersRouter());
+  api.use('/trees', treesRouter());
+  api.use('/cases', casesRouter({ store }));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -4,3 +4,4 @@ export * from './vin';
 export * from './vehicles';
 export * from './cases';
 export * from './findings';
+export * from './case-detail';

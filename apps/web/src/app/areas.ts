@@ -4,14 +4,7 @@
 import type { Role } from '@heatpath/contracts';
 
 export type AreaId =
-  | 'home'
-  | 'staff'
-  | 'trees'
-  | 'cases'
-  | 'training'
-  | 'casebook'
-  | 'findings'
-  | 'calculators';
+  'home' | 'staff' | 'trees' | 'cases' | 'training' | 'casebook' | 'findings' | 'calculators';
 
 export interface Area {
   id: AreaId;

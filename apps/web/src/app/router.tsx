@@ -11,6 +11,9 @@ import { SignedInLayout, signedInLoader } from './routes/signed-in-layout';
 import { StaffRoute, staffLoader } from './routes/staff';
 import { AppErrorPage, NotFoundPage, RouteErrorPage, StartingUp } from './shell/error-pages';
 
+// One module for every calculator route, so they share one lazily loaded chunk.
+const calculatorsModule = () => import('./routes/calculators');
+
 const comingLaterAreas: readonly AreaId[] = ['trees', 'cases', 'training', 'casebook', 'findings'];
 
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
@@ -38,13 +41,29 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   element: <ComingLaterArea areaId={areaId} />,
                 })),
                 {
-                  path: 'calculators/*',
+                  path: 'calculators',
                   lazy: async () => {
-                    const { calculatorsLoader, CalculatorsRoute } = await import(
-                      './routes/calculators'
-                    );
-                    return { loader: calculatorsLoader(queryClient), Component: CalculatorsRoute };
+                    const route = await calculatorsModule();
+                    return {
+                      loader: route.calculatorsLoader(queryClient),
+                      Component: route.CalculatorsLayout,
+                    };
                   },
+                  children: [
+                    {
+                      index: true,
+                      lazy: async () => ({
+                        Component: (await calculatorsModule()).CalculatorsIndexRoute,
+                      }),
+                    },
+                    {
+                      path: ':calculatorId',
+                      lazy: async () => {
+                        const route = await calculatorsModule();
+                        return { loader: route.calculatorLoader, Component: route.CalculatorRoute };
+                      },
+                    },
+                  ],
                 },
                 { path: '*', Component: NotFoundPage },
               ],

@@ -36,7 +36,9 @@ describe('apiRequest', () => {
   });
 
   it('sends the client header but no content type on a bodiless POST', async () => {
-    const { requests } = mockApi({ 'POST /api/auth/sign-out': () => new Response(null, { status: 204 }) });
+    const { requests } = mockApi({
+      'POST /api/auth/sign-out': () => new Response(null, { status: 204 }),
+    });
     await apiRequestNoContent('/api/auth/sign-out', { method: 'POST' });
     expect(requests[0]?.headers['x-heatpath-client']).toBe('web');
     expect(requests[0]?.headers['content-type']).toBeUndefined();
@@ -65,7 +67,10 @@ describe('apiRequest', () => {
   });
 
   it('reports a dropped connection as a network problem', async () => {
-    vi.stubGlobal('fetch', vi.fn(() => Promise.reject(new TypeError('Failed to fetch'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(() => Promise.reject(new TypeError('Failed to fetch'))),
+    );
     const error = await caught(apiRequest('/api/me', meSchema));
     expect(error.code).toBe('network');
     expect(error.message).toMatch(/cannot reach the server/);

@@ -48,9 +48,12 @@ export function mockApi(handlers: Record<string, Handler>) {
       handlers[`${method} ${url.pathname}`] ??
       Object.entries(handlers).find(([key]) => {
         const [m, pattern] = key.split(' ');
-        return m === method && pattern?.endsWith('*') && url.pathname.startsWith(pattern.slice(0, -1));
+        return (
+          m === method && pattern?.endsWith('*') && url.pathname.startsWith(pattern.slice(0, -1))
+        );
       })?.[1];
-    if (!handler) return errorResponse(404, 'not_found', `No test handler for ${method} ${url.pathname}`);
+    if (!handler)
+      return errorResponse(404, 'not_found', `No test handler for ${method} ${url.pathname}`);
     return handler(request);
   });
   vi.stubGlobal('fetch', fetchMock);

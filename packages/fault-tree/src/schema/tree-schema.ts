@@ -77,6 +77,7 @@ const stepFields = {
   hazards: z.array(hazardKindSchema).default([]),
   cautions: z.array(cautionSchema).default([]),
   evidence: z.array(evidenceRequestSchema).default([]),
+  tools: z.array(text(200)).default([]),
   estimatedMinutes: z.number().min(0).max(1440).optional(),
 };
 
@@ -113,7 +114,6 @@ export const measurementNodeSchema = z.strictObject({
   kind: z.literal('measurement'),
   ...stepFields,
   prompt: text(2000),
-  tools: z.array(text(200)).default([]),
   inputs: z.array(measurementInputSchema).default([]),
   branches: z.array(branchSchema).default([]),
   fallback: fallbackSchema.optional(),
@@ -124,7 +124,6 @@ export const procedureNodeSchema = z.strictObject({
   kind: z.literal('procedure'),
   ...stepFields,
   instruction: text(4000),
-  tools: z.array(text(200)).default([]),
   estimatedMinutes: z.number().min(0).max(1440),
   done: nodeRefSchema.optional(),
   couldNotDo: nodeRefSchema.optional(),

@@ -14,12 +14,17 @@ function ownInputs(node: TreeNode | undefined): string[] {
   return node?.kind === 'measurement' ? node.inputs.map((input) => input.name) : [];
 }
 
-/** For each reachable node, the readings taken on every way to it (not counting its own). */
+/**
+ * For each reachable node, which of the `tracked` readings are taken on every way to it (not
+ * counting its own). Only readings some condition uses elsewhere are tracked, which keeps this
+ * quick on large trees.
+ */
 export function availableReadings(
   start: string,
   nodes: ReadonlyMap<string, TreeNode>,
   adjacency: Adjacency,
   reachable: ReadonlySet<string>,
+  tracked: ReadonlySet<string>,
 ): Map<string, ReadonlySet<string>> {
   const available = new Map<string, Set<string>>();
   available.set(start, new Set());
@@ -27,7 +32,7 @@ export function availableReadings(
   for (const id of order) {
     const here = available.get(id);
     if (here === undefined) continue;
-    const leaving = new Set([...here, ...ownInputs(nodes.get(id))]);
+    const leaving = new Set([...here, ...ownInputs(nodes.get(id)).filter((name) => tracked.has(name))]);
     for (const next of adjacency.get(id) ?? []) {
       const existing = available.get(next);
       if (existing === undefined) {
@@ -50,16 +55,28 @@ export function checkAvailability(
   model: FormulaModel,
 ): TreeProblem[] {
   const problems: TreeProblem[] = [];
-  const available = availableReadings(start, nodes, adjacency, reachable);
+  // Readings each condition uses from outside its own step.
+  const foreign = new Map<string, string[][]>();
+  const tracked = new Set<string>();
   for (const [id, formulas] of model.branches) {
+    const own = new Set(ownInputs(nodes.get(id)));
+    const perBranch = formulas.map((formula) =>
+      formula === undefined ? [] : baseInputsOf(formula, model).filter((name) => !own.has(name)),
+    );
+    perBranch.flat().forEach((name) => tracked.add(name));
+    foreign.set(id, perBranch);
+  }
+  if (tracked.size === 0) {
+    return problems;
+  }
+  const available = availableReadings(start, nodes, adjacency, reachable, tracked);
+  for (const [id, perBranch] of foreign) {
     const node = nodes.get(id);
     const before = available.get(id);
     if (node?.kind !== 'measurement' || before === undefined) continue;
-    const usable = new Set([...before, ...ownInputs(node)]);
-    formulas.forEach((formula, index) => {
-      if (formula === undefined) return;
-      for (const name of baseInputsOf(formula, model)) {
-        if (usable.has(name)) continue;
+    perBranch.forEach((names, index) => {
+      for (const name of names) {
+        if (before.has(name)) continue;
         const entry = model.inputs.get(name);
         const where = entry ? ` (read in ${nodeName(entry.nodeId, nodes.get(entry.nodeId))})` : '';
         problems.push(

@@ -92,19 +92,6 @@ export function adjacencyOf(edges: readonly TreeEdge[], known: ReadonlySet<strin
   return adjacency;
 }
 
-export function predecessorsOf(adjacency: Adjacency): Map<string, string[]> {
-  const predecessors = new Map<string, string[]>();
-  for (const id of adjacency.keys()) {
-    predecessors.set(id, []);
-  }
-  for (const [from, tos] of adjacency) {
-    for (const to of tos) {
-      predecessors.get(to)?.push(from);
-    }
-  }
-  return predecessors;
-}
-
 export function reachableFrom(start: string, adjacency: Adjacency): Set<string> {
   const seen = new Set<string>();
   if (!adjacency.has(start)) {

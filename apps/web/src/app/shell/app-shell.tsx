@@ -82,13 +82,13 @@ export function AppShell({ children }: { children: ReactNode }) {
         </main>
       </div>
 
-      <div className="fixed inset-x-0 bottom-0 z-40 flex h-18 items-center justify-end gap-3 border-t-2 border-line-strong bg-surface px-4 md:hidden">
+      <div className="fixed inset-x-0 bottom-0 z-40 flex h-18 items-center gap-3 border-t-2 border-line-strong bg-surface px-4 md:hidden">
         <Button
           variant={menuOpen ? 'primary' : 'secondary'}
           aria-expanded={menuOpen}
           aria-controls="app-menu"
           onClick={() => setMenuOpen((open) => !open)}
-          className="min-w-32"
+          className="w-full"
         >
           {menuOpen ? 'Close menu' : 'Menu'}
         </Button>

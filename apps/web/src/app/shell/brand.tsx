@@ -17,7 +17,14 @@ export function Brand() {
           strokeLinecap="round"
           className="stroke-on-primary"
         />
-        <path d="M19 20l4 2 1-4.5" fill="none" strokeWidth="3" strokeLinecap="round" strokeLinejoin="round" className="stroke-on-primary" />
+        <path
+          d="M19 20l4 2 1-4.5"
+          fill="none"
+          strokeWidth="3"
+          strokeLinecap="round"
+          strokeLinejoin="round"
+          className="stroke-on-primary"
+        />
       </svg>
       <span>Heatpath</span>
     </Link>

@@ -45,7 +45,11 @@ function describe(error: unknown): { title: string; message: string; canRetry: b
         canRetry: false,
       };
     }
-    return { title: 'Screen not shown', message: 'This screen could not be shown.', canRetry: true };
+    return {
+      title: 'Screen not shown',
+      message: 'This screen could not be shown.',
+      canRetry: true,
+    };
   }
   if (isApiError(error)) {
     return { title: 'Screen not loaded', message: error.message, canRetry: true };
@@ -68,9 +72,7 @@ export function RouteErrorPage() {
   return (
     <div className="flex flex-col gap-6">
       <h1 className="text-2xl font-bold">{title}</h1>
-      <Alert tone="danger" role="alert" title={title}>
-        <p>{message}</p>
-      </Alert>
+      <Alert tone="danger" role="alert" title={message} />
       <div className="flex flex-wrap gap-3">
         {canRetry ? (
           <Button

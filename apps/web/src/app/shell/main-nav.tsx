@@ -17,7 +17,7 @@ export function MainNav({ role }: { role: Role }) {
                 'flex min-h-touch items-center justify-between gap-2 rounded-control border-l-[6px] px-3 ' +
                 (isActive
                   ? 'border-primary bg-sunken font-bold text-ink'
-                  : 'border-transparent font-medium text-ink hover:bg-sunken')
+                  : 'border-transparent font-normal text-ink hover:bg-sunken')
               }
             >
               <span>{areaLabel(area, role)}</span>

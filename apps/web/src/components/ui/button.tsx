@@ -12,7 +12,8 @@ const base =
   'text-center leading-tight';
 
 const variants: Record<ButtonVariant, string> = {
-  primary: 'bg-primary border-primary text-on-primary hover:bg-primary-hover hover:border-primary-hover',
+  primary:
+    'bg-primary border-primary text-on-primary hover:bg-primary-hover hover:border-primary-hover',
   secondary: 'bg-surface border-line-strong text-ink hover:bg-sunken',
   danger: 'bg-surface border-danger-line text-danger-ink hover:bg-danger-bg',
   quiet: 'bg-transparent border-transparent text-ink underline underline-offset-4 hover:bg-sunken',

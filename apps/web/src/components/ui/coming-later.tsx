@@ -16,9 +16,7 @@ export function ComingLater({ capability, children }: ComingLaterProps) {
         <Badge tone="later">Coming with {capability}</Badge>
       </div>
       {children ? <div className="flex flex-col gap-2 text-ink-muted">{children}</div> : null}
-      <p className="text-sm text-ink-muted">
-        Not built yet, so there is nothing to press here.
-      </p>
+      <p className="text-sm text-ink-muted">Not built yet, so there is nothing to press here.</p>
     </div>
   );
 }

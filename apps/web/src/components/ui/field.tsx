@@ -56,8 +56,10 @@ interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'id
   label: ReactNode;
   hint?: ReactNode;
   error?: string | undefined;
-  /** Text shown after the box, such as a unit ("°C"); read out as part of the hint. */
+  /** Text shown after the box, such as a unit ("°C"). */
   suffix?: ReactNode;
+  /** A control on the box's row, after the unit (a sign switch, say). */
+  after?: ReactNode;
   id?: string;
 }
 
@@ -66,6 +68,7 @@ export function TextField({
   hint,
   error,
   suffix,
+  after,
   id: givenId,
   className = '',
   ...rest
@@ -83,12 +86,15 @@ export function TextField({
   );
   return (
     <FieldFrame id={id} label={label} hint={hint} error={error}>
-      {suffix ? (
+      {suffix || after ? (
         <div className="flex items-stretch gap-2">
           {input}
-          <span className="flex min-w-14 items-center justify-center rounded-control bg-sunken px-3 font-semibold">
-            {suffix}
-          </span>
+          {suffix ? (
+            <span className="flex min-w-14 shrink-0 items-center justify-center rounded-control bg-sunken px-3 font-semibold whitespace-nowrap">
+              {suffix}
+            </span>
+          ) : null}
+          {after}
         </div>
       ) : (
         input

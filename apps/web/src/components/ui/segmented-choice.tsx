@@ -45,7 +45,9 @@ export function SegmentedChoice<V extends string>({
                 value={choice.value}
                 checked={checked}
                 onChange={() => onChange(choice.value)}
-                className="sr-only"
+                // Transparent but covering the whole segment, so a tap (or a test's click)
+                // anywhere on it lands on the real radio input.
+                className="absolute inset-0 m-0 cursor-pointer opacity-0"
               />
               {checked ? (
                 <span aria-hidden="true" className="mr-1.5">

@@ -43,7 +43,9 @@ export function TableRow({ children, muted = false }: { children: ReactNode; mut
     <tr
       role="row"
       className={
-        'flex flex-col gap-3 rounded-panel border-2 border-line p-4 lg:table-row lg:rounded-none ' +
+        // Phone: a stacked card. Portrait tablet: a two-column card. Landscape: a table row.
+        'flex flex-col gap-3 rounded-panel border-2 border-line p-4 md:grid md:grid-cols-2 ' +
+        'md:gap-x-6 lg:table-row lg:rounded-none ' +
         'lg:border-0 lg:border-b lg:p-0 ' +
         (muted ? 'bg-sunken' : 'bg-surface')
       }
@@ -57,10 +59,12 @@ interface TableCellProps {
   /** Shown before the value in the stacked phone layout, where the column header is hidden. */
   label?: string;
   header?: boolean;
+  /** Extra classes, e.g. a column width for the wide layout. */
+  className?: string;
   children: ReactNode;
 }
 
-export function TableCell({ label, header = false, children }: TableCellProps) {
+export function TableCell({ label, header = false, className = '', children }: TableCellProps) {
   const content = (
     <>
       {label ? (
@@ -71,7 +75,7 @@ export function TableCell({ label, header = false, children }: TableCellProps) {
       {children}
     </>
   );
-  const classes = 'block align-middle lg:table-cell lg:px-3 lg:py-3';
+  const classes = `block align-middle lg:table-cell lg:px-3 lg:py-3 ${className}`;
   return header ? (
     <th role="rowheader" scope="row" className={`${classes} text-left font-normal`}>
       {content}

@@ -63,7 +63,10 @@ describe('SignInForm', () => {
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
     await waitFor(() => expect(onSignedIn).toHaveBeenCalled());
-    expect(requests[0]?.body).toEqual({ email: 'tech@harbourlane.test', password: 'heatpath-demo' });
+    expect(requests[0]?.body).toEqual({
+      email: 'tech@harbourlane.test',
+      password: 'heatpath-demo',
+    });
     expect(queryClient.getQueryData(meQueryKey)).toEqual(me);
   });
 });

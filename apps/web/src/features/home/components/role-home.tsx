@@ -44,8 +44,8 @@ export function RoleHome({ me, areas }: { me: Me; areas: readonly HomeArea[] }) 
       {showsCoolingCaution.includes(me.role) ? (
         <SafetyNote>
           <p>
-            Never open a hot cooling system: it is under pressure and the coolant can scald. Let
-            it cool before you open the cap, and keep clear of the fan — it can start on its own.
+            Never open a hot cooling system: it is under pressure and the coolant can scald. Let it
+            cool before you open the cap, and keep clear of the fan — it can start on its own.
           </p>
         </SafetyNote>
       ) : null}
@@ -54,7 +54,7 @@ export function RoleHome({ me, areas }: { me: Me; areas: readonly HomeArea[] }) 
         <h2 id="ready-heading" className="text-xl font-bold">
           Ready to use
         </h2>
-        <ul className="grid gap-3 md:grid-cols-2">
+        <ul className="grid gap-3 lg:grid-cols-2">
           {ready.map((area) => (
             <li key={area.id}>
               <Link
@@ -77,7 +77,7 @@ export function RoleHome({ me, areas }: { me: Me; areas: readonly HomeArea[] }) 
           <h2 id="later-heading" className="text-xl font-bold">
             Coming later
           </h2>
-          <ul className="grid gap-3 md:grid-cols-2">
+          <ul className="grid gap-3 lg:grid-cols-2">
             {later.map((area) => (
               <li
                 key={area.id}

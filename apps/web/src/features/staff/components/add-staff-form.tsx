@@ -64,7 +64,7 @@ export function AddStaffForm() {
           <p>{added}</p>
         </Alert>
       ) : null}
-      <div className="grid gap-5 md:grid-cols-2">
+      <div className="grid gap-5 lg:grid-cols-2">
         <TextField
           label="Name"
           autoComplete="off"

@@ -1,12 +1,7 @@
 // The lead's staff screen body: who works here, and a form to add someone.
 import { Panel } from '../../../components/ui/page';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
-import {
-  Table,
-  TableBody,
-  TableHead,
-  TableHeaderCell,
-} from '../../../components/ui/table';
+import { Table, TableBody, TableHead, TableHeaderCell } from '../../../components/ui/table';
 import { useMe } from '../../../lib/auth';
 import { useStaff } from '../api/get-staff';
 import { AddStaffForm } from './add-staff-form';

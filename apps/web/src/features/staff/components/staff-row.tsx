@@ -26,12 +26,14 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
 
   return (
     <TableRow muted={!member.active}>
-      <TableCell header>
+      <TableCell header className="md:col-span-2 lg:w-[36%]">
         <span className="block font-semibold">
           {member.name}
           {isSelf ? <span className="font-normal text-ink-muted"> (you)</span> : null}
         </span>
-        <span className="block break-all text-sm text-ink-muted">{member.email}</span>
+        <span className="block text-sm text-ink-muted [overflow-wrap:anywhere]">
+          {member.email}
+        </span>
       </TableCell>
       <TableCell label="Role">
         {isSelf || !member.active ? (
@@ -52,11 +54,17 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
             </select>
             {roleChanged ? (
               <>
-                <Button busy={update.isPending} busyLabel="Saving…" onClick={() => change({ role })}>
-                  {'Save role '}<span className="sr-only">for {member.name}</span>
+                <Button
+                  busy={update.isPending}
+                  busyLabel="Saving…"
+                  onClick={() => change({ role })}
+                >
+                  {'Save role '}
+                  <span className="sr-only">for {member.name}</span>
                 </Button>
                 <Button variant="quiet" onClick={() => setRole(member.role)}>
-                  {'Undo '}<span className="sr-only">role change for {member.name}</span>
+                  {'Undo '}
+                  <span className="sr-only">role change for {member.name}</span>
                 </Button>
               </>
             ) : null}
@@ -66,13 +74,17 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
       <TableCell label="Status">
         {member.active ? <Badge tone="ok">Active</Badge> : <Badge>Deactivated</Badge>}
       </TableCell>
-      <TableCell label="Access">
+      <TableCell label="Access" className="md:col-span-2">
         <div className="flex flex-col gap-3">
           {isSelf ? (
             <span className="text-sm text-ink-muted">Another lead can change your access.</span>
           ) : member.active ? (
             confirming ? (
-              <div className="flex flex-col gap-2" role="group" aria-label={`Confirm deactivating ${member.name}`}>
+              <div
+                className="flex flex-col gap-2"
+                role="group"
+                aria-label={`Confirm deactivating ${member.name}`}
+              >
                 <p className="text-sm">
                   {member.name} will not be able to sign in. Their past work stays in Heatpath.
                 </p>
@@ -83,7 +95,8 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
                     busyLabel="Deactivating…"
                     onClick={() => change({ active: false })}
                   >
-                    {'Yes, deactivate '}<span className="sr-only">{member.name}</span>
+                    {'Yes, deactivate '}
+                    <span className="sr-only">{member.name}</span>
                   </Button>
                   <Button variant="secondary" onClick={() => setConfirming(false)}>
                     Keep active
@@ -92,7 +105,8 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
               </div>
             ) : (
               <Button variant="secondary" onClick={() => setConfirming(true)}>
-                {'Deactivate '}<span className="sr-only">{member.name}</span>
+                {'Deactivate '}
+                <span className="sr-only">{member.name}</span>
               </Button>
             )
           ) : (
@@ -102,7 +116,8 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
               busyLabel="Reactivating…"
               onClick={() => change({ active: true })}
             >
-              {'Reactivate '}<span className="sr-only">{member.name}</span>
+              {'Reactivate '}
+              <span className="sr-only">{member.name}</span>
             </Button>
           )}
           {update.error ? (

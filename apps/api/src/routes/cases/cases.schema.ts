@@ -1,0 +1,23 @@
+// Request shapes for /api/cases.
+import { z } from 'zod';
+
+export {
+  addNoteRequestSchema,
+  caseListQuerySchema,
+  createCaseRequestSchema,
+  updateFindingsRequestSchema,
+  walkEventRequestSchema,
+} from '@heatpath/contracts';
+
+export const caseParamsSchema = z.object({
+  caseId: z.uuid({ error: 'That is not a valid case id.' }),
+});
+
+export const attachmentParamsSchema = caseParamsSchema.extend({
+  attachmentId: z.uuid({ error: 'That is not a valid attachment id.' }),
+});
+
+export const attachmentFieldsSchema = z.object({
+  nodeId: z.string().max(80).optional(),
+  photoOnly: z.enum(['true', 'false']).optional(),
+});

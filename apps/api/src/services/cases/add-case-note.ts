@@ -1,0 +1,33 @@
+// A free note on a case or one of its steps, kept in the case's history with who and when.
+import type { AddNoteRequest } from '@heatpath/contracts';
+import { CaseEvent } from '../../db/models/index';
+import { assertCan } from '../../policies/permissions';
+import type { Actor } from '../../policies/permissions';
+import { findCase } from './find-case';
+
+export async function addCaseNote(options: { actor: Actor; caseId: string; input: AddNoteRequest }) {
+  const { actor, caseId, input } = options;
+  assertCan(actor, 'cases.walk');
+  const sequelize = CaseEvent.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised.');
+  return sequelize.transaction(async (transaction) => {
+    const kase = await findCase({ actor, caseId, transaction, lock: true });
+    const earlier = await CaseEvent.findOne({ where: { caseId: kase.id, idempotencyKey: input.idempotencyKey }, transaction });
+    if (earlier) return earlier;
+    const note = await CaseEvent.create(
+      {
+        caseId: kase.id,
+        workshopId: actor.workshopId,
+        seq: kase.eventCount + 1,
+        kind: 'note',
+        nodeId: input.nodeId ?? null,
+        payload: { text: input.text },
+        idempotencyKey: input.idempotencyKey,
+        actorId: actor.userId,
+      },
+      { transaction },
+    );
+    await kase.update({ eventCount: kase.eventCount + 1 }, { transaction });
+    return note;
+  });
+}

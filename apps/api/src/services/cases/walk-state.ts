@@ -1,0 +1,32 @@
+// A case's walk, rebuilt from its stored events on its pinned tree version. Never kept in memory
+// between requests: every process answers from the database.
+import type { Transaction } from 'sequelize';
+import { Op } from 'sequelize';
+import { summariseWalk } from '@heatpath/fault-tree';
+import type { WalkSummary } from '@heatpath/fault-tree';
+import { CaseEvent } from '../../db/models/index';
+import type { DiagnosticCase } from '../../db/models/index';
+import { compiledTreeOf } from '../../lib/compiled-trees';
+
+/** The start node of a definition as stored (used before any event exists). */
+export function startNodeOf(definition: unknown): string | null {
+  const start = (definition as { start?: unknown } | null)?.start;
+  return typeof start === 'string' ? start : null;
+}
+
+/** The walk events of a case in order, as the fault-tree package replays them. */
+export async function walkEventsOf(caseId: string, transaction?: Transaction): Promise<unknown[]> {
+  const rows = await CaseEvent.findAll({
+    where: { caseId, kind: { [Op.in]: ['answer', 'back'] } },
+    order: [['seq', 'ASC']],
+    attributes: ['payload'],
+    transaction,
+  });
+  return rows.map((row) => row.payload.event);
+}
+
+export async function walkOf(kase: DiagnosticCase, transaction?: Transaction): Promise<WalkSummary> {
+  if (!kase.treeVersion) throw new Error('walkOf needs the tree version loaded.');
+  const tree = compiledTreeOf(kase.treeVersion);
+  return summariseWalk(tree, await walkEventsOf(kase.id, transaction));
+}
