@@ -24,7 +24,8 @@ export default tseslint.config(
       '@typescript-eslint/consistent-type-imports': 'error',
       'check-file/filename-naming-convention': [
         'error',
-        { '**/*.{ts,tsx,js,mjs}': 'KEBAB_CASE' },
+        // Migrations start with their sequence number, e.g. 0002-cases.ts.
+        { '**/!(migrations)/*.{ts,tsx,js,mjs}': 'KEBAB_CASE', '**/migrations/[0-9]*.ts': '+([0-9])-+([a-z0-9-])', '**/migrations/index.ts': 'KEBAB_CASE' },
         { ignoreMiddleExtensions: true },
       ],
       'check-file/folder-naming-convention': [

@@ -87,7 +87,7 @@ async function main() {
 // Warnings and errors always reach the terminal; everything else only when HEATPATH_VERBOSE=true.
 function showLogLine(line) {
   if (!line.trim()) return;
-  let level = 30;
+  let level;
   try {
     level = JSON.parse(line).level ?? 30;
   } catch {

@@ -176,7 +176,8 @@ class FormulaChecker {
 
   constant(value: unknown): Checked {
     if (typeof value === 'number' && Number.isFinite(value)) {
-      this.constants.push(value);
+      // The sign of "-40" is a separate operator, so keep both signs as points of interest.
+      this.constants.push(value, -value);
       return { dimension: FREE, run: () => value };
     }
     if (typeof value === 'boolean') {

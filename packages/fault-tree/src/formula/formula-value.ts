@@ -1,5 +1,5 @@
 // What evaluating a checked formula produces, and the tolerant comparisons it uses. Comparisons
-// follow mathjs's default relative tolerance so that a computed 95.1 − 85.1 meets `>= 10`.
+// follow mathjs's default relative tolerance so that a computed 100.7 − 90.4 meets `>= 10.3`.
 
 export type FormulaValue = number | boolean;
 export type FormulaScope = Readonly<Record<string, number>>;
