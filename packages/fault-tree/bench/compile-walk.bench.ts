@@ -40,7 +40,10 @@ const kinds = Object.values(definition.nodes).reduce<Record<string, number>>((ac
 }, {});
 const formulaCount =
   definition.computed.length +
-  Object.values(definition.nodes).reduce((n, node) => n + (node.kind === 'measurement' ? node.branches.length : 0), 0);
+  Object.values(definition.nodes).reduce(
+    (n, node) => n + (node.kind === 'measurement' ? node.branches.length : 0),
+    0,
+  );
 console.log(`Tree: ${NODE_COUNT} nodes ${JSON.stringify(kinds)}, ${formulaCount} formulas`);
 
 // First compile in a fresh process: includes JIT warm-up of zod, mathjs's parser and XState.
@@ -79,7 +82,8 @@ for (let run = 0; run < COMPILE_RUNS; run += 1) {
   validateTree(definition);
   validateTimes.push(performance.now() - started);
 }
-for (const list of [compileTimes, machineTimes, totalTimes, validateTimes]) list.sort((a, b) => a - b);
+for (const list of [compileTimes, machineTimes, totalTimes, validateTimes])
+  list.sort((a, b) => a - b);
 
 const random = seeded(7);
 const stepTimes: number[] = [];
@@ -108,7 +112,9 @@ const replayTime = performance.now() - started;
 
 const summary = (list: readonly number[]) =>
   `median ${ms(percentile(list, 50))}, p95 ${ms(percentile(list, 95))}, min ${ms(list[0] ?? Number.NaN)}`;
-console.log(`first run in a fresh process (cold JIT), compile + validate + machine: ${ms(coldCompile)}`);
+console.log(
+  `first run in a fresh process (cold JIT), compile + validate + machine: ${ms(coldCompile)}`,
+);
 console.log(`warm, ${COMPILE_RUNS} runs:`);
 console.log(`  validateTree alone:                     ${summary(validateTimes)}`);
 console.log(`  compileTree (validate + formulas):      ${summary(compileTimes)}`);
@@ -117,5 +123,7 @@ console.log(`  compile + validate + machine:           ${summary(totalTimes)}`);
 console.log(
   `walk step (check + transition), ${stepTimes.length} steps over ${WALKS} walks: mean ${ms(meanStep)}, median ${ms(percentile(stepTimes, 50))}, p95 ${ms(percentile(stepTimes, 95))}, max ${ms(stepTimes.at(-1) ?? Number.NaN)}`,
 );
-console.log(`replay of the longest walk (${longest.length} events): ${ms(replayTime)} (${ms(replayTime / Math.max(1, longest.length))} per event)`);
+console.log(
+  `replay of the longest walk (${longest.length} events): ${ms(replayTime)} (${ms(replayTime / Math.max(1, longest.length))} per event)`,
+);
 console.log('Targets: compile + validate ≤ 20 ms, walk step ≤ 1 ms.');

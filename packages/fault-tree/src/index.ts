@@ -50,10 +50,22 @@ export type {
 export { NODE_ID_PATTERN, VALUE_NAME_PATTERN } from './schema/identifiers.js';
 
 // Units
-export { quantities, quantityInfo, unitCodes, unitSymbol, canonicalUnitOf, acceptsUnit } from './units/quantities.js';
+export {
+  quantities,
+  quantityInfo,
+  unitCodes,
+  unitSymbol,
+  canonicalUnitOf,
+  acceptsUnit,
+} from './units/quantities.js';
 export type { Quantity, QuantityInfo, UnitCode } from './units/quantities.js';
 export { fromCanonical, toCanonical } from './units/convert-units.js';
-export { formatCanonical, formatNumber, formatRange, formatWithUnit } from './units/format-value.js';
+export {
+  formatCanonical,
+  formatNumber,
+  formatRange,
+  formatWithUnit,
+} from './units/format-value.js';
 
 // Validation
 export { validateTree } from './validation/validate-tree.js';
@@ -64,7 +76,11 @@ export type { EdgeKind, TreeEdge } from './validation/tree-graph.js';
 
 // Formulas
 export { checkFormula, formulaNamesOf, listFormulaFunctions } from './formula/check-formula.js';
-export type { FormulaCheck, FormulaCheckOptions, FormulaFunctionHelp } from './formula/check-formula.js';
+export type {
+  FormulaCheck,
+  FormulaCheckOptions,
+  FormulaFunctionHelp,
+} from './formula/check-formula.js';
 export type { FormulaProblem, FormulaProblemCode } from './formula/analyse-formula.js';
 export type { EvaluationResult, FormulaScope, FormulaValue } from './formula/formula-value.js';
 
@@ -118,5 +134,11 @@ export type {
 } from './walk/walk-view.js';
 export { replayWalk, summariseWalk } from './walk/replay-walk.js';
 export type { Divergence, ReplayResult, WalkSummary } from './walk/replay-walk.js';
-export { createWalkActor, persistedWalkSchema, persistWalk, restoreWalk, WALK_FORMAT } from './walk/persist-walk.js';
+export {
+  createWalkActor,
+  persistedWalkSchema,
+  persistWalk,
+  restoreWalk,
+  WALK_FORMAT,
+} from './walk/persist-walk.js';
 export type { PersistedWalk, RestoreResult } from './walk/persist-walk.js';

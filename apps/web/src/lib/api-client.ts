@@ -40,6 +40,8 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 interface RequestOptions {
   method?: Method;
   body?: unknown;
+  /** A multipart body (uploads); the browser sets its Content-Type with the boundary. */
+  form?: FormData;
   signal?: AbortSignal;
 }
 
@@ -59,13 +61,14 @@ async function send(path: string, options: RequestOptions): Promise<Response> {
   // cannot set it, so it guards against request forgery alongside the SameSite cookie.
   if (method !== 'GET') headers['X-Heatpath-Client'] = 'web';
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  const body = options.form ?? (options.body === undefined ? undefined : JSON.stringify(options.body));
 
   try {
     return await fetch(path, {
       method,
       headers,
       credentials: 'same-origin',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body,
       signal: options.signal,
     });
   } catch (error) {
@@ -116,6 +119,16 @@ export async function apiRequest<S extends z.ZodType>(
     });
   }
   return parsed.data;
+}
+
+/** Sends a multipart form (a file upload) with POST and validates the JSON answer. */
+export function apiRequestForm<S extends z.ZodType>(
+  path: string,
+  schema: S,
+  form: FormData,
+  options: { signal?: AbortSignal } = {},
+): Promise<z.output<S>> {
+  return apiRequest(path, schema, { method: 'POST', form, ...options });
 }
 
 /** Sends a request whose success has no body (204), such as signing out. */

@@ -18,7 +18,11 @@ function problemsOf(source: string, expect: 'condition' | Quantity = 'condition'
   return result.ok ? [] : result.problems;
 }
 
-function valueOf(source: string, values: Record<string, number>, expect: 'condition' | Quantity = 'condition') {
+function valueOf(
+  source: string,
+  values: Record<string, number>,
+  expect: 'condition' | Quantity = 'condition',
+) {
   const result = checkFormula(source, { names, expect });
   if (!result.ok) throw new Error(result.problems.map((p) => p.message).join(' '));
   const evaluated = result.evaluate(values);
@@ -60,14 +64,22 @@ describe('hostile formulas are refused', () => {
   it.each(hostile)('%s', (source, message) => {
     const problems = problemsOf(source);
     expect(problems.length).toBeGreaterThan(0);
-    expect(problems.map((p) => p.code).every((c) => c === 'formula-not-allowed' || c === 'formula-syntax')).toBe(true);
+    expect(
+      problems
+        .map((p) => p.code)
+        .every((c) => c === 'formula-not-allowed' || c === 'formula-syntax'),
+    ).toBe(true);
     expect(problems.map((p) => p.message).join(' ')).toMatch(message);
   });
 
   it('refuses names that are not declared, and suggests a near miss', () => {
     const problems = problemsOf('enginetemp > 90');
     expect(problems).toEqual([
-      { code: 'unknown-name', message: '"enginetemp" is not a reading or computed value of this tree; did you mean "engineTemp"?' },
+      {
+        code: 'unknown-name',
+        message:
+          '"enginetemp" is not a reading or computed value of this tree; did you mean "engineTemp"?',
+      },
     ]);
     expect(problemsOf('pi > 3')[0]?.code).toBe('unknown-name');
   });
@@ -115,7 +127,12 @@ describe('units in formulas', () => {
 
 describe('allowed formulas evaluate on plain canonical numbers', () => {
   it('handles arithmetic, comparisons, logic and conditionals', () => {
-    expect(valueOf('engineTemp - hoseTemp > 25 and engineTemp >= 100', { engineTemp: 110, hoseTemp: 45 })).toBe(true);
+    expect(
+      valueOf('engineTemp - hoseTemp > 25 and engineTemp >= 100', {
+        engineTemp: 110,
+        hoseTemp: 45,
+      }),
+    ).toBe(true);
     expect(valueOf('not (x > 2) or x == 10', { x: 10 })).toBe(true);
     expect(valueOf('x > 1 xor x > 2', { x: 3 })).toBe(false);
     expect(valueOf('(x > 2 ? x : 0) * 2', { x: 3 }, 'number')).toBe(6);
@@ -129,15 +146,29 @@ describe('allowed formulas evaluate on plain canonical numbers', () => {
 
   it('compares with a tolerance so computed differences meet round thresholds', () => {
     expect(100.7 - 90.4 >= 10.3).toBe(false);
-    expect(valueOf('engineTemp - hoseTemp >= 10.3 K', { engineTemp: 100.7, hoseTemp: 90.4 })).toBe(true);
-    expect(valueOf('engineTemp - hoseTemp > 10.3 K', { engineTemp: 100.7, hoseTemp: 90.4 })).toBe(false);
+    expect(valueOf('engineTemp - hoseTemp >= 10.3 K', { engineTemp: 100.7, hoseTemp: 90.4 })).toBe(
+      true,
+    );
+    expect(valueOf('engineTemp - hoseTemp > 10.3 K', { engineTemp: 100.7, hoseTemp: 90.4 })).toBe(
+      false,
+    );
   });
 
   it('calls the whitelisted functions', () => {
-    expect(valueOf('max(engineTemp, hoseTemp)', { engineTemp: 90, hoseTemp: 95 }, 'temperature')).toBe(95);
-    expect(valueOf('mean(engineTemp, hoseTemp)', { engineTemp: 90, hoseTemp: 80 }, 'temperature')).toBe(85);
+    expect(
+      valueOf('max(engineTemp, hoseTemp)', { engineTemp: 90, hoseTemp: 95 }, 'temperature'),
+    ).toBe(95);
+    expect(
+      valueOf('mean(engineTemp, hoseTemp)', { engineTemp: 90, hoseTemp: 80 }, 'temperature'),
+    ).toBe(85);
     expect(valueOf('round(abs(drop), 1)', { drop: -3.14159 }, 'temperatureDelta')).toBe(3.1);
-    expect(valueOf('temperatureDrop(engineTemp, hoseTemp)', { engineTemp: 90, hoseTemp: 84 }, 'temperatureDelta')).toBe(6);
+    expect(
+      valueOf(
+        'temperatureDrop(engineTemp, hoseTemp)',
+        { engineTemp: 90, hoseTemp: 84 },
+        'temperatureDelta',
+      ),
+    ).toBe(6);
   });
 
   it('calls the coolant functions from @heatpath/coolant', () => {
@@ -150,13 +181,18 @@ describe('allowed formulas evaluate on plain canonical numbers', () => {
   });
 
   it('reports a missing value or a function with no figure without throwing', () => {
-    const check = checkFormula('egFreezePoint(egPercent) > -30 degC', { names, expect: 'condition' });
+    const check = checkFormula('egFreezePoint(egPercent) > -30 degC', {
+      names,
+      expect: 'condition',
+    });
     if (!check.ok) throw new Error('should check');
     expect(check.evaluate({})).toMatchObject({ ok: false, missing: 'egPercent' });
     expect(check.evaluate({ egPercent: 80 }).ok).toBe(false);
   });
 
   it('stops "or" early, so a later part with no figure does not spoil it', () => {
-    expect(valueOf('egPercent > 60 or egFreezePoint(egPercent) > -24 degC', { egPercent: 80 })).toBe(true);
+    expect(
+      valueOf('egPercent > 60 or egFreezePoint(egPercent) > -24 degC', { egPercent: 80 }),
+    ).toBe(true);
   });
 });

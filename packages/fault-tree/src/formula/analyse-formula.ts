@@ -35,10 +35,7 @@ import { formulaFunctionList, lookupFormulaFunction } from './functions.js';
 import { parseFormulaSource } from './math-parser.js';
 
 export type FormulaProblemCode =
-  | 'formula-syntax'
-  | 'formula-not-allowed'
-  | 'unknown-name'
-  | 'mismatched-units';
+  'formula-syntax' | 'formula-not-allowed' | 'unknown-name' | 'mismatched-units';
 
 export interface FormulaProblem {
   readonly code: FormulaProblemCode;
@@ -169,7 +166,8 @@ class FormulaChecker {
         return this.call(node as unknown as FunctionShape);
       default:
         return this.refuse(
-          refusedNodeMessages[node.type] ?? `The construct "${node.type}" is not allowed in a formula.`,
+          refusedNodeMessages[node.type] ??
+            `The construct "${node.type}" is not allowed in a formula.`,
         );
     }
   }
@@ -210,7 +208,9 @@ class FormulaChecker {
     if (literalUnit(name)) {
       return this.refuse(`Write the unit ${name} straight after a number, like 90 ${name}.`);
     }
-    const similar = [...this.table.keys()].find((known) => known.toLowerCase() === name.toLowerCase());
+    const similar = [...this.table.keys()].find(
+      (known) => known.toLowerCase() === name.toLowerCase(),
+    );
     this.problems.push({
       code: 'unknown-name',
       message: similar
@@ -245,7 +245,9 @@ class FormulaChecker {
     if (logicalOperators.has(fn)) {
       return this.logical(fn, node.args);
     }
-    return this.refuse(`The operator ${operatorWords[fn] ?? `"${node.op}"`} is not allowed in a formula.`);
+    return this.refuse(
+      `The operator ${operatorWords[fn] ?? `"${node.op}"`} is not allowed in a formula.`,
+    );
   }
 
   // mathjs reads "90 degC" and "-40 degF" as an implicit multiplication of a number by a symbol.
@@ -472,7 +474,9 @@ class FormulaChecker {
     if (kind === 'boolean' || kind === 'error') {
       return true;
     }
-    this.mismatch(`${role} must be a yes/no result (a comparison), not ${describeDimension(checked.dimension)}.`);
+    this.mismatch(
+      `${role} must be a yes/no result (a comparison), not ${describeDimension(checked.dimension)}.`,
+    );
     return false;
   }
 
@@ -550,9 +554,10 @@ class FormulaChecker {
     }
     const args = node.args.map((arg) => this.visit(arg));
     if (args.length < fn.minArgs || args.length > fn.maxArgs) {
-      const count =
-        fn.minArgs === fn.maxArgs ? `${fn.minArgs}` : `${fn.minArgs} to ${fn.maxArgs}`;
-      return this.refuse(`${name}() takes ${count} value${fn.maxArgs === 1 ? '' : 's'}, not ${args.length}.`);
+      const count = fn.minArgs === fn.maxArgs ? `${fn.minArgs}` : `${fn.minArgs} to ${fn.maxArgs}`;
+      return this.refuse(
+        `${name}() takes ${count} value${fn.maxArgs === 1 ? '' : 's'}, not ${args.length}.`,
+      );
     }
     const dimension = fn.dimension(args.map((a) => a.dimension));
     if (typeof dimension === 'string') {

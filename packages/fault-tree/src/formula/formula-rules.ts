@@ -6,12 +6,7 @@ import type { Quantity, UnitCode } from '../units/quantities.js';
 export type ArithmeticOperator = 'add' | 'subtract' | 'multiply' | 'divide' | 'pow';
 export type UnaryOperator = 'unaryMinus' | 'unaryPlus';
 export type ComparisonOperator =
-  | 'smaller'
-  | 'larger'
-  | 'smallerEq'
-  | 'largerEq'
-  | 'equal'
-  | 'unequal';
+  'smaller' | 'larger' | 'smallerEq' | 'largerEq' | 'equal' | 'unequal';
 export type LogicalOperator = 'and' | 'or' | 'xor';
 
 export const arithmeticOperators: ReadonlySet<string> = new Set<ArithmeticOperator>([
@@ -79,7 +74,7 @@ export const forbiddenFunctionNames: ReadonlySet<string> = new Set([
   'print',
 ]);
 
-/** Words mathjs reads as operators or constants; a value named like this could never be referred to. */
+/** Words mathjs reads as operators or constants, and object built-ins; values may not be named like this. */
 export const reservedWords: ReadonlySet<string> = new Set([
   'and',
   'or',
@@ -98,4 +93,10 @@ export const reservedWords: ReadonlySet<string> = new Set([
   'i',
   'Infinity',
   'NaN',
+  // Names every JavaScript object already has; refused so no lookup can ever reach them.
+  'constructor',
+  'prototype',
+  'toString',
+  'valueOf',
+  'hasOwnProperty',
 ]);

@@ -14,8 +14,7 @@ function present(factories: FactoryFunctionMap | undefined): FactoryFunctionMap 
 const math = create({ parseDependencies: present(parseDependencies) }, {});
 
 export type ParseOutcome =
-  | { readonly ok: true; readonly node: MathNode }
-  | { readonly ok: false; readonly message: string };
+  { readonly ok: true; readonly node: MathNode } | { readonly ok: false; readonly message: string };
 
 export function parseFormulaSource(source: string): ParseOutcome {
   try {

@@ -4,12 +4,7 @@
 // that zod cannot express live in ../validation.
 import { z } from 'zod';
 import { quantities, unitCodes } from '../units/quantities.js';
-import {
-  choiceIdSchema,
-  nodeIdSchema,
-  nodeRefSchema,
-  valueNameSchema,
-} from './identifiers.js';
+import { choiceIdSchema, nodeIdSchema, nodeRefSchema, valueNameSchema } from './identifiers.js';
 
 const text = (max: number) => z.string().trim().min(1).max(max);
 

@@ -14,7 +14,11 @@ function pick<T>(items: readonly T[], random: RandomSource): T | undefined {
 }
 
 /** An answer the current node accepts, or undefined at an outcome. */
-export function randomAnswer(tree: CompiledTree, snapshot: WalkSnapshot, random: RandomSource): WalkEvent | undefined {
+export function randomAnswer(
+  tree: CompiledTree,
+  snapshot: WalkSnapshot,
+  random: RandomSource,
+): WalkEvent | undefined {
   const nodeId = currentNodeIdOf(snapshot);
   const node = tree.nodes.get(nodeId);
   const position = snapshot.context.history.length;
@@ -24,7 +28,12 @@ export function randomAnswer(tree: CompiledTree, snapshot: WalkSnapshot, random:
       return choice && { type: 'answer.choice', nodeId, position, choiceId: choice.id };
     }
     case 'procedure':
-      return { type: 'answer.procedure', nodeId, position, result: random() < 0.7 ? 'done' : 'could-not-do' };
+      return {
+        type: 'answer.procedure',
+        nodeId,
+        position,
+        result: random() < 0.7 ? 'done' : 'could-not-do',
+      };
     case 'measurement': {
       const readings: Record<string, Reading> = {};
       for (const input of node.inputs) {

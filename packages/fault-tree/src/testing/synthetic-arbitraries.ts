@@ -7,7 +7,9 @@ import type { RandomSource } from './random-walker.js';
 export function shapeArbitrary(maxNodes = 40): fc.Arbitrary<SyntheticShape> {
   return fc.integer({ min: 2, max: maxNodes }).chain((count) =>
     fc.record({
-      parents: fc.tuple(...Array.from({ length: count - 1 }, (_, j) => fc.integer({ min: 0, max: j }))),
+      parents: fc.tuple(
+        ...Array.from({ length: count - 1 }, (_, j) => fc.integer({ min: 0, max: j })),
+      ),
       extraEdges: fc.array(
         fc
           .tuple(fc.integer({ min: 0, max: count - 1 }), fc.integer({ min: 0, max: count - 1 }))
@@ -23,11 +25,13 @@ export function shapeArbitrary(maxNodes = 40): fc.Arbitrary<SyntheticShape> {
 
 /** A source of numbers in [0, 1) drawn by fast-check, so failures shrink and replay. */
 export function randomSourceArbitrary(): fc.Arbitrary<RandomSource> {
-  return fc.infiniteStream(fc.double({ min: 0, max: 1, maxExcluded: true, noNaN: true })).map((stream) => {
-    const iterator = stream[Symbol.iterator]();
-    return () => {
-      const next = iterator.next();
-      return next.done ? 0 : next.value;
-    };
-  });
+  return fc
+    .infiniteStream(fc.double({ min: 0, max: 1, maxExcluded: true, noNaN: true }))
+    .map((stream) => {
+      const iterator = stream[Symbol.iterator]();
+      return () => {
+        const next = iterator.next();
+        return next.done ? 0 : next.value;
+      };
+    });
 }

@@ -26,7 +26,9 @@ export function syntheticNodeId(index: number): string {
 
 function bands(count: number): number[] {
   const width = (SYNTHETIC_RANGE.max - SYNTHETIC_RANGE.min) / count;
-  return Array.from({ length: count - 1 }, (_, k) => Math.round(SYNTHETIC_RANGE.min + width * (k + 1)));
+  return Array.from({ length: count - 1 }, (_, k) =>
+    Math.round(SYNTHETIC_RANGE.min + width * (k + 1)),
+  );
 }
 
 export function buildSyntheticTree(shape: SyntheticShape, id = 'synthetic'): TreeDefinition {
@@ -84,18 +86,30 @@ export function buildSyntheticTree(shape: SyntheticShape, id = 'synthetic'): Tre
       }
       const cuts = bands(targets.length);
       const fallback = shape.fallbacks[index] === true;
-      const branches = cuts.map((cut, k) => ({ when: `${subject} < ${cut}${unit}`, to: targets[k] as string }));
+      const branches = cuts.map((cut, k) => ({
+        when: `${subject} < ${cut}${unit}`,
+        to: targets[k] as string,
+      }));
       const last = targets[targets.length - 1] as string;
       if (!fallback) {
         const cut = cuts[cuts.length - 1];
-        branches.push({ when: cut === undefined ? 'true' : `${subject} >= ${cut}${unit}`, to: last });
+        branches.push({
+          when: cut === undefined ? 'true' : `${subject} >= ${cut}${unit}`,
+          to: last,
+        });
       }
       nodes[nodeId] = {
         kind: 'measurement',
         ...base,
         prompt: `Measure ${index}`,
         inputs: [
-          { name, label: `Reading ${index}`, quantity: 'temperature', unit: 'degC', range: { ...SYNTHETIC_RANGE } },
+          {
+            name,
+            label: `Reading ${index}`,
+            quantity: 'temperature',
+            unit: 'degC',
+            range: { ...SYNTHETIC_RANGE },
+          },
         ],
         branches,
         ...(fallback ? { fallback: { to: last } } : {}),

@@ -6,7 +6,11 @@ import { applyWalkEvent, startWalk } from '../walk/walk-api.js';
 import type { WalkEvent } from '../walk/walk-events.js';
 import type { WalkSnapshot } from '../walk/walk-view.js';
 
-export const choose = (nodeId: string, choiceId: string): WalkEvent => ({ type: 'answer.choice', nodeId, choiceId });
+export const choose = (nodeId: string, choiceId: string): WalkEvent => ({
+  type: 'answer.choice',
+  nodeId,
+  choiceId,
+});
 
 export const measure = (
   nodeId: string,
@@ -14,10 +18,16 @@ export const measure = (
 ): WalkEvent => ({
   type: 'answer.measurement',
   nodeId,
-  readings: Object.fromEntries(Object.entries(readings).map(([name, [value, unit]]) => [name, { value, unit }])),
+  readings: Object.fromEntries(
+    Object.entries(readings).map(([name, [value, unit]]) => [name, { value, unit }]),
+  ),
 });
 
-export const done = (nodeId: string): WalkEvent => ({ type: 'answer.procedure', nodeId, result: 'done' });
+export const done = (nodeId: string): WalkEvent => ({
+  type: 'answer.procedure',
+  nodeId,
+  result: 'done',
+});
 
 export const couldNotDo = (nodeId: string): WalkEvent => ({
   type: 'answer.procedure',
@@ -32,7 +42,9 @@ export function runScript(tree: CompiledTree, events: readonly WalkEvent[]): Wal
   for (const [index, event] of events.entries()) {
     const result = applyWalkEvent(tree, snapshot, event);
     if (!result.ok) {
-      throw new Error(`Event ${index} (${event.type} at ${event.nodeId}) was refused: ${result.rejection.message}`);
+      throw new Error(
+        `Event ${index} (${event.type} at ${event.nodeId}) was refused: ${result.rejection.message}`,
+      );
     }
     snapshot = result.snapshot;
   }

@@ -14,11 +14,11 @@ export const cautions = {
   },
   fan: {
     hazard: 'fan',
-    text: 'The electric fan can start without warning, even with the ignition off. Keep hands, hair, sleeves, tools and test leads clear of the fan and the belt drive.',
+    text: 'The electric fan can start without warning, even with the ignition off. Keep hands, hair, sleeves, tools and test leads clear of the fan and the belt drive, and follow the vehicle maker’s advice for working near them.',
   },
   hotSurface: {
     hazard: 'hot-surface',
-    text: 'At operating temperature the hoses, radiator, engine and exhaust are hot enough to burn. Take readings with the thermometer held away from you, and wear gloves.',
+    text: 'At operating temperature the hoses, radiator, engine and exhaust are hot enough to burn. Take readings with the thermometer held away from you, wear gloves, and follow the vehicle maker’s procedure.',
   },
   glycol: {
     hazard: 'glycol',
@@ -26,7 +26,7 @@ export const cautions = {
   },
   lifting: {
     hazard: 'lifting',
-    text: 'Raise the vehicle only on a lift or on stands rated for it, at the maker’s lifting points; never work under a vehicle held by a jack alone. Support the engine properly before a mount is removed.',
+    text: 'Raise the vehicle only on a lift or on stands rated for it, at the maker’s lifting points; never work under a vehicle held by a jack alone. Support the engine properly before a mount is removed. Follow the vehicle maker’s procedure and the workshop’s lifting rules.',
   },
   beltDrive: {
     hazard: 'belt-drive',

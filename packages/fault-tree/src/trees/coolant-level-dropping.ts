@@ -54,7 +54,13 @@ export const coolantLevelDroppingDefinition = {
       notes:
         'Heatpath treats half a litre or more per 1,000 km as a clear loss worth chasing straight away (common practice); smaller losses start with the overfill check.',
       inputs: [
-        { name: 'topUpLitres', label: 'Coolant added to reach MAX', quantity: 'volume', unit: 'L', range: { min: 0, max: 20 } },
+        {
+          name: 'topUpLitres',
+          label: 'Coolant added to reach MAX',
+          quantity: 'volume',
+          unit: 'L',
+          range: { min: 0, max: 20 },
+        },
         {
           name: 'distanceSinceFull',
           label: 'Distance driven since it was last at MAX (km)',
@@ -112,9 +118,27 @@ export const coolantLevelDroppingDefinition = {
       notes:
         'Hold 10–30 minutes; the gauge should not fall (common practice; no allowable drop is published). Heatpath treats a fall of more than 0.1 bar as a leak.',
       inputs: [
-        { name: 'testPressure', label: 'Pressure at the start', quantity: 'pressure', unit: 'bar', range: { min: 0.3, max: 2.5 } },
-        { name: 'pressureAfterHold', label: 'Pressure at the end', quantity: 'pressure', unit: 'bar', range: { min: 0, max: 2.5 } },
-        { name: 'holdMinutes', label: 'Time held', quantity: 'time', unit: 'min', range: { min: 10, max: 120 } },
+        {
+          name: 'testPressure',
+          label: 'Pressure at the start',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0.3, max: 2.5 },
+        },
+        {
+          name: 'pressureAfterHold',
+          label: 'Pressure at the end',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0, max: 2.5 },
+        },
+        {
+          name: 'holdMinutes',
+          label: 'Time held',
+          quantity: 'time',
+          unit: 'min',
+          range: { min: 10, max: 120 },
+        },
       ],
       branches: [{ when: 'pressureFall > 0.1', to: 'find-leak', label: 'Pressure falls' }],
       fallback: { to: 'cap-test', label: 'Holds pressure' },
@@ -138,10 +162,26 @@ export const coolantLevelDroppingDefinition = {
       prompt: 'Where did coolant come out under pressure?',
       choices: [
         { id: 'hose-or-clamp', label: 'A hose or clamp', to: 'hose-or-clamp-leak' },
-        { id: 'pump', label: 'The coolant pump (weep hole or gasket)', to: 'coolant-pump-seal-leak' },
-        { id: 'radiator-or-tank', label: 'The radiator or expansion tank', to: 'radiator-or-tank-leak' },
-        { id: 'inside-cabin', label: 'Inside the cabin (heater core or its joints)', to: 'heater-core-leak' },
-        { id: 'nowhere-outside', label: 'Pressure falls but nothing shows outside', to: 'cold-start-pressure' },
+        {
+          id: 'pump',
+          label: 'The coolant pump (weep hole or gasket)',
+          to: 'coolant-pump-seal-leak',
+        },
+        {
+          id: 'radiator-or-tank',
+          label: 'The radiator or expansion tank',
+          to: 'radiator-or-tank-leak',
+        },
+        {
+          id: 'inside-cabin',
+          label: 'Inside the cabin (heater core or its joints)',
+          to: 'heater-core-leak',
+        },
+        {
+          id: 'nowhere-outside',
+          label: 'Pressure falls but nothing shows outside',
+          to: 'cold-start-pressure',
+        },
       ],
     },
     'cap-test': {
@@ -156,13 +196,39 @@ export const coolantLevelDroppingDefinition = {
       notes:
         'A good cap opens at its rating and holds it for at least a minute (published service practice). Heatpath allows 0.15 bar below the rating and a 0.1 bar settle (common practice).',
       inputs: [
-        { name: 'capRating', label: 'Cap rating', quantity: 'pressure', unit: 'bar', range: { min: 0.3, max: 2.5 } },
-        { name: 'capOpening', label: 'Pressure at which the cap opened', quantity: 'pressure', unit: 'bar', range: { min: 0, max: 3 } },
-        { name: 'capHeldAfterMinute', label: 'Pressure the cap still holds after one minute', quantity: 'pressure', unit: 'bar', range: { min: 0, max: 3 } },
+        {
+          name: 'capRating',
+          label: 'Cap rating',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0.3, max: 2.5 },
+        },
+        {
+          name: 'capOpening',
+          label: 'Pressure at which the cap opened',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0, max: 3 },
+        },
+        {
+          name: 'capHeldAfterMinute',
+          label: 'Pressure the cap still holds after one minute',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0, max: 3 },
+        },
       ],
       branches: [
-        { when: 'capOpening < capRating - 0.15', to: 'cap-not-holding', label: 'Opens well below its rating' },
-        { when: 'capHeldAfterMinute < capOpening - 0.1', to: 'cap-not-holding', label: 'Does not hold pressure' },
+        {
+          when: 'capOpening < capRating - 0.15',
+          to: 'cap-not-holding',
+          label: 'Opens well below its rating',
+        },
+        {
+          when: 'capHeldAfterMinute < capOpening - 0.1',
+          to: 'cap-not-holding',
+          label: 'Does not hold pressure',
+        },
       ],
       fallback: { to: 'cold-start-pressure', label: 'Cap good' },
     },
@@ -178,9 +244,17 @@ export const coolantLevelDroppingDefinition = {
       notes:
         'Cold coolant hardly expands in two minutes; a quick rise of more than about 0.2 bar means gas is being pushed in (common practice).',
       inputs: [
-        { name: 'coldStartRise', label: 'Pressure rise in two minutes', quantity: 'pressure', unit: 'bar', range: { min: 0, max: 3 } },
+        {
+          name: 'coldStartRise',
+          label: 'Pressure rise in two minutes',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0, max: 3 },
+        },
       ],
-      branches: [{ when: 'coldStartRise > 0.2', to: 'block-test', label: 'Pressure builds quickly' }],
+      branches: [
+        { when: 'coldStartRise > 0.2', to: 'block-test', label: 'Pressure builds quickly' },
+      ],
       fallback: { to: 'hot-leak-check', label: 'No quick build-up' },
     },
     'block-test': {
@@ -214,7 +288,11 @@ export const coolantLevelDroppingDefinition = {
       cautions: [cautions.keepClosedWhenHot, cautions.fan, cautions.hotSurface],
       estimatedMinutes: 20,
       choices: [
-        { id: 'leaks-when-hot', label: 'A leak shows only when hot (hose or clamp)', to: 'hose-or-clamp-leak' },
+        {
+          id: 'leaks-when-hot',
+          label: 'A leak shows only when hot (hose or clamp)',
+          to: 'hose-or-clamp-leak',
+        },
         { id: 'milky-oil', label: 'The oil looks milky or creamy', to: 'coolant-into-oil' },
         { id: 'nothing-found', label: 'Nothing found', to: 'no-loss-found' },
       ],
@@ -223,8 +301,10 @@ export const coolantLevelDroppingDefinition = {
     'overfilled-expansion-tank': {
       kind: 'outcome',
       title: 'Expansion tank overfilled',
-      rootCause: 'The tank was filled above MAX, so the surplus is pushed out through the vent as the coolant warms: the level falls to where it belongs, then stays.',
-      correction: 'Set the level to MAX on a cold engine and clean off the residue so a real leak would show.',
+      rootCause:
+        'The tank was filled above MAX, so the surplus is pushed out through the vent as the coolant warms: the level falls to where it belongs, then stays.',
+      correction:
+        'Set the level to MAX on a cold engine and clean off the residue so a real leak would show.',
       labour: [{ operation: 'Set coolant level and clean residue', hours: 0.2 }],
       followUps: [
         'Mark the level on the tank and recheck it cold after 500 km; if it keeps dropping, open a new case on this tree.',
@@ -234,8 +314,10 @@ export const coolantLevelDroppingDefinition = {
     'heater-core-leak': {
       kind: 'outcome',
       title: 'Heater core leaking',
-      rootCause: 'The heater core or its joints leak inside the cabin: damp carpet, misted glass and a sweet smell.',
-      correction: 'Replace the heater core (or repair its joints) and dry the carpet and insulation; refill and bleed.',
+      rootCause:
+        'The heater core or its joints leak inside the cabin: damp carpet, misted glass and a sweet smell.',
+      correction:
+        'Replace the heater core (or repair its joints) and dry the carpet and insulation; refill and bleed.',
       parts: [
         { description: 'Heater core and seals', quantity: 1 },
         { description: 'Coolant to the maker’s specification (litres)', quantity: 2 },
@@ -249,7 +331,8 @@ export const coolantLevelDroppingDefinition = {
       kind: 'outcome',
       title: 'Leaking hose or clamp',
       rootCause: 'Coolant escapes at a hose or its clamp.',
-      correction: 'Replace the hose and clamps (or the clamp alone where the hose is sound), refill and bleed.',
+      correction:
+        'Replace the hose and clamps (or the clamp alone where the hose is sound), refill and bleed.',
       parts: [
         { description: 'Coolant hose', quantity: 1 },
         { description: 'Hose clamps', quantity: 2 },
@@ -269,7 +352,12 @@ export const coolantLevelDroppingDefinition = {
         { description: 'Timing belt kit, where the pump sits behind the belt', quantity: 1 },
       ],
       labour: [{ operation: 'Replace coolant pump (timing-belt job where applicable)', hours: 3 }],
-      followUps: [followUps.purgeAndRecheck, followUps.leakCheckAfterDrive, followUps.labelTimingCover, followUps.tellAdvisor],
+      followUps: [
+        followUps.purgeAndRecheck,
+        followUps.leakCheckAfterDrive,
+        followUps.labelTimingCover,
+        followUps.tellAdvisor,
+      ],
       hazards: ['belt-drive'],
       cautions: [cautions.beltDrive],
     },
@@ -290,7 +378,8 @@ export const coolantLevelDroppingDefinition = {
     'cap-not-holding': {
       kind: 'outcome',
       title: 'Pressure cap not holding',
-      rootCause: 'The pressure cap opens too early or leaks, so coolant is pushed out of the tank when the engine is hot.',
+      rootCause:
+        'The pressure cap opens too early or leaks, so coolant is pushed out of the tank when the engine is hot.',
       correction: 'Fit a new cap of the rating the maker specifies and top up the level.',
       parts: [{ description: 'Pressure cap of the specified rating', quantity: 1 }],
       labour: [{ operation: 'Test and replace pressure cap', hours: 0.3 }],
@@ -309,7 +398,8 @@ export const coolantLevelDroppingDefinition = {
     'coolant-into-oil': {
       kind: 'outcome',
       title: 'Coolant getting into the oil',
-      rootCause: 'Coolant leaks into the engine oil, through the head gasket, a cracked part or an oil cooler.',
+      rootCause:
+        'Coolant leaks into the engine oil, through the head gasket, a cracked part or an oil cooler.',
       correction:
         'Stop the car being driven. Find the path (oil cooler pressure test, head gasket and head check) and repair as found; change the oil and filter after the repair.',
       labour: [{ operation: 'Locate internal coolant leak', hours: 2 }],
@@ -322,7 +412,8 @@ export const coolantLevelDroppingDefinition = {
       kind: 'outcome',
       title: 'No cause found yet',
       rootCause: 'No leak, faulty cap or internal leak was found with these checks.',
-      correction: 'Mark the level on the tank, add UV dye where the maker allows, and ask the customer back after 500–1,000 km to look again.',
+      correction:
+        'Mark the level on the tank, add UV dye where the maker allows, and ask the customer back after 500–1,000 km to look again.',
       labour: [{ operation: 'Diagnosis time', hours: 1 }],
       followUps: [followUps.tellAdvisor],
     },

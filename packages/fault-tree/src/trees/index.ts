@@ -6,9 +6,13 @@ import { coolantLevelDroppingDefinition } from './coolant-level-dropping.js';
 import { overheatsIntermittentDefinition } from './overheats-intermittent.js';
 import { slowWarmUpDefinition } from './slow-warm-up.js';
 
-export const overheatsIntermittentTree: TreeDefinition = treeDefinitionSchema.parse(overheatsIntermittentDefinition);
+export const overheatsIntermittentTree: TreeDefinition = treeDefinitionSchema.parse(
+  overheatsIntermittentDefinition,
+);
 export const slowWarmUpTree: TreeDefinition = treeDefinitionSchema.parse(slowWarmUpDefinition);
-export const coolantLevelDroppingTree: TreeDefinition = treeDefinitionSchema.parse(coolantLevelDroppingDefinition);
+export const coolantLevelDroppingTree: TreeDefinition = treeDefinitionSchema.parse(
+  coolantLevelDroppingDefinition,
+);
 
 export const shippedTrees: readonly TreeDefinition[] = [
   overheatsIntermittentTree,

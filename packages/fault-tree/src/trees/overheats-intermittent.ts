@@ -100,7 +100,11 @@ export const overheatsIntermittentDefinition = {
         'Every pattern runs the same cheap checks first. The answer is kept with the case so the workshop can see which patterns end in which findings.',
       estimatedMinutes: 5,
       choices: [
-        { id: 'idle-or-traffic', label: 'At idle or in slow traffic; fine at speed', to: 'level-cold' },
+        {
+          id: 'idle-or-traffic',
+          label: 'At idle or in slow traffic; fine at speed',
+          to: 'level-cold',
+        },
         { id: 'speed-or-load', label: 'At speed, uphill or towing', to: 'level-cold' },
         {
           id: 'after-cooling-work',
@@ -205,7 +209,11 @@ export const overheatsIntermittentDefinition = {
         },
       ],
       branches: [
-        { when: 'egPercent > 60', to: 'wrong-concentration', label: 'Over-concentrated (above 60 %)' },
+        {
+          when: 'egPercent > 60',
+          to: 'wrong-concentration',
+          label: 'Over-concentrated (above 60 %)',
+        },
         {
           when: 'egFreezePoint(egPercent) > -24 degC',
           to: 'wrong-concentration',
@@ -234,7 +242,11 @@ export const overheatsIntermittentDefinition = {
         },
       ],
       branches: [
-        { when: 'pgPercent > 60', to: 'wrong-concentration', label: 'Over-concentrated (above 60 %)' },
+        {
+          when: 'pgPercent > 60',
+          to: 'wrong-concentration',
+          label: 'Over-concentrated (above 60 %)',
+        },
         { when: 'pgPercent < 40', to: 'wrong-concentration', label: 'Too weak (below 40 %)' },
       ],
       fallback: { to: 'cap-test', label: 'Within 40–60 %' },
@@ -259,7 +271,13 @@ export const overheatsIntermittentDefinition = {
           range: { min: 0.3, max: 2.5 },
           hint: 'Usually 0.8–1.2 bar (12–18 psi) gauge.',
         },
-        { name: 'capOpening', label: 'Pressure at which the cap opened', quantity: 'pressure', unit: 'bar', range: { min: 0, max: 3 } },
+        {
+          name: 'capOpening',
+          label: 'Pressure at which the cap opened',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0, max: 3 },
+        },
         {
           name: 'capHeldAfterMinute',
           label: 'Pressure the cap still holds after one minute',
@@ -269,8 +287,16 @@ export const overheatsIntermittentDefinition = {
         },
       ],
       branches: [
-        { when: 'capOpening < capRating - 0.15', to: 'cap-not-holding', label: 'Opens well below its rating' },
-        { when: 'capHeldAfterMinute < capOpening - 0.1', to: 'cap-not-holding', label: 'Does not hold pressure' },
+        {
+          when: 'capOpening < capRating - 0.15',
+          to: 'cap-not-holding',
+          label: 'Opens well below its rating',
+        },
+        {
+          when: 'capHeldAfterMinute < capOpening - 0.1',
+          to: 'cap-not-holding',
+          label: 'Does not hold pressure',
+        },
       ],
       fallback: { to: 'pressure-test', label: 'Cap good' },
     },
@@ -286,8 +312,20 @@ export const overheatsIntermittentDefinition = {
       notes:
         'Hold 10–30 minutes; the gauge should not fall (common practice; no allowable drop is published). Heatpath treats a fall of more than 0.1 bar as a leak.',
       inputs: [
-        { name: 'testPressure', label: 'Pressure at the start', quantity: 'pressure', unit: 'bar', range: { min: 0.3, max: 2.5 } },
-        { name: 'pressureAfterHold', label: 'Pressure at the end', quantity: 'pressure', unit: 'bar', range: { min: 0, max: 2.5 } },
+        {
+          name: 'testPressure',
+          label: 'Pressure at the start',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0.3, max: 2.5 },
+        },
+        {
+          name: 'pressureAfterHold',
+          label: 'Pressure at the end',
+          quantity: 'pressure',
+          unit: 'bar',
+          range: { min: 0, max: 2.5 },
+        },
         {
           name: 'holdMinutes',
           label: 'Time held',
@@ -297,7 +335,9 @@ export const overheatsIntermittentDefinition = {
           hint: 'At least ten minutes; a shorter hold proves nothing.',
         },
       ],
-      branches: [{ when: 'pressureFall > 0.1', to: 'find-leak-under-pressure', label: 'Pressure falls' }],
+      branches: [
+        { when: 'pressureFall > 0.1', to: 'find-leak-under-pressure', label: 'Pressure falls' },
+      ],
       fallback: { to: 'block-test', label: 'Holds pressure' },
     },
     'find-leak-under-pressure': {
@@ -318,7 +358,11 @@ export const overheatsIntermittentDefinition = {
       title: 'Where did it leak?',
       prompt: 'Did you find coolant escaping outside the engine?',
       choices: [
-        { id: 'external', label: 'Yes, outside (hose, radiator, pump, tank)', to: 'external-leak-low-coolant' },
+        {
+          id: 'external',
+          label: 'Yes, outside (hose, radiator, pump, tank)',
+          to: 'external-leak-low-coolant',
+        },
         {
           id: 'nothing-outside',
           label: 'Pressure falls but nothing leaks outside',
@@ -365,11 +409,27 @@ export const overheatsIntermittentDefinition = {
       notes:
         'IR thermometers read surfaces and shiny metal reads low, so compare on a painted or dull part of the housing. A gap of more than 10 K is worth confirming with a contact probe (common practice). If the fault does not show in the bay, log a road test and enter its highest reading.',
       inputs: [
-        { name: 'liveDataTemp', label: 'Coolant temperature in live data', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'sensorHousingIr', label: 'IR reading at the sensor housing', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'liveDataTemp',
+          label: 'Coolant temperature in live data',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'sensorHousingIr',
+          label: 'IR reading at the sensor housing',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
       branches: [
-        { when: 'abs(readingGap) > 10', to: 'confirm-with-contact-probe', label: 'Live data and housing disagree' },
+        {
+          when: 'abs(readingGap) > 10',
+          to: 'confirm-with-contact-probe',
+          label: 'Live data and housing disagree',
+        },
       ],
       fallback: { to: 'hose-temps', label: 'Readings agree' },
     },
@@ -382,12 +442,23 @@ export const overheatsIntermittentDefinition = {
       hazards: ['hot-pressurised-coolant', 'fan', 'hot-surface'],
       cautions: [cautions.keepClosedWhenHot, cautions.fan, cautions.hotSurface],
       estimatedMinutes: 10,
-      notes: 'Heatpath treats a difference of more than 8 K from live data as a wrong reading (common practice).',
+      notes:
+        'Heatpath treats a difference of more than 8 K from live data as a wrong reading (common practice).',
       inputs: [
-        { name: 'probeTemp', label: 'Contact probe reading', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'probeTemp',
+          label: 'Contact probe reading',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
       branches: [
-        { when: 'abs(liveDataTemp - probeTemp) > 8', to: 'temperature-reading-wrong', label: 'Live data is wrong' },
+        {
+          when: 'abs(liveDataTemp - probeTemp) > 8',
+          to: 'temperature-reading-wrong',
+          label: 'Live data is wrong',
+        },
       ],
       fallback: { to: 'hose-temps', label: 'Live data is right' },
     },
@@ -403,8 +474,20 @@ export const overheatsIntermittentDefinition = {
       notes:
         'With good flow the coolant loses around 5–6 K across the radiator; much more points to weak flow, much less to an air-side problem (trade rule of thumb). An inlet hose more than 25 K cooler than a 100 °C engine means almost nothing flows through the radiator (common practice).',
       inputs: [
-        { name: 'radiatorInletTemp', label: 'Radiator inlet hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'radiatorOutletTemp', label: 'Radiator outlet hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'radiatorInletTemp',
+          label: 'Radiator inlet hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'radiatorOutletTemp',
+          label: 'Radiator outlet hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
       branches: [
         {
@@ -413,7 +496,11 @@ export const overheatsIntermittentDefinition = {
           label: 'Engine hot, radiator inlet hose barely warm',
         },
         { when: 'radiatorDrop > 20', to: 'core-scan', label: 'Large drop across the radiator' },
-        { when: 'radiatorDrop < 3', to: 'fan-switch', label: 'Very small drop across the radiator' },
+        {
+          when: 'radiatorDrop < 3',
+          to: 'fan-switch',
+          label: 'Very small drop across the radiator',
+        },
       ],
       fallback: { to: 'fan-switch', label: 'Flow through the radiator looks normal' },
     },
@@ -453,11 +540,27 @@ export const overheatsIntermittentDefinition = {
       notes:
         'Thermostats usually open at 82–91 °C (trade textbook). Heatpath treats opening more than 5 K above the stamped figure as stuck (common practice).',
       inputs: [
-        { name: 'thermostatRated', label: 'Stamped opening temperature', quantity: 'temperature', unit: 'degC', range: { min: 60, max: 110 } },
-        { name: 'thermostatOpenedAt', label: 'Water temperature when it began to open', quantity: 'temperature', unit: 'degC', range: { min: 20, max: 100 } },
+        {
+          name: 'thermostatRated',
+          label: 'Stamped opening temperature',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: 60, max: 110 },
+        },
+        {
+          name: 'thermostatOpenedAt',
+          label: 'Water temperature when it began to open',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: 20, max: 100 },
+        },
       ],
       branches: [
-        { when: 'thermostatLate > 5', to: 'thermostat-stuck-closed', label: 'Opens late or not at all' },
+        {
+          when: 'thermostatLate > 5',
+          to: 'thermostat-stuck-closed',
+          label: 'Opens late or not at all',
+        },
         { when: 'thermostatLate <= 5', to: 'main-loop-bleed', label: 'Opens on time' },
       ],
     },
@@ -502,8 +605,16 @@ export const overheatsIntermittentDefinition = {
       prompt:
         'On a switchable pump, a sleeve (shroud) slides over the impeller to stop the flow while the engine warms. Is the shroud stuck out over the impeller, or does it move back under its spring only with force?',
       choices: [
-        { id: 'stuck-out', label: 'Yes, the shroud is stuck over the impeller', to: 'pump-shroud-stuck' },
-        { id: 'free-or-none', label: 'It moves freely, or the pump has no shroud', to: 'impeller-inspection' },
+        {
+          id: 'stuck-out',
+          label: 'Yes, the shroud is stuck over the impeller',
+          to: 'pump-shroud-stuck',
+        },
+        {
+          id: 'free-or-none',
+          label: 'It moves freely, or the pump has no shroud',
+          to: 'impeller-inspection',
+        },
       ],
     },
     'impeller-inspection': {
@@ -527,10 +638,20 @@ export const overheatsIntermittentDefinition = {
       notes:
         'Most engines bring a fan stage in before about 105 °C (common practice; the maker’s switch point overrides).',
       inputs: [
-        { name: 'fanOnTemp', label: 'Coolant temperature when the fan came on', quantity: 'temperature', unit: 'degC', range: { min: 60, max: 130 } },
+        {
+          name: 'fanOnTemp',
+          label: 'Coolant temperature when the fan came on',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: 60, max: 130 },
+        },
       ],
       branches: [
-        { when: 'fanOnTemp > 105', to: 'fan-stage-not-switching', label: 'Fan comes on late or not at all' },
+        {
+          when: 'fanOnTemp > 105',
+          to: 'fan-stage-not-switching',
+          label: 'Fan comes on late or not at all',
+        },
         { when: 'fanOnTemp <= 105', to: 'fan-ac-stage', label: 'First stage switches on time' },
       ],
     },
@@ -589,8 +710,20 @@ export const overheatsIntermittentDefinition = {
       notes:
         'With a water-cooled charge-air cooler, more than about 35 K above ambient under sustained load suggests the low-temperature loop is not flowing (common practice).',
       inputs: [
-        { name: 'chargeAirTempMax', label: 'Highest charge-air temperature', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 200 } },
-        { name: 'ambientTemp', label: 'Ambient temperature', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 55 } },
+        {
+          name: 'chargeAirTempMax',
+          label: 'Highest charge-air temperature',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: -40, max: 200 },
+        },
+        {
+          name: 'ambientTemp',
+          label: 'Ambient temperature',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: -40, max: 55 },
+        },
       ],
       branches: [{ when: 'chargeAirRise > 35', to: 'aux-bleed', label: 'Charge air runs hot' }],
       fallback: { to: 'no-cause-found', label: 'Charge-air temperature normal' },
@@ -602,7 +735,8 @@ export const overheatsIntermittentDefinition = {
         'With the system cold, top up the low-temperature loop and run the maker’s bleed routine for the auxiliary pump (often a scan-tool function that runs the pumps in turn). Vacuum filling may not clear an air lock here: drive at full operating temperature for ten minutes or more, let the engine cool, and recheck the level.',
       tools: ['Scan tool'],
       estimatedMinutes: 45,
-      notes: 'Air locks in auxiliary loops can survive vacuum filling; driving to temperature purges them (common practice).',
+      notes:
+        'Air locks in auxiliary loops can survive vacuum filling; driving to temperature purges them (common practice).',
       hazards: ['hot-pressurised-coolant', 'glycol', 'fan', 'road-test'],
       cautions: [cautions.coldSystemOnly, cautions.glycol, cautions.fan, cautions.roadTest],
       done: 'aux-bleed-result',
@@ -636,7 +770,13 @@ export const overheatsIntermittentDefinition = {
         { operation: 'Remove and refit coolant pump (timing-belt job where applicable)', hours: 3 },
         { operation: 'Refill, bleed and road test', hours: 0.7 },
       ],
-      followUps: [followUps.purgeAndRecheck, followUps.leakCheckAfterDrive, followUps.labelTimingCover, followUps.roadTestConfirm, followUps.tellAdvisor],
+      followUps: [
+        followUps.purgeAndRecheck,
+        followUps.leakCheckAfterDrive,
+        followUps.labelTimingCover,
+        followUps.roadTestConfirm,
+        followUps.tellAdvisor,
+      ],
       hazards: ['belt-drive'],
       cautions: [cautions.beltDrive],
     },
@@ -700,14 +840,21 @@ export const overheatsIntermittentDefinition = {
     'external-leak-low-coolant': {
       kind: 'outcome',
       title: 'Low coolant from an external leak',
-      rootCause: 'Coolant escapes through an external leak, the level falls and the engine overheats when it runs low.',
-      correction: 'Repair the leaking part (hose, clamp, radiator, tank or pump), refill with the specified coolant and bleed.',
+      rootCause:
+        'Coolant escapes through an external leak, the level falls and the engine overheats when it runs low.',
+      correction:
+        'Repair the leaking part (hose, clamp, radiator, tank or pump), refill with the specified coolant and bleed.',
       parts: [
         { description: 'Leaking part as found', quantity: 1 },
         { description: 'Coolant to the maker’s specification (litres)', quantity: 3 },
       ],
       labour: [{ operation: 'Repair leak, refill and bleed', hours: 1 }],
-      followUps: [followUps.purgeAndRecheck, followUps.leakCheckAfterDrive, followUps.labelTimingCover, followUps.tellAdvisor],
+      followUps: [
+        followUps.purgeAndRecheck,
+        followUps.leakCheckAfterDrive,
+        followUps.labelTimingCover,
+        followUps.tellAdvisor,
+      ],
     },
     'wrong-concentration': {
       kind: 'outcome',
@@ -716,7 +863,9 @@ export const overheatsIntermittentDefinition = {
         'The coolant is too weak or too strong. Too much water lowers the boiling point and the frost and corrosion protection; too much glycol carries heat away less well.',
       correction:
         'Bring the mix to the maker’s concentration (usually 40–60 %, ASTM D3306) with the specified coolant technology: drain the calculated amount and refill with concentrate or water, or drain and refill completely.',
-      parts: [{ description: 'Coolant concentrate to the maker’s specification (litres)', quantity: 3 }],
+      parts: [
+        { description: 'Coolant concentrate to the maker’s specification (litres)', quantity: 3 },
+      ],
       labour: [{ operation: 'Correct coolant concentration and bleed', hours: 0.7 }],
       followUps: [
         followUps.purgeAndRecheck,
@@ -755,7 +904,8 @@ export const overheatsIntermittentDefinition = {
     'auxiliary-pump-not-running': {
       kind: 'outcome',
       title: 'Auxiliary coolant pump not running',
-      rootCause: 'The electric auxiliary pump of the low-temperature loop does not run, so that loop does not circulate.',
+      rootCause:
+        'The electric auxiliary pump of the low-temperature loop does not run, so that loop does not circulate.',
       correction:
         'Check the pump’s supply, ground and control signal as the maker describes; replace the pump if it gets what it needs and still does not run, or repair the circuit.',
       parts: [{ description: 'Auxiliary coolant pump, or circuit parts as found', quantity: 1 }],
@@ -765,7 +915,8 @@ export const overheatsIntermittentDefinition = {
     'pump-impeller-not-circulating': {
       kind: 'outcome',
       title: 'Coolant pump impeller not circulating',
-      rootCause: 'The pump’s impeller is damaged or slipping on its shaft, so it turns without moving enough coolant.',
+      rootCause:
+        'The pump’s impeller is damaged or slipping on its shaft, so it turns without moving enough coolant.',
       correction: 'Replace the coolant pump, refill with the specified coolant and bleed.',
       parts: [
         { description: 'Coolant pump with seal', quantity: 1 },
@@ -773,15 +924,22 @@ export const overheatsIntermittentDefinition = {
         { description: 'Timing belt kit, where the pump sits behind the belt', quantity: 1 },
       ],
       labour: [{ operation: 'Replace coolant pump (timing-belt job where applicable)', hours: 3 }],
-      followUps: [followUps.purgeAndRecheck, followUps.leakCheckAfterDrive, followUps.labelTimingCover, followUps.tellAdvisor],
+      followUps: [
+        followUps.purgeAndRecheck,
+        followUps.leakCheckAfterDrive,
+        followUps.labelTimingCover,
+        followUps.tellAdvisor,
+      ],
       hazards: ['belt-drive'],
       cautions: [cautions.beltDrive],
     },
     'main-loop-air-lock': {
       kind: 'outcome',
       title: 'Air trapped in the main loop',
-      rootCause: 'An air pocket in the main loop stopped the coolant circulating through the radiator; bleeding restored the flow.',
-      correction: 'Bleed done. If the system had been worked on, check the refill was done as the maker describes.',
+      rootCause:
+        'An air pocket in the main loop stopped the coolant circulating through the radiator; bleeding restored the flow.',
+      correction:
+        'Bleed done. If the system had been worked on, check the refill was done as the maker describes.',
       parts: [{ description: 'Coolant to the maker’s specification (litres)', quantity: 1 }],
       labour: [{ operation: 'Bleed main loop and road test', hours: 0.8 }],
       followUps: [followUps.purgeAndRecheck, followUps.roadTestConfirm, followUps.tellAdvisor],

@@ -68,11 +68,19 @@ export const slowWarmUpDefinition = {
       cautions: [cautions.coldSystemOnly, cautions.glycol],
       estimatedMinutes: 5,
       notes:
-        'The heater core is often the highest point of the system; when the level is low it is the first part to run dry.',
+        'The heater core is often the highest point of the system; when the level is low it is the first part to run dry. Heatpath treats a litre or more missing as too low to keep it fed (common practice).',
       inputs: [
-        { name: 'topUpLitres', label: 'Coolant added to reach MAX', quantity: 'volume', unit: 'L', range: { min: 0, max: 20 } },
+        {
+          name: 'topUpLitres',
+          label: 'Coolant added to reach MAX',
+          quantity: 'volume',
+          unit: 'L',
+          range: { min: 0, max: 20 },
+        },
       ],
-      branches: [{ when: 'topUpLitres >= 1', to: 'low-coolant-level', label: 'A litre or more was missing' }],
+      branches: [
+        { when: 'topUpLitres >= 1', to: 'low-coolant-level', label: 'A litre or more was missing' },
+      ],
       fallback: { to: 'warm-up-log', label: 'Level about right' },
     },
     'warm-up-log': {
@@ -88,12 +96,34 @@ export const slowWarmUpDefinition = {
       notes:
         'In mild weather most engines reach about 80 °C within 10–15 minutes of driving and settle near 90 °C; Heatpath calls it slow beyond 20 minutes above 0 °C ambient (common practice).',
       inputs: [
-        { name: 'minutesTo80', label: 'Time to reach 80 °C', quantity: 'time', unit: 'min', range: { min: 1, max: 60 } },
-        { name: 'settledTemp', label: 'Settled coolant temperature', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'ambientTemp', label: 'Ambient temperature', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 55 } },
+        {
+          name: 'minutesTo80',
+          label: 'Time to reach 80 °C',
+          quantity: 'time',
+          unit: 'min',
+          range: { min: 1, max: 60 },
+        },
+        {
+          name: 'settledTemp',
+          label: 'Settled coolant temperature',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'ambientTemp',
+          label: 'Ambient temperature',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: -40, max: 55 },
+        },
       ],
       branches: [
-        { when: 'settledTemp < 80', to: 'thermostat-early-flow', label: 'Never reaches normal temperature' },
+        {
+          when: 'settledTemp < 80',
+          to: 'thermostat-early-flow',
+          label: 'Never reaches normal temperature',
+        },
         {
           when: 'minutesTo80 > 20 and ambientTemp > 0',
           to: 'pump-has-shroud',
@@ -114,8 +144,20 @@ export const slowWarmUpDefinition = {
       notes:
         'Below the opening temperature the radiator inlet hose should stay much cooler than the engine. Within 15 K of the engine means coolant already flows through the radiator (common practice).',
       inputs: [
-        { name: 'warmupEngineTemp', label: 'Coolant temperature in live data', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'warmupInletTemp', label: 'Radiator inlet hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'warmupEngineTemp',
+          label: 'Coolant temperature in live data',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'warmupInletTemp',
+          label: 'Radiator inlet hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
       branches: [
         {
@@ -148,10 +190,28 @@ export const slowWarmUpDefinition = {
       notes:
         'With the coolant held still, the head outlet usually warms by well over 10 K in the first five minutes at idle. This is a rough guide (common practice, not a published figure): compare with a known-good engine of the same type where you can.',
       inputs: [
-        { name: 'tempAtColdStart', label: 'Coolant temperature at start', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'tempAfterFiveMinutes', label: 'Coolant temperature after five minutes', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'tempAtColdStart',
+          label: 'Coolant temperature at start',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'tempAfterFiveMinutes',
+          label: 'Coolant temperature after five minutes',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
-      branches: [{ when: 'standingRise < 10', to: 'shroud-never-deploys', label: 'Warms as if the coolant were flowing' }],
+      branches: [
+        {
+          when: 'standingRise < 10',
+          to: 'shroud-never-deploys',
+          label: 'Warms as if the coolant were flowing',
+        },
+      ],
       fallback: { to: 'heater-hoses', label: 'Warms quickly: the shroud works' },
     },
     'heater-hoses': {
@@ -166,13 +226,39 @@ export const slowWarmUpDefinition = {
       notes:
         'The feed hose should be within about 20 K of the engine, and the drop across the heater core should be modest; a large drop means weak flow or trapped air (common practice).',
       inputs: [
-        { name: 'engineTempHot', label: 'Coolant temperature in live data', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'heaterFeedTemp', label: 'Heater feed hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'heaterReturnTemp', label: 'Heater return hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'engineTempHot',
+          label: 'Coolant temperature in live data',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'heaterFeedTemp',
+          label: 'Heater feed hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'heaterReturnTemp',
+          label: 'Heater return hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
       branches: [
-        { when: 'heaterFeedLag > 20', to: 'heater-pump-check', label: 'Little hot coolant reaches the heater' },
-        { when: 'heaterDrop > 15', to: 'heater-loop-bleed', label: 'Large drop across the heater core' },
+        {
+          when: 'heaterFeedLag > 20',
+          to: 'heater-pump-check',
+          label: 'Little hot coolant reaches the heater',
+        },
+        {
+          when: 'heaterDrop > 15',
+          to: 'heater-loop-bleed',
+          label: 'Large drop across the heater core',
+        },
       ],
       fallback: { to: 'heat-reaches-core', label: 'Hot coolant flows through the heater' },
     },
@@ -188,7 +274,11 @@ export const slowWarmUpDefinition = {
       choices: [
         { id: 'runs', label: 'Yes, it runs', to: 'heater-loop-bleed' },
         { id: 'does-not-run', label: 'No, it does not run', to: 'heater-pump-supply' },
-        { id: 'no-electric-pump', label: 'This engine has no electric heater pump', to: 'heater-loop-bleed' },
+        {
+          id: 'no-electric-pump',
+          label: 'This engine has no electric heater pump',
+          to: 'heater-loop-bleed',
+        },
       ],
     },
     'heater-pump-supply': {
@@ -199,7 +289,11 @@ export const slowWarmUpDefinition = {
       tools: ['Multimeter', 'Wiring diagram'],
       estimatedMinutes: 15,
       choices: [
-        { id: 'supply-present', label: 'Yes, supply and ground are there', to: 'heater-pump-failed' },
+        {
+          id: 'supply-present',
+          label: 'Yes, supply and ground are there',
+          to: 'heater-pump-failed',
+        },
         { id: 'supply-missing', label: 'No', to: 'heater-pump-circuit-fault' },
       ],
     },
@@ -218,14 +312,29 @@ export const slowWarmUpDefinition = {
     'heater-retest': {
       kind: 'measurement',
       title: 'Heater hoses after bleeding',
-      prompt: 'At full operating temperature, heater at maximum, take IR readings on both heater hoses again.',
+      prompt:
+        'At full operating temperature, heater at maximum, take IR readings on both heater hoses again.',
+      notes:
+        'Flow counts as restored when the feed hose is within 20 K of the engine and the drop across the core is 15 K or less (common practice).',
       tools: ['IR thermometer'],
       hazards: ['hot-pressurised-coolant', 'fan', 'hot-surface'],
       cautions: [cautions.keepClosedWhenHot, cautions.fan, cautions.hotSurface],
       estimatedMinutes: 10,
       inputs: [
-        { name: 'retestFeedTemp', label: 'Heater feed hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
-        { name: 'retestReturnTemp', label: 'Heater return hose', quantity: 'temperature', unit: 'degC', range: temperatureRange },
+        {
+          name: 'retestFeedTemp',
+          label: 'Heater feed hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
+        {
+          name: 'retestReturnTemp',
+          label: 'Heater return hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: temperatureRange,
+        },
       ],
       branches: [
         {
@@ -240,8 +349,10 @@ export const slowWarmUpDefinition = {
     'low-coolant-level': {
       kind: 'outcome',
       title: 'Coolant level too low to feed the heater',
-      rootCause: 'So much coolant was missing that the heater core, high in the system, was not kept full.',
-      correction: 'Top up with the specified coolant and bleed; then find out where the coolant went.',
+      rootCause:
+        'So much coolant was missing that the heater core, high in the system, was not kept full.',
+      correction:
+        'Top up with the specified coolant and bleed; then find out where the coolant went.',
       parts: [{ description: 'Coolant to the maker’s specification (litres)', quantity: 2 }],
       labour: [{ operation: 'Top up and bleed', hours: 0.5 }],
       followUps: [
@@ -270,7 +381,9 @@ export const slowWarmUpDefinition = {
         'The switchable pump’s shroud stays back, so coolant circulates from the start and the engine warms more slowly. This costs warm-up time and heat but does not overheat the engine.',
       correction:
         'Test the pump’s control valve and its wiring as the maker describes; repair the circuit, or replace the valve or pump as found.',
-      parts: [{ description: 'Pump control valve, or switchable coolant pump, as found', quantity: 1 }],
+      parts: [
+        { description: 'Pump control valve, or switchable coolant pump, as found', quantity: 1 },
+      ],
       labour: [{ operation: 'Test pump control and replace as found', hours: 1.5 }],
       followUps: [followUps.purgeAndRecheck, followUps.labelTimingCover, followUps.tellAdvisor],
       hazards: ['belt-drive'],
@@ -279,7 +392,8 @@ export const slowWarmUpDefinition = {
     'heater-pump-failed': {
       kind: 'outcome',
       title: 'Heater pump failed',
-      rootCause: 'The heater loop’s electric pump gets its supply but does not run, so little hot coolant reaches the heater core.',
+      rootCause:
+        'The heater loop’s electric pump gets its supply but does not run, so little hot coolant reaches the heater core.',
       correction: 'Replace the heater pump, refill and bleed the heater loop.',
       parts: [
         { description: 'Electric heater pump', quantity: 1 },
@@ -291,15 +405,18 @@ export const slowWarmUpDefinition = {
     'heater-pump-circuit-fault': {
       kind: 'outcome',
       title: 'Heater pump not supplied',
-      rootCause: 'The heater loop’s electric pump gets no supply or ground when it is commanded, so it never runs.',
-      correction: 'Trace the supply, ground and control of the pump with the maker’s wiring diagram and repair the fault (fuse, relay, connector, wiring or control).',
+      rootCause:
+        'The heater loop’s electric pump gets no supply or ground when it is commanded, so it never runs.',
+      correction:
+        'Trace the supply, ground and control of the pump with the maker’s wiring diagram and repair the fault (fuse, relay, connector, wiring or control).',
       labour: [{ operation: 'Diagnose and repair heater pump circuit', hours: 1 }],
       followUps: [followUps.tellAdvisor],
     },
     'air-in-heater-loop': {
       kind: 'outcome',
       title: 'Air trapped in the heater loop',
-      rootCause: 'An air pocket in the heater loop stopped coolant flowing through the heater core; bleeding restored it.',
+      rootCause:
+        'An air pocket in the heater loop stopped coolant flowing through the heater core; bleeding restored it.',
       correction: 'Bleeding done; check the refill procedure was followed.',
       parts: [{ description: 'Coolant to the maker’s specification (litres)', quantity: 1 }],
       labour: [{ operation: 'Bleed heater loop', hours: 0.6 }],
@@ -308,7 +425,8 @@ export const slowWarmUpDefinition = {
     'heater-core-restricted': {
       kind: 'outcome',
       title: 'Heater core restricted',
-      rootCause: 'Hot coolant reaches the heater but cannot flow well through the core, which is partly blocked.',
+      rootCause:
+        'Hot coolant reaches the heater but cannot flow well through the core, which is partly blocked.',
       correction:
         'Back-flush the heater core where the maker allows, or replace it; check the coolant’s condition and flush the system if it is contaminated.',
       parts: [{ description: 'Heater core, if flushing does not restore flow', quantity: 1 }],
@@ -320,7 +438,8 @@ export const slowWarmUpDefinition = {
       title: 'Hot coolant reaches the heater core',
       rootCause:
         'The engine and the heater core get hot as they should, so the cooling system is not the cause: the lost heat is on the air side (blend flap, its actuator, or the climate controls).',
-      correction: 'Check the blend flap, its actuator and the climate control as the maker describes.',
+      correction:
+        'Check the blend flap, its actuator and the climate control as the maker describes.',
       labour: [{ operation: 'Diagnose heater air distribution', hours: 1 }],
       followUps: [followUps.tellAdvisor],
     },

@@ -29,7 +29,9 @@ describe('unit conversion to canonical units', () => {
   });
 
   it('names a range in the entered and the canonical unit', () => {
-    expect(formatRange({ min: -40, max: 150 }, 'temperature', 'degF')).toBe('between -40 and 302 °F (-40 and 150 °C)');
+    expect(formatRange({ min: -40, max: 150 }, 'temperature', 'degF')).toBe(
+      'between -40 and 302 °F (-40 and 150 °C)',
+    );
     expect(formatRange({ min: 0.3, max: 2.5 }, 'pressure')).toBe('between 0.3 and 2.5 bar');
   });
 });

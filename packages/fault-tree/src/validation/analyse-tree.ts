@@ -38,7 +38,13 @@ export function analyseTree(raw: unknown): TreeAnalysis {
   const settled = !graph.facts.hasLoops && parsed.brokenIds.size === 0;
   if (settled) {
     problems.push(
-      ...checkAvailability(envelope.start, parsed.nodes, graph.facts.adjacency, graph.facts.reachable, formulas.model),
+      ...checkAvailability(
+        envelope.start,
+        parsed.nodes,
+        graph.facts.adjacency,
+        graph.facts.reachable,
+        formulas.model,
+      ),
     );
   }
   problems.push(...checkCoverage(parsed.nodes, graph.facts.reachable, formulas.model));

@@ -32,7 +32,10 @@ export function availableReadings(
   for (const id of order) {
     const here = available.get(id);
     if (here === undefined) continue;
-    const leaving = new Set([...here, ...ownInputs(nodes.get(id)).filter((name) => tracked.has(name))]);
+    const leaving = new Set([
+      ...here,
+      ...ownInputs(nodes.get(id)).filter((name) => tracked.has(name)),
+    ]);
     for (const next of adjacency.get(id) ?? []) {
       const existing = available.get(next);
       if (existing === undefined) {

@@ -83,14 +83,19 @@ export function checkCoverage(
 }
 
 /** A description of readings no branch fits, or undefined when every sampled reading is routed. */
-function uncoveredReadings(formulas: readonly AnalysedFormula[], model: FormulaModel): string | undefined {
+function uncoveredReadings(
+  formulas: readonly AnalysedFormula[],
+  model: FormulaModel,
+): string | undefined {
   const names = [...new Set(formulas.flatMap((f) => baseInputsOf(f, model)))];
   const entries = names.map((name) => model.inputs.get(name));
   if (entries.some((e) => e === undefined || !(e.input.range.min < e.input.range.max))) {
     return undefined;
   }
   const inputs = entries as InputEntry[];
-  const computed = model.computed.filter((entry) => entry.inputs.every((name) => names.includes(name)));
+  const computed = model.computed.filter((entry) =>
+    entry.inputs.every((name) => names.includes(name)),
+  );
   const constants = [
     ...formulas.flatMap((f) => f.constants),
     ...computed.flatMap((entry) => entry.formula.constants),
@@ -143,7 +148,9 @@ function singleReadingGaps(
       else high = middle.point[name] as number;
     }
   }
-  const all = [...probes, ...refined].sort((a, b) => (a.point[name] as number) - (b.point[name] as number));
+  const all = [...probes, ...refined].sort(
+    (a, b) => (a.point[name] as number) - (b.point[name] as number),
+  );
   const runs: Array<[number, number]> = [];
   let current: [number, number] | undefined;
   for (const p of all) {
@@ -162,7 +169,8 @@ function singleReadingGaps(
     const b = formatCanonical(to, quantity);
     return from === to ? `exactly ${a}` : a === b ? `about ${a}` : `from about ${a} to ${b}`;
   });
-  const more = runs.length > 3 ? ` and ${runs.length - 3} more gap${runs.length === 4 ? '' : 's'}` : '';
+  const more =
+    runs.length > 3 ? ` and ${runs.length - 3} more gap${runs.length === 4 ? '' : 's'}` : '';
   return `"${entry.input.label}" ${described.join(', ')}${more}`;
 }
 
@@ -171,7 +179,9 @@ function severalReadingsGap(
   constants: readonly number[],
   signatureAt: (point: Readonly<Record<string, number>>) => number,
 ): string | undefined {
-  const axes = inputs.map((entry) => samplePoints(entry.input.range.min, entry.input.range.max, constants));
+  const axes = inputs.map((entry) =>
+    samplePoints(entry.input.range.min, entry.input.range.max, constants),
+  );
   const total = axes.reduce((product, axis) => product * axis.length, 1);
   const points: Array<Record<string, number>> = [];
   if (total <= MAX_GRID_POINTS) {
@@ -202,7 +212,10 @@ function severalReadingsGap(
   const gap = points.find((point) => signatureAt(point) === 0);
   if (gap === undefined) return undefined;
   const described = inputs
-    .map((entry) => `"${entry.input.label}" ${formatCanonical(gap[entry.input.name] as number, entry.input.quantity)}`)
+    .map(
+      (entry) =>
+        `"${entry.input.label}" ${formatCanonical(gap[entry.input.name] as number, entry.input.quantity)}`,
+    )
     .join(' with ');
   return `readings such as ${described}`;
 }

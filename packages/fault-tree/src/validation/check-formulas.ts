@@ -1,7 +1,11 @@
 // Checks every formula of a tree — computed values and branch conditions — for syntax, allowed
 // constructs, known names and matching units, and orders the computed values so each is worked
 // out after the values it uses.
-import type { AnalysedFormula, FormulaNameTable, FormulaProblem } from '../formula/analyse-formula.js';
+import type {
+  AnalysedFormula,
+  FormulaNameTable,
+  FormulaProblem,
+} from '../formula/analyse-formula.js';
 import { analyseFormula } from '../formula/analyse-formula.js';
 import type { Dimension } from '../formula/dimension.js';
 import { describeDimension, dimensionOfQuantity, fitsDimension } from '../formula/dimension.js';
@@ -12,7 +16,10 @@ import type { DefinitionPath, TreeProblem } from './problem.js';
 import { problem } from './problem.js';
 import { adjacencyOf, findLoops, topologicalOrder } from './tree-graph.js';
 
-function nameTable(inputs: ReadonlyMap<string, InputEntry>, computed: readonly ComputedValue[]): FormulaNameTable {
+function nameTable(
+  inputs: ReadonlyMap<string, InputEntry>,
+  computed: readonly ComputedValue[],
+): FormulaNameTable {
   const table = new Map<string, Dimension>();
   for (const [name, entry] of inputs) {
     table.set(name, dimensionOfQuantity(entry.input.quantity));
@@ -47,7 +54,14 @@ function orderComputed(
   const edges = [...analysed].flatMap(([index, formula]) =>
     formula.names
       .filter((name) => indexByName.has(name))
-      .map((name) => ({ from: String(indexByName.get(name)), to: String(index), kind: 'branch' as const, key: '', label: '', path: [] })),
+      .map((name) => ({
+        from: String(indexByName.get(name)),
+        to: String(index),
+        kind: 'branch' as const,
+        key: '',
+        label: '',
+        path: [],
+      })),
   );
   const adjacency = adjacencyOf(edges, new Set(ids));
   const looping = new Set<string>();
@@ -55,9 +69,13 @@ function orderComputed(
     loop.forEach((id) => looping.add(id));
     const labels = loop.map((id) => `"${computed[Number(id)]?.label ?? id}"`).join(', ');
     problems.push(
-      problem('computed-cycle', `The computed values ${labels} are worked out from each other in a circle.`, {
-        path: ['computed', Number(loop[0])],
-      }),
+      problem(
+        'computed-cycle',
+        `The computed values ${labels} are worked out from each other in a circle.`,
+        {
+          path: ['computed', Number(loop[0])],
+        },
+      ),
     );
   }
   const entries: ComputedEntry[] = [];

@@ -26,9 +26,13 @@ export function checkGraph(
 
   if (!known.has(start)) {
     problems.push(
-      problem('unknown-start', `The tree starts at "${start}", but there is no node with that id.`, {
-        path: ['start'],
-      }),
+      problem(
+        'unknown-start',
+        `The tree starts at "${start}", but there is no node with that id.`,
+        {
+          path: ['start'],
+        },
+      ),
     );
   }
 
@@ -49,10 +53,14 @@ export function checkGraph(
     if (node.kind === 'procedure') {
       if (node.done === undefined) {
         problems.push(
-          problem('missing-target', `The procedure ${name} does not say where to go when it is done.`, {
-            nodeId: id,
-            path: ['nodes', id, 'done'],
-          }),
+          problem(
+            'missing-target',
+            `The procedure ${name} does not say where to go when it is done.`,
+            {
+              nodeId: id,
+              path: ['nodes', id, 'done'],
+            },
+          ),
         );
       }
       if (node.couldNotDo === undefined) {
@@ -88,10 +96,14 @@ export function checkGraph(
     for (const [id, node] of nodes) {
       if (!reachable.has(id)) {
         problems.push(
-          problem('unreachable', `${nodeName(id, node)} cannot be reached from the start of the tree.`, {
-            nodeId: id,
-            path: ['nodes', id],
-          }),
+          problem(
+            'unreachable',
+            `${nodeName(id, node)} cannot be reached from the start of the tree.`,
+            {
+              nodeId: id,
+              path: ['nodes', id],
+            },
+          ),
         );
       }
     }
@@ -113,7 +125,11 @@ export function checkGraph(
 
   const hasOutcome = [...nodes.values()].some((node) => node.kind === 'outcome');
   if (!hasOutcome && brokenIds.size === 0) {
-    problems.push(problem('no-outcome', 'The tree has no outcome, so no walk can reach a finding.', { path: ['nodes'] }));
+    problems.push(
+      problem('no-outcome', 'The tree has no outcome, so no walk can reach a finding.', {
+        path: ['nodes'],
+      }),
+    );
   }
 
   return { problems, facts: { edges, adjacency, reachable, hasLoops: loops.length > 0 } };

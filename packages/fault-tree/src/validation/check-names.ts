@@ -41,7 +41,11 @@ export function checkNames(
   const inputs = new Map<string, InputEntry>();
   const declaredAt = new Map<string, string>();
 
-  const declare = (name: string, owner: string, where: { nodeId?: string; path: DefinitionPath }) => {
+  const declare = (
+    name: string,
+    owner: string,
+    where: { nodeId?: string; path: DefinitionPath },
+  ) => {
     if (unusable.has(name)) {
       problems.push(
         problem(
@@ -54,10 +58,14 @@ export function checkNames(
     const earlier = declaredAt.get(name);
     if (earlier !== undefined) {
       problems.push(
-        problem('duplicate-name', `The name "${name}" is used by ${earlier} and again by ${owner}; each value needs its own name.`, {
-          ...where,
-          path: [...where.path, 'name'],
-        }),
+        problem(
+          'duplicate-name',
+          `The name "${name}" is used by ${earlier} and again by ${owner}; each value needs its own name.`,
+          {
+            ...where,
+            path: [...where.path, 'name'],
+          },
+        ),
       );
       return false;
     }
@@ -71,10 +79,14 @@ export function checkNames(
       node.choices.forEach((choice, index) => {
         if (seen.has(choice.id)) {
           problems.push(
-            problem('duplicate-choice', `${nodeName(id, node)} has two choices with the id "${choice.id}".`, {
-              nodeId: id,
-              path: ['nodes', id, 'choices', index, 'id'],
-            }),
+            problem(
+              'duplicate-choice',
+              `${nodeName(id, node)} has two choices with the id "${choice.id}".`,
+              {
+                nodeId: id,
+                path: ['nodes', id, 'choices', index, 'id'],
+              },
+            ),
           );
         }
         seen.add(choice.id);
@@ -90,10 +102,14 @@ export function checkNames(
       const { min, max } = input.range;
       if (!(Number.isFinite(min) && Number.isFinite(max) && min < max)) {
         problems.push(
-          problem('invalid-range', `The allowed range of "${input.label}" must have a minimum below its maximum.`, {
-            ...where,
-            path: [...where.path, 'range'],
-          }),
+          problem(
+            'invalid-range',
+            `The allowed range of "${input.label}" must have a minimum below its maximum.`,
+            {
+              ...where,
+              path: [...where.path, 'range'],
+            },
+          ),
         );
       }
     });

@@ -65,7 +65,10 @@ function issuesToProblems(
   nodeId?: string,
 ): TreeProblem[] {
   return error.issues.map((issue) => {
-    const path = [...prefix, ...issue.path.map((key) => (typeof key === 'number' ? key : String(key)))];
+    const path = [
+      ...prefix,
+      ...issue.path.map((key) => (typeof key === 'number' ? key : String(key))),
+    ];
     return problem('schema', `${describePath(path)} ${describeIssue(issue)}.`, {
       ...(nodeId === undefined ? {} : { nodeId }),
       path,
@@ -89,10 +92,14 @@ export function parseDefinition(raw: unknown): ParsedDefinition {
     const idCheck = nodeIdSchema.safeParse(id);
     if (!idCheck.success) {
       problems.push(
-        problem('schema', `The node id "${id}" is not usable: ${idCheck.error.issues[0]?.message ?? ''}`, {
-          nodeId: id,
-          path: ['nodes', id],
-        }),
+        problem(
+          'schema',
+          `The node id "${id}" is not usable: ${idCheck.error.issues[0]?.message ?? ''}`,
+          {
+            nodeId: id,
+            path: ['nodes', id],
+          },
+        ),
       );
     }
     const parsed = treeNodeSchema.safeParse(value);

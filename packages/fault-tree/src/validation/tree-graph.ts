@@ -51,7 +51,14 @@ export function edgesOfNode(id: string, node: TreeNode): TreeEdge[] {
     case 'procedure': {
       const edges: TreeEdge[] = [];
       if (node.done !== undefined) {
-        edges.push({ from: id, to: node.done, kind: 'done', key: 'done', label: 'Done', path: [...base, 'done'] });
+        edges.push({
+          from: id,
+          to: node.done,
+          kind: 'done',
+          key: 'done',
+          label: 'Done',
+          path: [...base, 'done'],
+        });
       }
       if (node.couldNotDo !== undefined) {
         edges.push({

@@ -37,8 +37,20 @@ function baseTree(): TreeDefinitionInput {
         hazards: ['fan'],
         cautions: [{ hazard: 'fan', text: 'Keep clear of the fan.' }],
         inputs: [
-          { name: 'inletTemp', label: 'Inlet hose', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 150 } },
-          { name: 'outletTemp', label: 'Outlet hose', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 150 } },
+          {
+            name: 'inletTemp',
+            label: 'Inlet hose',
+            quantity: 'temperature',
+            unit: 'degC',
+            range: { min: -40, max: 150 },
+          },
+          {
+            name: 'outletTemp',
+            label: 'Outlet hose',
+            quantity: 'temperature',
+            unit: 'degC',
+            range: { min: -40, max: 150 },
+          },
         ],
         branches: [{ when: 'drop > 20', to: 'fix' }],
         fallback: { to: 'temp' },
@@ -48,7 +60,13 @@ function baseTree(): TreeDefinitionInput {
         title: 'Engine temperature',
         prompt: 'Read live data',
         inputs: [
-          { name: 'engineTemp', label: 'Engine', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 150 } },
+          {
+            name: 'engineTemp',
+            label: 'Engine',
+            quantity: 'temperature',
+            unit: 'degC',
+            range: { min: -40, max: 150 },
+          },
         ],
         branches: [
           { when: 'engineTemp < 90', to: 'fine' },
@@ -76,6 +94,18 @@ function edit(change: (tree: TreeDefinitionInput, nodes: Nodes) => void): TreeDe
   return tree;
 }
 
+// Typed access into the plain objects the tests bend; throws rather than asserting non-null.
+function at<T>(items: readonly T[] | undefined, index: number): T {
+  const item = items?.[index];
+  if (item === undefined) throw new Error(`No item ${index}`);
+  return item;
+}
+const branchesOf = (node: unknown) =>
+  (node as { branches: Array<{ when: string; to: string }> }).branches;
+const choicesOf = (node: unknown) =>
+  (node as { choices: Array<{ id: string; to: string }> }).choices;
+const computedOf = (tree: TreeDefinitionInput) => tree.computed ?? [];
+
 function codes(tree: unknown) {
   return validateTree(tree).map((p) => ({ code: p.code, nodeId: p.nodeId }));
 }
@@ -94,8 +124,17 @@ describe('validateTree', () => {
     );
     expect(problems).toEqual(
       expect.arrayContaining([
-        expect.objectContaining({ code: 'schema', nodeId: 'fix', path: ['nodes', 'fix', 'title'], message: '"nodes › fix › title" is missing.' }),
-        expect.objectContaining({ code: 'schema', nodeId: 'ask', message: expect.stringContaining('colour') }),
+        expect.objectContaining({
+          code: 'schema',
+          nodeId: 'fix',
+          path: ['nodes', 'fix', 'title'],
+          message: '"nodes › fix › title" is missing.',
+        }),
+        expect.objectContaining({
+          code: 'schema',
+          nodeId: 'ask',
+          message: expect.stringContaining('colour'),
+        }),
       ]),
     );
     expect(validateTree({ format: 'something else' })[0]?.code).toBe('schema');
@@ -104,7 +143,7 @@ describe('validateTree', () => {
 
   it('reports a branch to an unknown node', () => {
     const tree = edit((_, nodes) => {
-      (nodes.temp as { branches: Array<{ to: string }> }).branches[1]!.to = 'nowhere';
+      at(branchesOf(nodes.temp), 1).to = 'nowhere';
     });
     expect(codes(tree)).toContainEqual({ code: 'unknown-target', nodeId: 'temp' });
     expect(validateTree(tree).find((p) => p.code === 'unknown-target')?.message).toBe(
@@ -113,10 +152,18 @@ describe('validateTree', () => {
   });
 
   it('reports an unknown start, unreachable nodes, dead ends and a missing target', () => {
-    expect(codes(edit((tree) => (tree.start = 'missing')))).toContainEqual({ code: 'unknown-start', nodeId: undefined });
-    expect(codes(edit((_, nodes) => (nodes.orphan = { kind: 'outcome', title: 'Orphan', rootCause: 'x', correction: 'y' })))).toEqual([
-      { code: 'unreachable', nodeId: 'orphan' },
-    ]);
+    expect(codes(edit((tree) => (tree.start = 'missing')))).toContainEqual({
+      code: 'unknown-start',
+      nodeId: undefined,
+    });
+    expect(
+      codes(
+        edit(
+          (_, nodes) =>
+            (nodes.orphan = { kind: 'outcome', title: 'Orphan', rootCause: 'x', correction: 'y' }),
+        ),
+      ),
+    ).toEqual([{ code: 'unreachable', nodeId: 'orphan' }]);
     const deadEnd = edit((_, nodes) => {
       (nodes.ask as { choices: unknown[] }).choices = [];
     });
@@ -133,12 +180,15 @@ describe('validateTree', () => {
     });
     const loop = validateTree(tree).find((p) => p.code === 'cycle');
     expect(loop?.nodeId).toBe('ask');
-    expect(loop?.message).toBe('The steps "Ask", "Hoses", "Engine temperature", "Take the pump out" lead round in a loop, so a walk could go round forever.');
+    expect(loop?.message).toBe(
+      'The steps "Ask", "Hoses", "Engine temperature", "Take the pump out" lead round in a loop, so a walk could go round forever.',
+    );
   });
 
   it('reports a tree without an outcome', () => {
     const tree = edit((_, nodes) => {
-      for (const id of ['fix', 'fine']) nodes[id] = { kind: 'question', title: id, prompt: '?', choices: [] };
+      for (const id of ['fix', 'fine'])
+        nodes[id] = { kind: 'question', title: id, prompt: '?', choices: [] };
     });
     expect(codes(tree)).toContainEqual({ code: 'no-outcome', nodeId: undefined });
   });
@@ -146,27 +196,46 @@ describe('validateTree', () => {
   it('reports formula problems on the node they belong to', () => {
     const withWhen = (when: string) =>
       edit((_, nodes) => {
-        (nodes.temp as { branches: Array<{ when: string }> }).branches[0]!.when = when;
+        at(branchesOf(nodes.temp), 0).when = when;
       });
-    expect(codes(withWhen('engineTemp <'))).toContainEqual({ code: 'formula-syntax', nodeId: 'temp' });
-    expect(codes(withWhen('engineTemp = 1'))).toContainEqual({ code: 'formula-not-allowed', nodeId: 'temp' });
-    expect(codes(withWhen('engineTmp < 90'))).toContainEqual({ code: 'unknown-name', nodeId: 'temp' });
-    expect(codes(withWhen('engineTemp < 1 bar'))).toContainEqual({ code: 'mismatched-units', nodeId: 'temp' });
-    expect(codes(withWhen('engineTemp - 90 degC'))).toContainEqual({ code: 'formula-not-condition', nodeId: 'temp' });
-    const message = validateTree(withWhen('engineTemp < 1 bar')).find((p) => p.code === 'mismatched-units')?.message;
-    expect(message).toBe('"Engine temperature", branch 1 ("engineTemp < 1 bar"): The formula compares a temperature with a pressure.');
+    expect(codes(withWhen('engineTemp <'))).toContainEqual({
+      code: 'formula-syntax',
+      nodeId: 'temp',
+    });
+    expect(codes(withWhen('engineTemp = 1'))).toContainEqual({
+      code: 'formula-not-allowed',
+      nodeId: 'temp',
+    });
+    expect(codes(withWhen('engineTmp < 90'))).toContainEqual({
+      code: 'unknown-name',
+      nodeId: 'temp',
+    });
+    expect(codes(withWhen('engineTemp < 1 bar'))).toContainEqual({
+      code: 'mismatched-units',
+      nodeId: 'temp',
+    });
+    expect(codes(withWhen('engineTemp - 90 degC'))).toContainEqual({
+      code: 'formula-not-condition',
+      nodeId: 'temp',
+    });
+    const message = validateTree(withWhen('engineTemp < 1 bar')).find(
+      (p) => p.code === 'mismatched-units',
+    )?.message;
+    expect(message).toBe(
+      '"Engine temperature", branch 1 ("engineTemp < 1 bar"): The formula compares a temperature with a pressure.',
+    );
   });
 
   it('reports computed values that do not check out', () => {
     const wrongQuantity = edit((tree) => {
-      tree.computed![0]!.quantity = 'pressure';
-      tree.computed![0]!.unit = 'bar';
+      at(computedOf(tree), 0).quantity = 'pressure';
+      at(computedOf(tree), 0).unit = 'bar';
     });
     expect(validateTree(wrongQuantity)).toContainEqual(
       expect.objectContaining({ code: 'mismatched-units', path: ['computed', 0, 'formula'] }),
     );
     const circular = edit((tree) => {
-      tree.computed!.push(
+      computedOf(tree).push(
         { name: 'a', label: 'A', formula: 'b + 1 K', quantity: 'temperatureDelta', unit: 'K' },
         { name: 'b', label: 'B', formula: 'a + 1 K', quantity: 'temperatureDelta', unit: 'K' },
       );
@@ -177,7 +246,7 @@ describe('validateTree', () => {
   it('reports readings a condition uses before they are measured on every way there', () => {
     const tree = edit((_, nodes) => {
       // "temp" is reached only through "hoses", so inletTemp is fine there; make "hoses" use engineTemp.
-      (nodes.hoses as { branches: Array<{ when: string }> }).branches[0]!.when = 'drop > 20 or engineTemp > 120';
+      at(branchesOf(nodes.hoses), 0).when = 'drop > 20 or engineTemp > 120';
     });
     const problem = validateTree(tree).find((p) => p.code === 'value-not-available');
     expect(problem?.nodeId).toBe('hoses');
@@ -185,8 +254,8 @@ describe('validateTree', () => {
       '"Hoses", branch 1: the condition uses "Engine" (read in "Engine temperature"), which is not measured on every way to this step.',
     );
     const skipped = edit((_, nodes) => {
-      (nodes.ask as { choices: Array<{ to: string }> }).choices[1]!.to = 'temp';
-      (nodes.temp as { branches: Array<{ when: string }> }).branches[0]!.when = 'engineTemp < 90 and inletTemp < 200';
+      at(choicesOf(nodes.ask), 1).to = 'temp';
+      at(branchesOf(nodes.temp), 0).when = 'engineTemp < 90 and inletTemp < 200';
     });
     expect(codes(skipped)).toContainEqual({ code: 'value-not-available', nodeId: 'temp' });
   });
@@ -194,10 +263,12 @@ describe('validateTree', () => {
   describe('numeric branches that leave part of the range unrouted', () => {
     const withBranches = (...when: string[]) =>
       edit((_, nodes) => {
-        (nodes.temp as { branches: Array<{ when: string; to: string }> }).branches = when.map((w, i) => ({
-          when: w,
-          to: i % 2 === 0 ? 'fine' : 'work',
-        }));
+        (nodes.temp as { branches: Array<{ when: string; to: string }> }).branches = when.map(
+          (w, i) => ({
+            when: w,
+            to: i % 2 === 0 ? 'fine' : 'work',
+          }),
+        );
       });
 
     it('finds a single missing point between < and >', () => {
@@ -211,14 +282,20 @@ describe('validateTree', () => {
     it('finds a gap between two thresholds and the ends of the range', () => {
       const gap = validateTree(withBranches('engineTemp <= 89', 'engineTemp >= 90'))[0];
       expect(gap?.message).toContain('from about 89 °C to 90 °C');
-      const top = validateTree(withBranches('engineTemp < 100')).find((p) => p.code === 'range-not-covered');
+      const top = validateTree(withBranches('engineTemp < 100')).find(
+        (p) => p.code === 'range-not-covered',
+      );
       expect(top?.message).toContain('from about 100 °C to 150 °C');
-      const bottom = validateTree(withBranches('engineTemp <= 150 and engineTemp > -40')).find((p) => p.code === 'range-not-covered');
+      const bottom = validateTree(withBranches('engineTemp <= 150 and engineTemp > -40')).find(
+        (p) => p.code === 'range-not-covered',
+      );
       expect(bottom?.message).toContain('exactly -40 °C');
     });
 
     it('finds a gap in unit-converted thresholds', () => {
-      const problem = validateTree(withBranches('engineTemp < 194 degF', 'engineTemp > 90 degC'))[0];
+      const problem = validateTree(
+        withBranches('engineTemp < 194 degF', 'engineTemp > 90 degC'),
+      )[0];
       expect(problem?.message).toContain('exactly 90 °C');
     });
 
@@ -228,7 +305,15 @@ describe('validateTree', () => {
           kind: 'measurement',
           title: 'Concentration',
           prompt: 'Refractometer',
-          inputs: [{ name: 'egPercent', label: 'Glycol', quantity: 'percentage', unit: '%', range: { min: 0, max: 50 } }],
+          inputs: [
+            {
+              name: 'egPercent',
+              label: 'Glycol',
+              quantity: 'percentage',
+              unit: '%',
+              range: { min: 0, max: 50 },
+            },
+          ],
           branches: [
             { when: 'egFreezePoint(egPercent) > -20 degC', to: 'fine' },
             { when: 'egFreezePoint(egPercent) < -21 degC', to: 'work' },
@@ -255,7 +340,9 @@ describe('validateTree', () => {
 
     it('accepts complete bands and chained comparisons', () => {
       expect(validateTree(withBranches('engineTemp < 90', 'engineTemp >= 90'))).toEqual([]);
-      expect(validateTree(withBranches('engineTemp < 80', '80 <= engineTemp <= 95', 'engineTemp > 95'))).toEqual([]);
+      expect(
+        validateTree(withBranches('engineTemp < 80', '80 <= engineTemp <= 95', 'engineTemp > 95')),
+      ).toEqual([]);
     });
   });
 
@@ -277,11 +364,25 @@ describe('validateTree', () => {
 
   it('reports names, units and ranges that cannot work', () => {
     const tree = edit((_, nodes) => {
-      const temp = nodes.temp as { inputs: Array<{ name: string; unit: string; range: { min: number; max: number } }> };
-      temp.inputs.push({ ...temp.inputs[0]!, name: 'inletTemp' } as never);
-      temp.inputs.push({ name: 'min', label: 'Min', quantity: 'number', unit: 'none', range: { min: 0, max: 1 } } as never);
-      temp.inputs.push({ name: 'oddUnit', label: 'Odd', quantity: 'pressure', unit: 'psi', range: { min: 2, max: 1 } } as never);
-      (nodes.ask as { choices: Array<{ id: string }> }).choices[1]!.id = 'yes';
+      const temp = nodes.temp as {
+        inputs: Array<{ name: string; unit: string; range: { min: number; max: number } }>;
+      };
+      temp.inputs.push({ ...at(temp.inputs, 0), name: 'inletTemp' } as never);
+      temp.inputs.push({
+        name: 'min',
+        label: 'Min',
+        quantity: 'number',
+        unit: 'none',
+        range: { min: 0, max: 1 },
+      } as never);
+      temp.inputs.push({
+        name: 'oddUnit',
+        label: 'Odd',
+        quantity: 'pressure',
+        unit: 'psi',
+        range: { min: 2, max: 1 },
+      } as never);
+      at(choicesOf(nodes.ask), 1).id = 'yes';
     });
     const found = codes(tree);
     expect(found).toEqual(
@@ -297,19 +398,21 @@ describe('validateTree', () => {
 
   it('returns every problem at once, not just the first', () => {
     const tree = edit((tree, nodes) => {
-      (nodes.temp as { branches: Array<{ to: string }> }).branches[1]!.to = 'nowhere';
+      at(branchesOf(nodes.temp), 1).to = 'nowhere';
       (nodes.work as { hazards: string[] }).hazards = ['lifting'];
       nodes.orphan = { kind: 'outcome', title: 'Orphan', rootCause: 'x', correction: 'y' };
-      tree.computed![0]!.formula = 'inletTemp + outletTemp';
+      at(computedOf(tree), 0).formula = 'inletTemp + outletTemp';
     });
     const found = new Set(validateTree(tree).map((p) => p.code));
-    expect(found).toEqual(new Set(['unknown-target', 'hazard-without-caution', 'unreachable', 'mismatched-units']));
+    expect(found).toEqual(
+      new Set(['unknown-target', 'hazard-without-caution', 'unreachable', 'mismatched-units']),
+    );
   });
 
   it('still checks the rest of the tree when one node is broken', () => {
     const tree = edit((_, nodes) => {
       (nodes.fine as { kind: string }).kind = 'finding';
-      (nodes.temp as { branches: Array<{ when: string }> }).branches[0]!.when = 'nope < 1';
+      at(branchesOf(nodes.temp), 0).when = 'nope < 1';
     });
     const found = codes(tree);
     expect(found).toContainEqual({ code: 'schema', nodeId: 'fine' });

@@ -24,7 +24,9 @@ export interface ReadingsCheck {
 
 function unitList(units: readonly UnitCode[]): string {
   const shown = units.map((u) => unitSymbol(u) || 'plain numbers');
-  return shown.length <= 1 ? (shown[0] ?? '') : `${shown.slice(0, -1).join(', ')} or ${shown.at(-1) ?? ''}`;
+  return shown.length <= 1
+    ? (shown[0] ?? '')
+    : `${shown.slice(0, -1).join(', ')} or ${shown.at(-1) ?? ''}`;
 }
 
 /** Checks `readings` against the node's inputs; with `partial`, missing readings are not a problem. */
@@ -38,14 +40,22 @@ export function checkReadings(
   const known = new Set(node.inputs.map((input) => input.name));
   for (const name of Object.keys(readings)) {
     if (!known.has(name)) {
-      problems.push({ code: 'unexpected-reading', input: name, message: `"${name}" is not a reading of this step.` });
+      problems.push({
+        code: 'unexpected-reading',
+        input: name,
+        message: `"${name}" is not a reading of this step.`,
+      });
     }
   }
   for (const input of node.inputs) {
     const reading = Object.hasOwn(readings, input.name) ? readings[input.name] : undefined;
     if (reading === undefined) {
       if (!partial) {
-        problems.push({ code: 'missing-reading', input: input.name, message: `Enter "${input.label}".` });
+        problems.push({
+          code: 'missing-reading',
+          input: input.name,
+          message: `Enter "${input.label}".`,
+        });
       }
       continue;
     }
@@ -58,7 +68,11 @@ export function checkReadings(
       continue;
     }
     if (!Number.isFinite(reading.value)) {
-      problems.push({ code: 'not-a-number', input: input.name, message: `"${input.label}" must be a number.` });
+      problems.push({
+        code: 'not-a-number',
+        input: input.name,
+        message: `"${input.label}" must be a number.`,
+      });
       continue;
     }
     const value = toCanonical(reading.value, reading.unit, input.quantity);

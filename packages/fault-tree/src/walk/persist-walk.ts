@@ -33,7 +33,10 @@ export type RestoreResult =
 
 /** A JSON-safe record of the walk, for storage or for carrying between devices. */
 export function persistWalk(tree: CompiledTree, snapshot: WalkSnapshot): PersistedWalk {
-  const persisted = tree.machine.getPersistedSnapshot(snapshot) as unknown as Record<string, unknown>;
+  const persisted = tree.machine.getPersistedSnapshot(snapshot) as unknown as Record<
+    string,
+    unknown
+  >;
   return {
     format: WALK_FORMAT,
     formatVersion: 1,
@@ -63,12 +66,16 @@ export function restoreWalk(tree: CompiledTree, persisted: unknown): RestoreResu
     return {
       ok: false,
       code: 'tree-changed',
-      reason: 'The saved walk was made on different content of this tree; replay its answers instead.',
+      reason:
+        'The saved walk was made on different content of this tree; replay its answers instead.',
     };
   }
   const replay = replayWalk(tree, shape.data.context.history);
   const expected = persistWalk(tree, replay.snapshot).snapshot;
-  if (replay.divergence !== null || fingerprintOf(expected) !== fingerprintOf(parsed.data.snapshot)) {
+  if (
+    replay.divergence !== null ||
+    fingerprintOf(expected) !== fingerprintOf(parsed.data.snapshot)
+  ) {
     return {
       ok: false,
       code: 'snapshot-mismatch',
@@ -80,6 +87,11 @@ export function restoreWalk(tree: CompiledTree, persisted: unknown): RestoreResu
 }
 
 /** An XState actor for the walk (e.g. for a screen), optionally resumed from a persisted snapshot. */
-export function createWalkActor(tree: CompiledTree, snapshot?: Snapshot<unknown>): Actor<WalkMachine> {
-  return snapshot === undefined ? createActor(tree.machine) : createActor(tree.machine, { snapshot });
+export function createWalkActor(
+  tree: CompiledTree,
+  snapshot?: Snapshot<unknown>,
+): Actor<WalkMachine> {
+  return snapshot === undefined
+    ? createActor(tree.machine)
+    : createActor(tree.machine, { snapshot });
 }

@@ -58,5 +58,9 @@ export type WalkSummary = WalkView & {
  */
 export function summariseWalk(tree: CompiledTree, events: readonly unknown[]): WalkSummary {
   const replay = replayWalk(tree, events);
-  return { ...describeWalk(tree, replay.snapshot), divergence: replay.divergence, applied: replay.applied };
+  return {
+    ...describeWalk(tree, replay.snapshot),
+    divergence: replay.divergence,
+    applied: replay.applied,
+  };
 }

@@ -25,7 +25,12 @@ export type Resolution =
       /** All values after the answer: readings on the path plus computed values. */
       readonly values: Readonly<Record<string, number>>;
     }
-  | { readonly ok: true; readonly kind: 'back'; readonly to: string; readonly values: Readonly<Record<string, number>> }
+  | {
+      readonly ok: true;
+      readonly kind: 'back';
+      readonly to: string;
+      readonly values: Readonly<Record<string, number>>;
+    }
   | { readonly ok: false; readonly rejection: AnswerRejection };
 
 const expectedEvent: Readonly<Record<TreeNode['kind'], WalkEvent['type'] | undefined>> = {
@@ -126,10 +131,24 @@ function routeMeasurement(
   const index = node.branches.findIndex((_, i) => branchHolds(formulas[i], scope));
   const branch = index >= 0 ? node.branches[index] : undefined;
   if (branch !== undefined) {
-    return { ok: true, kind: 'answer', route: `branch:${index}`, to: branch.to, readings, values: scope };
+    return {
+      ok: true,
+      kind: 'answer',
+      route: `branch:${index}`,
+      to: branch.to,
+      readings,
+      values: scope,
+    };
   }
   if (node.fallback !== undefined) {
-    return { ok: true, kind: 'answer', route: 'fallback', to: node.fallback.to, readings, values: scope };
+    return {
+      ok: true,
+      kind: 'answer',
+      route: 'fallback',
+      to: node.fallback.to,
+      readings,
+      values: scope,
+    };
   }
   return {
     ok: false,
@@ -146,10 +165,17 @@ function resolveBack(tree: RuntimeTree, nodeId: string, context: WalkContext): R
   if (previous === undefined) {
     return {
       ok: false,
-      rejection: rejection('nothing-to-go-back-to', nodeId, 'The walk is at its first step; there is nothing to go back to.'),
+      rejection: rejection(
+        'nothing-to-go-back-to',
+        nodeId,
+        'The walk is at its first step; there is nothing to go back to.',
+      ),
     };
   }
-  const values = withComputedValues(tree.formulas.computed, readingsOnPath(context.path.slice(0, -1)));
+  const values = withComputedValues(
+    tree.formulas.computed,
+    readingsOnPath(context.path.slice(0, -1)),
+  );
   return { ok: true, kind: 'back', to: previous.nodeId, values };
 }
 
@@ -168,7 +194,11 @@ export function resolveEvent(
   if (node === undefined) {
     return {
       ok: false,
-      rejection: rejection('not-current-step', currentNodeId, `The walk is at "${currentNodeId}", which this tree does not have.`),
+      rejection: rejection(
+        'not-current-step',
+        currentNodeId,
+        `The walk is at "${currentNodeId}", which this tree does not have.`,
+      ),
     };
   }
   if (event.type === 'walk.back') {
@@ -188,27 +218,45 @@ export function resolveEvent(
   if (event.type !== expected) {
     return {
       ok: false,
-      rejection: rejection('wrong-answer-kind', currentNodeId, `"${node.title}" is answered with ${kindWords[node.kind]}.`),
+      rejection: rejection(
+        'wrong-answer-kind',
+        currentNodeId,
+        `"${node.title}" is answered with ${kindWords[node.kind]}.`,
+      ),
     };
   }
   const values = context.values;
   switch (event.type) {
     case 'answer.choice': {
-      const choice = node.kind === 'question' ? node.choices.find((c) => c.id === event.choiceId) : undefined;
+      const choice =
+        node.kind === 'question' ? node.choices.find((c) => c.id === event.choiceId) : undefined;
       if (choice === undefined) {
         return {
           ok: false,
-          rejection: rejection('unknown-choice', currentNodeId, `"${event.choiceId}" is not one of the choices of "${node.title}".`),
+          rejection: rejection(
+            'unknown-choice',
+            currentNodeId,
+            `"${event.choiceId}" is not one of the choices of "${node.title}".`,
+          ),
         };
       }
       return { ok: true, kind: 'answer', route: `choice:${choice.id}`, to: choice.to, values };
     }
     case 'answer.procedure': {
-      const to = node.kind === 'procedure' ? (event.result === 'done' ? node.done : node.couldNotDo) : undefined;
+      const to =
+        node.kind === 'procedure'
+          ? event.result === 'done'
+            ? node.done
+            : node.couldNotDo
+          : undefined;
       if (to === undefined) {
         return {
           ok: false,
-          rejection: rejection('no-way-on', currentNodeId, `"${node.title}" has no next step for this result.`),
+          rejection: rejection(
+            'no-way-on',
+            currentNodeId,
+            `"${node.title}" has no next step for this result.`,
+          ),
         };
       }
       return { ok: true, kind: 'answer', route: event.result, to, values };
@@ -216,6 +264,13 @@ export function resolveEvent(
     case 'answer.measurement':
       return node.kind === 'measurement'
         ? routeMeasurement(tree, currentNodeId, node, context, event)
-        : { ok: false, rejection: rejection('wrong-answer-kind', currentNodeId, `"${node.title}" takes no readings.`) };
+        : {
+            ok: false,
+            rejection: rejection(
+              'wrong-answer-kind',
+              currentNodeId,
+              `"${node.title}" takes no readings.`,
+            ),
+          };
   }
 }

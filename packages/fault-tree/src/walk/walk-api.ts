@@ -48,7 +48,11 @@ export function startWalk(tree: CompiledTree): WalkSnapshot {
 }
 
 /** Whether `event` (any value, e.g. a request body) is acceptable now, and where it would lead. Never throws. */
-export function checkAnswer(tree: CompiledTree, snapshot: WalkSnapshot, event: unknown): AnswerCheck {
+export function checkAnswer(
+  tree: CompiledTree,
+  snapshot: WalkSnapshot,
+  event: unknown,
+): AnswerCheck {
   const nodeId = currentNodeIdOf(snapshot);
   const parsed = walkEventSchema.safeParse(event);
   if (!parsed.success) {
@@ -56,7 +60,11 @@ export function checkAnswer(tree: CompiledTree, snapshot: WalkSnapshot, event: u
     const where = detail && detail.path.length > 0 ? ` at "${detail.path.join('.')}"` : '';
     return {
       ok: false,
-      rejection: rejection('malformed-event', nodeId, `The answer is not in the expected form${where}: ${detail?.message ?? 'unknown problem'}.`),
+      rejection: rejection(
+        'malformed-event',
+        nodeId,
+        `The answer is not in the expected form${where}: ${detail?.message ?? 'unknown problem'}.`,
+      ),
     };
   }
   const resolution = resolveEvent(tree, nodeId, snapshot.context, parsed.data);
@@ -78,13 +86,20 @@ export class WalkInvariantError extends Error {
 }
 
 /** Applies `event` if it is acceptable; otherwise returns the unchanged snapshot and the reason. */
-export function applyWalkEvent(tree: CompiledTree, snapshot: WalkSnapshot, event: unknown): ApplyResult {
+export function applyWalkEvent(
+  tree: CompiledTree,
+  snapshot: WalkSnapshot,
+  event: unknown,
+): ApplyResult {
   const check = checkAnswer(tree, snapshot, event);
   if (!check.ok) {
     return { ok: false, snapshot, rejection: check.rejection };
   }
   const [next] = transition(tree.machine, snapshot, check.event);
-  if (currentNodeIdOf(next) !== check.toNodeId || next.context.history.length !== snapshot.context.history.length + 1) {
+  if (
+    currentNodeIdOf(next) !== check.toNodeId ||
+    next.context.history.length !== snapshot.context.history.length + 1
+  ) {
     throw new WalkInvariantError(
       `The walk machine went to "${currentNodeIdOf(next)}" where the answer check expected "${check.toNodeId}".`,
     );

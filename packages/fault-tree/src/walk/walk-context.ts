@@ -4,7 +4,8 @@
 import type { AnswerEvent, WalkEvent } from './walk-events.js';
 
 /** How an answer left its node: a choice, a branch, the fallback or a procedure result. */
-export type RouteKey = `choice:${string}` | `branch:${number}` | 'fallback' | 'done' | 'could-not-do';
+export type RouteKey =
+  `choice:${string}` | `branch:${number}` | 'fallback' | 'done' | 'could-not-do';
 
 export interface PathStep {
   readonly nodeId: string;

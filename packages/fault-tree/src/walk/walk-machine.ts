@@ -26,13 +26,18 @@ interface AnswerParams {
 
 export function buildWalkMachine(tree: RuntimeTree) {
   // Several guards look at the same measurement answer; convert its readings once per event.
-  const prepared = new WeakMap<object, { context: WalkContext; result: PreparedMeasurement | undefined }>();
+  const prepared = new WeakMap<
+    object,
+    { context: WalkContext; result: PreparedMeasurement | undefined }
+  >();
   const prepare = (nodeId: string, context: WalkContext, event: MeasurementAnswer) => {
     const cached = prepared.get(event);
     if (cached && cached.context === context) return cached.result;
     const node = tree.nodes.get(nodeId);
     const preparation =
-      node?.kind === 'measurement' ? prepareMeasurement(tree, nodeId, node, context, event) : undefined;
+      node?.kind === 'measurement'
+        ? prepareMeasurement(tree, nodeId, node, context, event)
+        : undefined;
     const result = preparation?.ok ? preparation.prepared : undefined;
     prepared.set(event, { context, result });
     return result;
@@ -51,7 +56,8 @@ export function buildWalkMachine(tree: RuntimeTree) {
         fresh(params.nodeId, context, event) &&
         event.choiceId === params.choiceId,
       branchHolds: ({ context, event }, params: { nodeId: string; branch: number }) => {
-        if (event.type !== 'answer.measurement' || !fresh(params.nodeId, context, event)) return false;
+        if (event.type !== 'answer.measurement' || !fresh(params.nodeId, context, event))
+          return false;
         const ready = prepare(params.nodeId, context, event);
         const formula = tree.formulas.branches.get(params.nodeId)?.[params.branch];
         return ready !== undefined && branchHolds(formula, ready.scope);
@@ -78,7 +84,9 @@ export function buildWalkMachine(tree: RuntimeTree) {
       recordAnswer: assign(({ context, event }, params: AnswerParams) => {
         if (event.type === 'walk.back') return {};
         const readings =
-          event.type === 'answer.measurement' ? prepare(params.nodeId, context, event)?.readings : undefined;
+          event.type === 'answer.measurement'
+            ? prepare(params.nodeId, context, event)?.readings
+            : undefined;
         const path = [
           ...context.path,
           {
@@ -144,7 +152,12 @@ export function buildWalkMachine(tree: RuntimeTree) {
           'answer.procedure': results.flatMap(({ result, to }) =>
             to === undefined
               ? []
-              : [{ guard: { type: 'resultIs' as const, params: { nodeId, result } }, ...answer(nodeId, result, to) }],
+              : [
+                  {
+                    guard: { type: 'resultIs' as const, params: { nodeId, result } },
+                    ...answer(nodeId, result, to),
+                  },
+                ],
           ),
         };
       }
@@ -164,7 +177,9 @@ export function buildWalkMachine(tree: RuntimeTree) {
   );
 
   // Only nodes with a way on can be the previous step of a walk.
-  const returnable = [...tree.nodes.keys()].filter((nodeId) => (tree.successors.get(nodeId) ?? []).length > 0);
+  const returnable = [...tree.nodes.keys()].filter(
+    (nodeId) => (tree.successors.get(nodeId) ?? []).length > 0,
+  );
 
   return walkSetup.createMachine({
     id: 'heatpath-walk',

@@ -18,7 +18,9 @@ import { currentNodeIdOf, describeWalk } from './walk-view.js';
 function compileShape(shape: SyntheticShape): CompiledTree {
   const result = compileTree(buildSyntheticTree(shape));
   if (!result.ok) {
-    throw new Error(`A generated tree did not compile: ${result.problems.map((p) => p.message).join(' | ')}`);
+    throw new Error(
+      `A generated tree did not compile: ${result.problems.map((p) => p.message).join(' | ')}`,
+    );
   }
   return result.tree;
 }
@@ -41,7 +43,11 @@ describe('property: generated trees', () => {
         const tree = compileShape(shape);
         let snapshot = startWalk(tree);
         let steps = 0;
-        for (let event = randomAnswer(tree, snapshot, random); event; event = randomAnswer(tree, snapshot, random)) {
+        for (
+          let event = randomAnswer(tree, snapshot, random);
+          event;
+          event = randomAnswer(tree, snapshot, random)
+        ) {
           const result = applyWalkEvent(tree, snapshot, event);
           if (!result.ok) throw new Error(result.rejection.message);
           snapshot = result.snapshot;
@@ -68,9 +74,24 @@ function eventArbitrary(tree: CompiledTree): fc.Arbitrary<unknown> {
     unit: fc.constantFrom('degC', 'degF', 'K', 'bar', 'psi', 'L', '%', 'none', 'furlong'),
   });
   return fc.oneof(
-    fc.record({ type: fc.constant('answer.choice'), nodeId, position, choiceId: fc.constantFrom('c0', 'c1', 'c2', 'zz') }),
-    fc.record({ type: fc.constant('answer.procedure'), nodeId, position, result: fc.constantFrom('done', 'could-not-do', 'maybe') }),
-    fc.record({ type: fc.constant('answer.measurement'), nodeId, position, readings: fc.dictionary(fc.constantFrom(...names), reading) }),
+    fc.record({
+      type: fc.constant('answer.choice'),
+      nodeId,
+      position,
+      choiceId: fc.constantFrom('c0', 'c1', 'c2', 'zz'),
+    }),
+    fc.record({
+      type: fc.constant('answer.procedure'),
+      nodeId,
+      position,
+      result: fc.constantFrom('done', 'could-not-do', 'maybe'),
+    }),
+    fc.record({
+      type: fc.constant('answer.measurement'),
+      nodeId,
+      position,
+      readings: fc.dictionary(fc.constantFrom(...names), reading),
+    }),
     fc.record({ type: fc.constant('walk.back'), nodeId, position }),
     fc.anything(),
   );
@@ -82,7 +103,11 @@ describe('property: walking with arbitrary input', () => {
       fc.property(
         shapeArbitrary(25).chain((shape) => {
           const tree = compileShape(shape);
-          return fc.tuple(fc.constant(tree), fc.array(eventArbitrary(tree), { maxLength: 30 }), randomSourceArbitrary());
+          return fc.tuple(
+            fc.constant(tree),
+            fc.array(eventArbitrary(tree), { maxLength: 30 }),
+            randomSourceArbitrary(),
+          );
         }),
         ([tree, events, random]) => {
           let snapshot: WalkSnapshot = startWalk(tree);
@@ -93,7 +118,9 @@ describe('property: walking with arbitrary input', () => {
             const parsed = walkEventSchema.safeParse(event);
             if (parsed.success) {
               const [next] = transition(tree.machine, snapshot, parsed.data);
-              expect(next.context.history.length).toBe(snapshot.context.history.length + (check.ok ? 1 : 0));
+              expect(next.context.history.length).toBe(
+                snapshot.context.history.length + (check.ok ? 1 : 0),
+              );
               if (check.ok) expect(currentNodeIdOf(next)).toBe(check.toNodeId);
             } else {
               expect(check.ok).toBe(false);

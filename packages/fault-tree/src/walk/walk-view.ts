@@ -4,7 +4,13 @@
 import type { SnapshotFrom } from 'xstate';
 import type { CompiledTree } from '../compile/compile-tree.js';
 import { withComputedValues } from '../model/compute-values.js';
-import type { ComputedValue, MeasurementInput, NodeKind, OutcomeNode, TreeNode } from '../schema/tree-schema.js';
+import type {
+  ComputedValue,
+  MeasurementInput,
+  NodeKind,
+  OutcomeNode,
+  TreeNode,
+} from '../schema/tree-schema.js';
 import { formatCanonical, formatWithUnit } from '../units/format-value.js';
 import type { Quantity, UnitCode } from '../units/quantities.js';
 import type { PathStep, RouteKey } from './walk-context.js';
@@ -73,7 +79,9 @@ export interface WalkView {
 }
 
 export function currentNodeIdOf(snapshot: WalkSnapshot): string {
-  return typeof snapshot.value === 'string' ? snapshot.value : String(Object.keys(snapshot.value)[0]);
+  return typeof snapshot.value === 'string'
+    ? snapshot.value
+    : String(Object.keys(snapshot.value)[0]);
 }
 
 function readingView(
@@ -100,9 +108,11 @@ function stepReadings(tree: CompiledTree, step: PathStep): ReadingView[] {
   if (node?.kind !== 'measurement' || step.answer.type !== 'answer.measurement') return [];
   const entered = step.answer.readings;
   return node.inputs.flatMap((input) => {
-    const reading = entered[input.name];
+    const reading = Object.hasOwn(entered, input.name) ? entered[input.name] : undefined;
     const canonical = step.readings?.[input.name];
-    return reading === undefined || canonical === undefined ? [] : [readingView(step.nodeId, input, reading, canonical)];
+    return reading === undefined || canonical === undefined
+      ? []
+      : [readingView(step.nodeId, input, reading, canonical)];
   });
 }
 
@@ -139,7 +149,10 @@ function pathEntry(tree: CompiledTree, step: PathStep): PathEntryView {
   };
 }
 
-function computedView(value: ComputedValue, values: Readonly<Record<string, number>>): ComputedView {
+function computedView(
+  value: ComputedValue,
+  values: Readonly<Record<string, number>>,
+): ComputedView {
   const known = Object.hasOwn(values, value.name) ? values[value.name] : undefined;
   return {
     name: value.name,
@@ -152,7 +165,10 @@ function computedView(value: ComputedValue, values: Readonly<Record<string, numb
 }
 
 /** The computed values of the tree given `values`, in declaration order. */
-export function computedViews(tree: CompiledTree, values: Readonly<Record<string, number>>): ComputedView[] {
+export function computedViews(
+  tree: CompiledTree,
+  values: Readonly<Record<string, number>>,
+): ComputedView[] {
   const all = withComputedValues(tree.formulas.computed, values);
   return tree.definition.computed.map((value) => computedView(value, all));
 }

@@ -39,8 +39,20 @@ const definition: TreeDefinitionInput = {
       title: 'Hoses',
       prompt: 'Read the hoses',
       inputs: [
-        { name: 'inletTemp', label: 'Inlet hose', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 150 } },
-        { name: 'outletTemp', label: 'Outlet hose', quantity: 'temperature', unit: 'degC', range: { min: -40, max: 150 } },
+        {
+          name: 'inletTemp',
+          label: 'Inlet hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: -40, max: 150 },
+        },
+        {
+          name: 'outletTemp',
+          label: 'Outlet hose',
+          quantity: 'temperature',
+          unit: 'degC',
+          range: { min: -40, max: 150 },
+        },
       ],
       branches: [{ when: 'drop > 20', to: 'fix', label: 'Large drop' }],
       fallback: { to: 'work' },
@@ -69,7 +81,13 @@ const tree = compiled();
 describe('walking a tree', () => {
   it('starts at the start node with an empty path', () => {
     const view = describeWalk(tree, startWalk(tree));
-    expect(view).toMatchObject({ currentNodeId: 'ask', status: 'in-progress', path: [], position: 0, canGoBack: false });
+    expect(view).toMatchObject({
+      currentNodeId: 'ask',
+      status: 'in-progress',
+      path: [],
+      position: 0,
+      canGoBack: false,
+    });
   });
 
   it('converts readings, computes values and follows the first branch that holds', () => {
@@ -93,7 +111,10 @@ describe('walking a tree', () => {
   });
 
   it('takes the fallback when no branch holds', () => {
-    const snapshot = runScript(tree, [choose('ask', 'yes'), measure('hoses', { inletTemp: [90, 'degC'], outletTemp: [84, 'degC'] })]);
+    const snapshot = runScript(tree, [
+      choose('ask', 'yes'),
+      measure('hoses', { inletTemp: [90, 'degC'], outletTemp: [84, 'degC'] }),
+    ]);
     expect(describeWalk(tree, snapshot).currentNodeId).toBe('work');
   });
 
@@ -129,7 +150,8 @@ describe('walking a tree', () => {
           code: 'not-current-step',
           stale: true,
           nodeId: 'hoses',
-          message: 'This answer is for step "ask", but the walk is now at "hoses". Reload the case to see where it stands.',
+          message:
+            'This answer is for step "ask", but the walk is now at "hoses". Reload the case to see where it stands.',
         },
       });
     });
@@ -139,24 +161,34 @@ describe('walking a tree', () => {
       const replayedSubmit = { ...choose('ask', 'yes'), position: 0 };
       const check = checkAnswer(tree, returned, replayedSubmit);
       expect(check.ok).toBe(false);
-      if (!check.ok) expect(check.rejection).toMatchObject({ code: 'out-of-sequence', stale: true });
+      if (!check.ok)
+        expect(check.rejection).toMatchObject({ code: 'out-of-sequence', stale: true });
       expect(checkAnswer(tree, returned, { ...replayedSubmit, position: 2 }).ok).toBe(true);
     });
 
     it('a reading out of range names the range in the entered and canonical units', () => {
-      const check = checkAnswer(tree, atHoses, measure('hoses', { inletTemp: [320, 'degF'], outletTemp: [70, 'degC'] }));
+      const check = checkAnswer(
+        tree,
+        atHoses,
+        measure('hoses', { inletTemp: [320, 'degF'], outletTemp: [70, 'degC'] }),
+      );
       expect(check.ok).toBe(false);
       if (check.ok) return;
       expect(check.rejection.code).toBe('out-of-range');
       expect(check.rejection.stale).toBe(false);
       expect(check.rejection.fields).toEqual({
-        inletTemp: '"Inlet hose" must be between -40 and 302 °F (-40 and 150 °C); 320 °F (160 °C) is outside it.',
+        inletTemp:
+          '"Inlet hose" must be between -40 and 302 °F (-40 and 150 °C); 320 °F (160 °C) is outside it.',
       });
     });
 
     it.each([
       [measure('hoses', { inletTemp: [90, 'degC'] }), 'missing-reading', 'Enter "Outlet hose".'],
-      [measure('hoses', { inletTemp: [1, 'bar'], outletTemp: [70, 'degC'] }), 'unit-not-accepted', '"Inlet hose" can be entered in °C or °F, not bar.'],
+      [
+        measure('hoses', { inletTemp: [1, 'bar'], outletTemp: [70, 'degC'] }),
+        'unit-not-accepted',
+        '"Inlet hose" can be entered in °C or °F, not bar.',
+      ],
       [
         measure('hoses', { inletTemp: [90, 'degC'], outletTemp: [70, 'degC'], extra: [1, 'none'] }),
         'unexpected-reading',
@@ -164,7 +196,15 @@ describe('walking a tree', () => {
       ],
       [choose('hoses', 'yes'), 'wrong-answer-kind', '"Hoses" is answered with readings.'],
       [back('ask'), 'not-current-step', undefined],
-      [{ type: 'answer.measurement', nodeId: 'hoses', readings: { inletTemp: { value: 'hot', unit: 'degC' } } }, 'malformed-event', undefined],
+      [
+        {
+          type: 'answer.measurement',
+          nodeId: 'hoses',
+          readings: { inletTemp: { value: 'hot', unit: 'degC' } },
+        },
+        'malformed-event',
+        undefined,
+      ],
       [{ type: 'answer.guess' }, 'malformed-event', undefined],
       [null, 'malformed-event', undefined],
     ])('%j → %s', (event, code, message) => {
@@ -223,7 +263,10 @@ describe('replay', () => {
 
   it('reports where and why a changed tree no longer fits, without throwing', () => {
     const changed = structuredClone(definition);
-    (changed.nodes.ask as { choices: Array<{ id: string; to: string }> }).choices = [{ id: 'hot', label: 'Hot', to: 'hoses' }, { id: 'no', label: 'No', to: 'fine' }];
+    (changed.nodes.ask as { choices: Array<{ id: string; label: string; to: string }> }).choices = [
+      { id: 'hot', label: 'Hot', to: 'hoses' },
+      { id: 'no', label: 'No', to: 'fine' },
+    ];
     const result = compileTree(changed);
     if (!result.ok) throw new Error('should compile');
     const summary = summariseWalk(result.tree, recorded);
@@ -238,8 +281,16 @@ describe('replay', () => {
   });
 
   it('treats a damaged record as a divergence', () => {
-    const summary = summariseWalk(tree, [recorded[0], { type: 'answer.measurement', nodeId: 'hoses' }, 42]);
-    expect(summary.divergence).toMatchObject({ divergedAt: 1, nodeId: 'hoses', code: 'malformed-event' });
+    const summary = summariseWalk(tree, [
+      recorded[0],
+      { type: 'answer.measurement', nodeId: 'hoses' },
+      42,
+    ]);
+    expect(summary.divergence).toMatchObject({
+      divergedAt: 1,
+      nodeId: 'hoses',
+      code: 'malformed-event',
+    });
     expect(summary.currentNodeId).toBe('hoses');
   });
 
@@ -257,7 +308,11 @@ describe('replay', () => {
 });
 
 describe('persisting a walk', () => {
-  const events = [choose('ask', 'yes'), measure('hoses', { inletTemp: [90, 'degC'], outletTemp: [84, 'degC'] }), done('work')];
+  const events = [
+    choose('ask', 'yes'),
+    measure('hoses', { inletTemp: [90, 'degC'], outletTemp: [84, 'degC'] }),
+    done('work'),
+  ];
 
   it('round-trips through JSON and resumes with an XState actor', () => {
     const snapshot = runScript(tree, events.slice(0, 2));
@@ -280,11 +335,16 @@ describe('persisting a walk', () => {
       treeFingerprint: string;
       snapshot: { value: string };
     };
-    expect(restoreWalk(tree, { ...stored, snapshot: { ...stored.snapshot, value: 'fine' } })).toMatchObject({
+    expect(
+      restoreWalk(tree, { ...stored, snapshot: { ...stored.snapshot, value: 'fine' } }),
+    ).toMatchObject({
       ok: false,
       code: 'snapshot-mismatch',
     });
-    expect(restoreWalk(tree, { ...stored, treeFingerprint: '0' })).toMatchObject({ ok: false, code: 'tree-changed' });
+    expect(restoreWalk(tree, { ...stored, treeFingerprint: '0' })).toMatchObject({
+      ok: false,
+      code: 'tree-changed',
+    });
     expect(restoreWalk(tree, { nonsense: true })).toMatchObject({ ok: false, code: 'malformed' });
   });
 

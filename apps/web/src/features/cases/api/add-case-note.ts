@@ -1,0 +1,28 @@
+// POST /api/cases/:caseId/notes: a free note on the case or one of its steps. Like answers, a
+// note carries an idempotency key made once and reused on retry.
+import type { AddNoteRequest } from '@heatpath/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { casesKeys } from './get-cases';
+import { caseNoteSchema } from './response-schemas';
+
+export interface AddCaseNoteInput {
+  caseId: string;
+  note: AddNoteRequest;
+}
+
+export function addCaseNote({ caseId, note }: AddCaseNoteInput) {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/notes`, caseNoteSchema, {
+    method: 'POST',
+    body: note,
+  });
+}
+
+export function useAddCaseNote() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: addCaseNote,
+    onSuccess: (_note, { caseId }) =>
+      queryClient.invalidateQueries({ queryKey: casesKeys.detail(caseId) }),
+  });
+}

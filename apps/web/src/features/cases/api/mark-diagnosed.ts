@@ -1,0 +1,22 @@
+// POST /api/cases/:caseId/diagnosed: the technician declares the finding; the case leaves the walk.
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { casesKeys } from './get-cases';
+import { caseDetailSchema } from './response-schemas';
+
+export function markDiagnosed(caseId: string) {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/diagnosed`, caseDetailSchema, {
+    method: 'POST',
+  });
+}
+
+export function useMarkDiagnosed() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: markDiagnosed,
+    onSuccess: (detail) => {
+      queryClient.setQueryData(casesKeys.detail(detail.id), detail);
+      void queryClient.invalidateQueries({ queryKey: casesKeys.lists() });
+    },
+  });
+}

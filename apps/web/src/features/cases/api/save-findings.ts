@@ -1,0 +1,30 @@
+// PUT /api/cases/:caseId/findings: saves the edited findings. The request names the revision it
+// edited; 409 means someone saved after it was opened.
+import type { UpdateFindingsRequest } from '@heatpath/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { casesKeys } from './get-cases';
+import { caseDetailSchema } from './response-schemas';
+
+export interface SaveFindingsInput {
+  caseId: string;
+  findings: UpdateFindingsRequest;
+}
+
+export function saveFindings({ caseId, findings }: SaveFindingsInput) {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/findings`, caseDetailSchema, {
+    method: 'PUT',
+    body: findings,
+  });
+}
+
+export function useSaveFindings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: saveFindings,
+    onSuccess: (detail) => {
+      queryClient.setQueryData(casesKeys.detail(detail.id), detail);
+      void queryClient.invalidateQueries({ queryKey: casesKeys.lists() });
+    },
+  });
+}

@@ -1,0 +1,24 @@
+// POST /api/cases/:caseId/walk: one answer or step back. The idempotency key is made once per
+// answer and sent again on every retry, so an answer whose reply was lost is stored only once.
+import type { WalkEvent } from '@heatpath/fault-tree';
+import { useMutation } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { walkEventResponseSchema } from './response-schemas';
+
+export interface SubmitWalkEventInput {
+  caseId: string;
+  idempotencyKey: string;
+  event: WalkEvent;
+}
+
+export function submitWalkEvent({ caseId, idempotencyKey, event }: SubmitWalkEventInput) {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/walk`, walkEventResponseSchema, {
+    method: 'POST',
+    body: { idempotencyKey, event },
+  });
+}
+
+/** The cache is updated by the caller (useWalkAnswers), which also owns retries. */
+export function useSubmitWalkEvent() {
+  return useMutation({ mutationFn: submitWalkEvent });
+}
