@@ -15,6 +15,21 @@ export class TreeDoesNotCompileError extends AppError {
   }
 }
 
+/**
+ * The compiled tree of a published (or retired) version by id, loading its definition only when
+ * this process has not compiled it yet — the definition is the largest thing a walk request reads.
+ */
+export async function compiledPublishedTree(
+  versionId: string,
+  load: (id: string) => Promise<Pick<TreeVersion, 'id' | 'status' | 'definition' | 'revision'> | null>,
+): Promise<CompiledTree> {
+  const hit = cache.get(versionId);
+  if (hit) return hit;
+  const version = await load(versionId);
+  if (!version) throw new Error(`tree version ${versionId} is missing`);
+  return compiledTreeOf(version);
+}
+
 export function compiledTreeOf(version: Pick<TreeVersion, 'id' | 'status' | 'definition' | 'revision'>): CompiledTree {
   // Drafts change; key them by revision so an edit is never served stale.
   const key = version.status === 'draft' ? `${version.id}#${version.revision}` : version.id;

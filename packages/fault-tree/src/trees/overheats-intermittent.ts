@@ -437,7 +437,7 @@ export const overheatsIntermittentDefinition = {
       kind: 'measurement',
       title: 'Confirm with a contact probe',
       prompt:
-        'Hold a contact thermometer probe firmly on the sensor housing (or in the tank’s coolant if the maker allows on a cooled engine — never open a hot system) and enter its reading while live data shows the same value as before.',
+        'Hold a contact thermometer probe firmly on a clean, dull spot of the sensor housing and enter its reading while live data shows the same value as before.',
       tools: ['Contact thermometer'],
       hazards: ['hot-pressurised-coolant', 'fan', 'hot-surface'],
       cautions: [cautions.keepClosedWhenHot, cautions.fan, cautions.hotSurface],

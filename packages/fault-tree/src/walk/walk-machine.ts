@@ -15,6 +15,7 @@ import { branchHolds, prepareMeasurement, staleness } from './resolve-answer.js'
 import type { RouteKey, WalkContext } from './walk-context.js';
 import { readingsOnPath } from './walk-context.js';
 import type { MeasurementAnswer, WalkEvent } from './walk-events.js';
+import { walkEventSchema } from './walk-events.js';
 
 export const OUTCOME_TAG = 'outcome';
 
@@ -42,8 +43,16 @@ export function buildWalkMachine(tree: RuntimeTree) {
     prepared.set(event, { context, result });
     return result;
   };
-  const fresh = (nodeId: string, context: WalkContext, event: WalkEvent) =>
-    staleness(nodeId, context, event) === undefined;
+  // An actor may be sent anything; only well-formed events may reach the readings check.
+  const wellFormed = new WeakMap<object, boolean>();
+  const fresh = (nodeId: string, context: WalkContext, event: WalkEvent) => {
+    let ok = wellFormed.get(event);
+    if (ok === undefined) {
+      ok = walkEventSchema.safeParse(event).success;
+      wellFormed.set(event, ok);
+    }
+    return ok && staleness(nodeId, context, event) === undefined;
+  };
 
   const walkSetup = setup({
     types: {

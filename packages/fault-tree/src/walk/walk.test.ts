@@ -352,8 +352,10 @@ describe('persisting a walk', () => {
     const actor = createWalkActor(tree);
     actor.start();
     for (const event of events) actor.send(event);
-    // Stale and wrong events are ignored by the machine, as the checker refuses them.
+    // Stale, wrong and malformed events are ignored by the machine, as the checker refuses them.
     actor.send(choose('ask', 'no'));
+    actor.send({ type: 'answer.measurement', nodeId: 'fix' } as never);
+    actor.send({ type: 'walk.back', nodeId: 'fix', position: 1 });
     expect(actor.getSnapshot().value).toBe('fix');
     expect(actor.getSnapshot().context).toEqual(runScript(tree, events).context);
     actor.stop();

@@ -11,8 +11,19 @@ export async function findCase(options: {
   transaction?: Transaction;
   lock?: boolean;
   withDetails?: boolean;
+  /** Only the case row itself (with lock, the locked row): no tree definition is read. */
+  bare?: boolean;
 }): Promise<DiagnosticCase> {
   const { actor, caseId, transaction, lock, withDetails } = options;
+  if (lock && options.bare) {
+    const locked = await DiagnosticCase.findOne({
+      where: { id: caseId, workshopId: actor.workshopId },
+      transaction,
+      lock: transaction?.LOCK.UPDATE,
+    });
+    if (!locked) throw notFound('That case');
+    return locked;
+  }
   if (lock) {
     // Lock the bare row first: FOR UPDATE cannot apply to the nullable side of outer joins.
     const locked = await DiagnosticCase.findOne({

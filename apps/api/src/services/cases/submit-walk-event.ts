@@ -4,9 +4,9 @@
 // was not kept. A retry with the same idempotency key gets the stored result, not a second answer.
 import { applyWalkEvent, describeWalk, replayWalk } from '@heatpath/fault-tree';
 import type { WalkEvent, WalkSummary } from '@heatpath/fault-tree';
-import { CaseEvent, DiagnosticCase } from '../../db/models/index';
+import { CaseEvent, DiagnosticCase, TreeVersion } from '../../db/models/index';
 import { AppError } from '../../errors';
-import { compiledTreeOf } from '../../lib/compiled-trees';
+import { compiledPublishedTree } from '../../lib/compiled-trees';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { draftFindings } from './draft-findings';
@@ -31,9 +31,8 @@ export async function submitWalkEvent(options: {
   if (!sequelize) throw new Error('Models are not initialised.');
 
   return sequelize.transaction(async (transaction) => {
-    const kase = await findCase({ actor, caseId, transaction, lock: true });
-    if (!kase.treeVersion) throw new Error('case without tree version');
-    const tree = compiledTreeOf(kase.treeVersion);
+    const kase = await findCase({ actor, caseId, transaction, lock: true, bare: true });
+    const tree = await compiledPublishedTree(kase.treeVersionId, (id) => TreeVersion.findByPk(id, { transaction }));
     const events = await walkEventsOf(kase.id, transaction);
 
     const replay = replayWalk(tree, events);
@@ -56,7 +55,7 @@ export async function submitWalkEvent(options: {
     if (!result.ok) {
       const r = result.rejection;
       if (r.stale) {
-        throw new AppError('conflict', `${r.message} The case has moved on, perhaps on another device: reload to see where it stands.`);
+        throw new AppError('conflict', /reload/i.test(r.message) ? r.message : `${r.message} The case has moved on, perhaps on another device: reload to see where it stands.`);
       }
       throw new AppError(r.code === 'malformed-event' ? 'bad_request' : 'validation_failed', r.message, r.fields ? { ...r.fields } : undefined);
     }

@@ -1,7 +1,13 @@
 // Labelled form fields. The label sits above the control (never a placeholder standing in for it),
 // the hint and the error are tied to the control with aria-describedby, and an error is marked
 // with a word and an icon as well as colour.
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import {
+  useId,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from 'react';
 
 const controlClasses =
   'block w-full min-h-touch rounded-control border-2 border-line-strong bg-surface px-3 ' +
@@ -142,6 +148,38 @@ export function SelectField({
           </option>
         ))}
       </select>
+    </FieldFrame>
+  );
+}
+
+interface TextAreaFieldProps extends Omit<TextareaHTMLAttributes<HTMLTextAreaElement>, 'id'> {
+  label: ReactNode;
+  hint?: ReactNode;
+  error?: string | undefined;
+  id?: string;
+}
+
+export function TextAreaField({
+  label,
+  hint,
+  error,
+  id: givenId,
+  className = '',
+  rows = 3,
+  ...rest
+}: TextAreaFieldProps) {
+  const autoId = useId();
+  const id = givenId ?? autoId;
+  return (
+    <FieldFrame id={id} label={label} hint={hint} error={error}>
+      <textarea
+        id={id}
+        rows={rows}
+        className={`${controlClasses} py-2 leading-normal ${className}`}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, hint, error)}
+        {...rest}
+      />
     </FieldFrame>
   );
 }

@@ -9,12 +9,14 @@ import { caseNoteSchema } from './response-schemas';
 export interface AddCaseNoteInput {
   caseId: string;
   note: AddNoteRequest;
+  signal?: AbortSignal | undefined;
 }
 
-export function addCaseNote({ caseId, note }: AddCaseNoteInput) {
+export function addCaseNote({ caseId, note, signal }: AddCaseNoteInput) {
   return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/notes`, caseNoteSchema, {
     method: 'POST',
     body: note,
+    signal,
   });
 }
 

@@ -9,12 +9,14 @@ export interface SubmitWalkEventInput {
   caseId: string;
   idempotencyKey: string;
   event: WalkEvent;
+  signal?: AbortSignal | undefined;
 }
 
-export function submitWalkEvent({ caseId, idempotencyKey, event }: SubmitWalkEventInput) {
+export function submitWalkEvent({ caseId, idempotencyKey, event, signal }: SubmitWalkEventInput) {
   return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/walk`, walkEventResponseSchema, {
     method: 'POST',
     body: { idempotencyKey, event },
+    signal,
   });
 }
 

@@ -2,7 +2,6 @@
 // keyset page. Filters are owned by the caller (the route keeps them in the address), so a
 // reload or a shared link shows the same list.
 import { caseStatuses, type CaseStatus, type CaseSummary } from '@heatpath/contracts';
-import { useEffect, useState } from 'react';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -19,6 +18,7 @@ export interface PersonOption {
 }
 
 interface CaseListProps {
+  /** The search text comes as typed; the list waits for a pause in typing before asking. */
   filters: CaseListFilters;
   onFiltersChange: (filters: CaseListFilters) => void;
   /** Offer "My cases" / "Whole workshop". */
@@ -41,22 +41,9 @@ export function CaseList({
   technicians,
   emptyText,
 }: CaseListProps) {
-  const [search, setSearch] = useState(filters.q ?? '');
-  const settled = useDebouncedValue(search.trim(), 350);
-  const cases = useCases(filters);
-
-  // The address may change under the box (back button): follow it.
-  const [seenQ, setSeenQ] = useState(filters.q ?? '');
-  if ((filters.q ?? '') !== seenQ) {
-    setSeenQ(filters.q ?? '');
-    if ((filters.q ?? '') !== settled) setSearch(filters.q ?? '');
-  }
-
-  useEffect(() => {
-    if (settled !== (filters.q ?? '')) onFiltersChange({ ...filters, q: settled || undefined });
-    // Only a settled search changes the filters; the filters themselves change through the setters.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [settled]);
+  // The box follows every key; the server is asked once the typing pauses.
+  const settledQ = useDebouncedValue((filters.q ?? '').trim(), 350);
+  const cases = useCases({ ...filters, q: settledQ || undefined });
 
   const rows = cases.data?.pages.flatMap((page) => page.cases) ?? [];
   const narrowed = Boolean(filters.q || filters.status || filters.technicianId);
@@ -78,8 +65,8 @@ export function CaseList({
         <TextField
           label="Search cases"
           type="search"
-          value={search}
-          onChange={(event) => setSearch(event.target.value)}
+          value={filters.q ?? ''}
+          onChange={(event) => onFiltersChange({ ...filters, q: event.target.value || undefined })}
           hint="Plate, VIN, customer or case number"
           autoComplete="off"
           spellCheck={false}

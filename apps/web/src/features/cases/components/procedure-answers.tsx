@@ -1,0 +1,64 @@
+// A procedure's two answers, "Done" and "Could not do", with an optional note that is stored on
+// the step with the answer.
+import type { ProcedureNode, ProcedureResult, WalkEvent } from '@heatpath/fault-tree';
+import { useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import { TextAreaField } from '../../../components/ui/field';
+
+interface ProcedureAnswersProps {
+  node: ProcedureNode & { id: string };
+  position: number;
+  disabled: boolean;
+  pendingResult: ProcedureResult | null;
+  onAnswer: (event: WalkEvent, label: string, note?: string) => void;
+}
+
+export function ProcedureAnswers({
+  node,
+  position,
+  disabled,
+  pendingResult,
+  onAnswer,
+}: ProcedureAnswersProps) {
+  const [note, setNote] = useState('');
+  const send = (result: ProcedureResult, label: string) =>
+    onAnswer({ type: 'answer.procedure', nodeId: node.id, position, result }, label, note);
+  return (
+    <div className="flex flex-col gap-4">
+      <TextAreaField
+        label="Note on this step (optional)"
+        hint="What you found or why it could not be done. Saved with your answer."
+        rows={2}
+        value={note}
+        maxLength={4000}
+        disabled={disabled}
+        onChange={(event) => setNote(event.target.value)}
+      />
+      <div className="grid gap-3 sm:grid-cols-2">
+        {node.done ? (
+          <Button
+            size="large"
+            disabled={disabled}
+            onClick={() => send('done', 'Done')}
+            busy={pendingResult === 'done'}
+            busyLabel="Saving “Done”…"
+          >
+            Done
+          </Button>
+        ) : null}
+        {node.couldNotDo ? (
+          <Button
+            size="large"
+            variant="secondary"
+            disabled={disabled}
+            onClick={() => send('could-not-do', 'Could not do')}
+            busy={pendingResult === 'could-not-do'}
+            busyLabel="Saving “Could not do”…"
+          >
+            Could not do
+          </Button>
+        ) : null}
+      </div>
+    </div>
+  );
+}

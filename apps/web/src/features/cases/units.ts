@@ -1,0 +1,55 @@
+// Which unit a reading box starts in, how a typed number is read, and how a computed value is
+// shown in the person's own units. Conversions are the fault-tree package's (mathjs), never done
+// by hand here. Part of the case page's lazily loaded chunk.
+import type { UnitPreferences } from '@heatpath/contracts';
+import {
+  formatCanonical,
+  quantityInfo,
+  unitSymbol,
+  type ComputedView,
+  type Quantity,
+  type UnitCode,
+} from '@heatpath/fault-tree';
+
+/** The person's preferred unit for a quantity, where the quantity can be entered in it. */
+export function preferredUnit(quantity: Quantity, preferences: UnitPreferences): UnitCode {
+  const info = quantityInfo[quantity];
+  const wanted: UnitCode | undefined = {
+    temperature: preferences.temperature === 'F' ? 'degF' : 'degC',
+    temperatureDelta: preferences.temperature === 'F' ? 'degF' : 'K',
+    pressure: preferences.pressure,
+    volume: preferences.volume,
+    time: undefined,
+    percentage: undefined,
+    number: undefined,
+  }[quantity] satisfies UnitCode | undefined;
+  return wanted && info.entryUnits.includes(wanted) ? wanted : info.canonical;
+}
+
+export function unitOptions(quantity: Quantity): { value: UnitCode; label: string }[] {
+  return quantityInfo[quantity].entryUnits.map((unit) => ({
+    value: unit,
+    label: unitSymbol(unit) || 'number',
+  }));
+}
+
+const plainNumber = /^[-+−]?(?:\d+(?:[.,]\d*)?|[.,]\d+)$/;
+
+/**
+ * A typed reading as a number: null while the box is empty, NaN when it is not a number.
+ * A decimal comma and a true minus sign are read as many phones type them.
+ */
+export function readNumber(typed: string): number | null {
+  const text = typed.trim();
+  if (text === '') return null;
+  if (!plainNumber.test(text)) return Number.NaN;
+  return Number(text.replace(',', '.').replace('−', '-'));
+}
+
+/** "97 °F (36.1 °C)" in the person's unit first, or just the canonical figure. */
+export function computedDisplay(view: ComputedView, preferences: UnitPreferences): string | null {
+  if (view.value === null || view.display === null) return null;
+  const unit = preferredUnit(view.quantity, preferences);
+  if (unit === view.unit) return view.display;
+  return `${formatCanonical(view.value, view.quantity, unit)} (${view.display})`;
+}

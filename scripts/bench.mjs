@@ -1,0 +1,24 @@
+// `npm run bench:step-save`: a fresh benchmark cluster in .data/bench-pg (normal durability,
+// unlike the test cluster), then the named benchmark with DATABASE_URL pointing at it.
+import { join } from 'node:path';
+import { startCluster } from './lib/postgres.mjs';
+import { installDependencies } from './lib/install.mjs';
+import { fail } from './lib/log.mjs';
+import { mustRun, root } from './lib/run.mjs';
+
+const benches = { 'step-save': ['apps/api', 'bench/step-save.bench.ts'] };
+
+async function main() {
+  const bench = benches[process.argv[2]];
+  if (!bench) throw new Error(`Use one of: ${Object.keys(benches).join(', ')}`);
+  await installDependencies();
+  const db = await startCluster({ dataDir: join(root, '.data', 'bench-pg'), port: Number(process.env.PGPORT_BENCH ?? 54349), database: 'heatpath_bench', fresh: true });
+  try {
+    await mustRun(process.execPath, ['--import', 'tsx', bench[1]], 'The benchmark failed.', { cwd: join(root, bench[0]), env: { ...process.env, DATABASE_URL: db.url, SESSION_SECRET: 'heatpath-bench-session-secret-0123456789' } });
+  } finally {
+    db.stop();
+    db.remove();
+  }
+}
+
+main().catch(fail);
