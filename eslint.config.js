@@ -35,6 +35,11 @@ export default tseslint.config(
     },
   },
   {
+    // Tests and benchmarks index fixtures they built themselves.
+    files: ['**/*.test.{ts,tsx}', '**/bench/**/*.ts', '**/src/test/**/*.ts', 'tests/**/*.ts'],
+    rules: { '@typescript-eslint/no-non-null-assertion': 'off' },
+  },
+  {
     files: ['apps/web/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
     plugins: { 'react-hooks': reactHooks },

@@ -1,7 +1,6 @@
 // Browser tests drive Debian's chromium through playwright-core against the real stack that
 // scripts/test.mjs started. Never downloads a browser.
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
@@ -18,7 +17,6 @@ export interface BrowserSession {
 }
 
 export async function launch(): Promise<BrowserSession> {
-  const userDataDir = mkdtempSync(join(tmpdir(), 'heatpath-chromium-'));
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
@@ -30,7 +28,6 @@ export async function launch(): Promise<BrowserSession> {
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      `--user-data-dir=${userDataDir}`,
     ],
   });
   return {
@@ -41,8 +38,8 @@ export async function launch(): Promise<BrowserSession> {
       return { page, context };
     },
     async close() {
+      // Playwright gives each launch a fresh temporary profile and removes it on close.
       await browser.close();
-      rmSync(userDataDir, { recursive: true, force: true });
     },
   };
 }
@@ -56,7 +53,7 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 
 export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
   await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('E-mail address').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
 }

@@ -28,7 +28,7 @@ describe('signing in', () => {
       await nav.waitFor();
       for (const label of r.sees) await expect(nav.getByRole('link', { name: label, exact: false }).first().isVisible()).resolves.toBe(true);
       for (const label of r.notSees) expect(await nav.getByRole('link', { name: label }).count()).toBe(0);
-      await expect(page.getByText('Harbour Lane Garage').first().isVisible()).resolves.toBe(true);
+      expect(await page.getByText('Harbour Lane Garage').filter({ visible: true }).count()).toBeGreaterThan(0);
       await screenshot(page, `home-${r.role}`);
       await context.close();
     });
@@ -49,12 +49,12 @@ describe('signing in', () => {
     await signIn(page, 'lead@harbourlane.test');
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Staff' }).click();
     const email = `e2e-${Date.now()}@harbourlane.test`;
-    await page.getByRole('button', { name: /add (a )?(person|staff member)/i }).first().click();
-    await page.getByLabel('Name').fill('Ebba Quill');
-    await page.getByLabel('E-mail address').fill(email);
-    await page.getByLabel('Role').selectOption('technician');
-    await page.getByLabel(/first password/i).fill('first-password-123');
-    await page.getByRole('button', { name: /^add/i }).last().click();
+    const form = page.getByRole('form', { name: 'Add a staff member' });
+    await form.getByLabel('Name').fill('Ebba Quill');
+    await form.getByLabel('E-mail address').fill(email);
+    await form.getByLabel('Role').selectOption('technician');
+    await form.getByLabel('First password').fill('first-password-123');
+    await form.getByRole('button', { name: 'Add staff member' }).click();
     await page.getByText(email).waitFor();
     await screenshot(page, 'staff-lead');
     await context.close();

@@ -348,14 +348,16 @@ describe('persisting a walk', () => {
     expect(restoreWalk(tree, { nonsense: true })).toMatchObject({ ok: false, code: 'malformed' });
   });
 
-  it('an actor driven by events agrees with the pure functions', () => {
+  it('an actor driven by events agrees with the pure functions, and ignores what the checker refuses', () => {
     const actor = createWalkActor(tree);
     actor.start();
-    for (const event of events) actor.send(event);
-    // Stale, wrong and malformed events are ignored by the machine, as the checker refuses them.
+    actor.send(events[0] as never);
+    // A malformed measurement at a measurement step, a stale answer, and an out-of-sequence back.
+    actor.send({ type: 'answer.measurement', nodeId: 'hoses' } as never);
     actor.send(choose('ask', 'no'));
-    actor.send({ type: 'answer.measurement', nodeId: 'fix' } as never);
-    actor.send({ type: 'walk.back', nodeId: 'fix', position: 1 });
+    actor.send({ type: 'walk.back', nodeId: 'hoses', position: 7 });
+    expect(actor.getSnapshot()).toMatchObject({ status: 'active', value: 'hoses' });
+    for (const event of events.slice(1)) actor.send(event);
     expect(actor.getSnapshot().value).toBe('fix');
     expect(actor.getSnapshot().context).toEqual(runScript(tree, events).context);
     actor.stop();

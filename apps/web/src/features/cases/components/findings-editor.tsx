@@ -1,0 +1,285 @@
+// The technician's findings: drafted by the server when the walk reached its outcome, edited here
+// (concern, cause, correction, parts, labour, follow-ups) and saved against the revision that was
+// opened, so two people never overwrite each other unknowingly. "Mark diagnosed" closes the walk.
+import { updateFindingsRequestSchema, type Findings } from '@heatpath/contracts';
+import { useState } from 'react';
+import { useFieldArray, useForm, type Path } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { TextAreaField, TextField } from '../../../components/ui/field';
+import { isApiError } from '../../../lib/api-client';
+import { useMarkDiagnosed } from '../api/mark-diagnosed';
+import { useSaveFindings } from '../api/save-findings';
+import { formatDateTime } from '../case-format';
+import { readNumber } from '../units';
+
+interface FindingsFormValues {
+  concern: string;
+  cause: string;
+  correction: string;
+  parts: { description: string; quantity: string; partNumber: string }[];
+  labour: { operation: string; hours: string }[];
+  followUps: { text: string }[];
+}
+
+function toValues(findings: Findings): FindingsFormValues {
+  return {
+    concern: findings.concern,
+    cause: findings.cause,
+    correction: findings.correction,
+    parts: findings.parts.map((part) => ({
+      description: part.description,
+      quantity: String(part.quantity),
+      partNumber: part.partNumber ?? '',
+    })),
+    labour: findings.labour.map((line) => ({ operation: line.operation, hours: String(line.hours) })),
+    followUps: findings.followUps.map((text) => ({ text })),
+  };
+}
+
+function toNumber(text: string): number | undefined {
+  const value = readNumber(text);
+  return value === null || Number.isNaN(value) ? undefined : value;
+}
+
+interface FindingsEditorProps {
+  caseId: string;
+  findings: Findings;
+  canMarkDiagnosed: boolean;
+}
+
+export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsEditorProps) {
+  const save = useSaveFindings();
+  const diagnosed = useMarkDiagnosed();
+  const [base, setBase] = useState(findings.revision);
+  const [saved, setSaved] = useState<string | null>(null);
+  const form = useForm<FindingsFormValues>({ defaultValues: toValues(findings) });
+  const { errors, isDirty } = form.formState;
+  const parts = useFieldArray({ control: form.control, name: 'parts' });
+  const labour = useFieldArray({ control: form.control, name: 'labour' });
+  const followUps = useFieldArray({ control: form.control, name: 'followUps' });
+  const newerOnServer = findings.revision !== base;
+  const conflict = isApiError(save.error) && save.error.status === 409;
+
+  const loadLatest = () => {
+    form.reset(toValues(findings));
+    setBase(findings.revision);
+    save.reset();
+  };
+
+  const submit = form.handleSubmit((values) => {
+    setSaved(null);
+    const request = {
+      revision: base,
+      concern: values.concern,
+      cause: values.cause,
+      correction: values.correction,
+      parts: values.parts.map((part) => ({
+        description: part.description,
+        quantity: toNumber(part.quantity),
+        partNumber: part.partNumber.trim() || null,
+      })),
+      labour: values.labour.map((line) => ({ operation: line.operation, hours: toNumber(line.hours) })),
+      followUps: values.followUps.map((followUp) => followUp.text),
+    };
+    const parsed = updateFindingsRequestSchema.safeParse(request);
+    if (!parsed.success) {
+      for (const issue of parsed.error.issues) {
+        const [list, index] = issue.path;
+        const followUp = list === 'followUps' && typeof index === 'number';
+        // The form keeps follow-ups as { text } rows; the request as plain strings.
+        const name = followUp ? `followUps.${index}.text` : issue.path.join('.');
+        form.setError(name as Path<FindingsFormValues>, {
+          message: followUp ? 'Write the follow-up, or remove it.' : issue.message,
+        });
+      }
+      return;
+    }
+    save.mutate(
+      { caseId, findings: parsed.data },
+      {
+        onSuccess: (detail) => {
+          if (!detail.findings) return;
+          form.reset(toValues(detail.findings));
+          setBase(detail.findings.revision);
+          setSaved(`Saved at ${formatDateTime(detail.findings.updatedAt)}.`);
+        },
+      },
+    );
+  });
+
+  return (
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-labelledby="findings-heading"
+      className="flex flex-col gap-5 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
+    >
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <h2 id="findings-heading" className="text-xl font-bold">
+          Findings for the repair order
+        </h2>
+        <p className="text-sm text-ink-muted">
+          Drafted from the finding; edit before you mark the case diagnosed.
+          {findings.updatedBy ? ` Last saved by ${findings.updatedBy.name}, ${formatDateTime(findings.updatedAt)}.` : ''}
+        </p>
+      </div>
+
+      {conflict || (newerOnServer && !save.isPending) ? (
+        <Alert tone="danger" role="alert" title="Someone else saved these findings">
+          <p>
+            {conflict
+              ? save.error?.message
+              : 'Newer findings were saved since you opened them.'}{' '}
+            Reload them to see the changes; what you typed here will be replaced.
+          </p>
+          <div>
+            <Button variant="secondary" onClick={loadLatest}>
+              Reload findings
+            </Button>
+          </div>
+        </Alert>
+      ) : save.error ? (
+        <Alert tone="danger" role="alert" title="Findings not saved">
+          <p>{save.error.message}</p>
+        </Alert>
+      ) : null}
+
+      <TextAreaField label="Concern" rows={2} error={errors.concern?.message} {...form.register('concern')} />
+      <TextAreaField label="Cause" rows={4} error={errors.cause?.message} {...form.register('cause')} />
+      <TextAreaField
+        label="Correction"
+        rows={3}
+        error={errors.correction?.message}
+        {...form.register('correction')}
+      />
+
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-2 text-lg font-bold">Parts</legend>
+        {parts.fields.length === 0 ? <p className="text-ink-muted">No parts.</p> : null}
+        {parts.fields.map((field, index) => (
+          <div
+            key={field.id}
+            className="grid gap-3 rounded-control border-2 border-line p-3 md:grid-cols-[minmax(0,1fr)_7rem_10rem_auto] md:items-end"
+          >
+            <TextField
+              label={`Part ${index + 1}`}
+              error={errors.parts?.[index]?.description?.message}
+              {...form.register(`parts.${index}.description`)}
+            />
+            <TextField
+              label={`Quantity of part ${index + 1}`}
+              inputMode="decimal"
+              error={errors.parts?.[index]?.quantity?.message}
+              {...form.register(`parts.${index}.quantity`)}
+            />
+            <TextField
+              label={`Part number of part ${index + 1}`}
+              error={errors.parts?.[index]?.partNumber?.message}
+              {...form.register(`parts.${index}.partNumber`)}
+            />
+            <Button variant="danger" onClick={() => parts.remove(index)}>
+              Remove part {index + 1}
+            </Button>
+          </div>
+        ))}
+        <div>
+          <Button
+            variant="secondary"
+            onClick={() => parts.append({ description: '', quantity: '1', partNumber: '' })}
+          >
+            Add part
+          </Button>
+        </div>
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-2 text-lg font-bold">Labour</legend>
+        {labour.fields.length === 0 ? <p className="text-ink-muted">No labour lines.</p> : null}
+        {labour.fields.map((field, index) => (
+          <div
+            key={field.id}
+            className="grid gap-3 rounded-control border-2 border-line p-3 md:grid-cols-[minmax(0,1fr)_8rem_auto] md:items-end"
+          >
+            <TextField
+              label={`Operation ${index + 1}`}
+              error={errors.labour?.[index]?.operation?.message}
+              {...form.register(`labour.${index}.operation`)}
+            />
+            <TextField
+              label={`Hours for operation ${index + 1}`}
+              inputMode="decimal"
+              error={errors.labour?.[index]?.hours?.message}
+              {...form.register(`labour.${index}.hours`)}
+            />
+            <Button variant="danger" onClick={() => labour.remove(index)}>
+              Remove operation {index + 1}
+            </Button>
+          </div>
+        ))}
+        <div>
+          <Button variant="secondary" onClick={() => labour.append({ operation: '', hours: '' })}>
+            Add labour line
+          </Button>
+        </div>
+      </fieldset>
+
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-2 text-lg font-bold">Follow-ups</legend>
+        {followUps.fields.length === 0 ? <p className="text-ink-muted">No follow-ups.</p> : null}
+        {followUps.fields.map((field, index) => (
+          <div key={field.id} className="grid gap-3 md:grid-cols-[minmax(0,1fr)_auto] md:items-end">
+            <TextAreaField
+              label={`Follow-up ${index + 1}`}
+              rows={2}
+              error={errors.followUps?.[index]?.text?.message}
+              {...form.register(`followUps.${index}.text`)}
+            />
+            <Button variant="danger" onClick={() => followUps.remove(index)}>
+              Remove follow-up {index + 1}
+            </Button>
+          </div>
+        ))}
+        <div>
+          <Button variant="secondary" onClick={() => followUps.append({ text: '' })}>
+            Add follow-up
+          </Button>
+        </div>
+      </fieldset>
+
+      {saved && !isDirty ? (
+        <p role="status" className="flex items-center gap-2 font-semibold text-ok-ink">
+          <span aria-hidden="true">✓</span> {saved}
+        </p>
+      ) : null}
+      <div className="flex flex-wrap items-center gap-3 border-t-2 border-line pt-4">
+        <Button type="submit" size="large" busy={save.isPending} busyLabel="Saving…">
+          Save findings
+        </Button>
+        {canMarkDiagnosed ? (
+          <Button
+            size="large"
+            variant="secondary"
+            disabled={isDirty || save.isPending}
+            busy={diagnosed.isPending}
+            busyLabel="Marking…"
+            aria-describedby={isDirty ? 'diagnosed-hint' : undefined}
+            onClick={() => diagnosed.mutate(caseId)}
+          >
+            <span aria-hidden="true">✓</span> Mark diagnosed
+          </Button>
+        ) : null}
+        {isDirty ? (
+          <p id="diagnosed-hint" className="text-sm text-ink-muted">
+            Unsaved changes. Save the findings before marking the case diagnosed.
+          </p>
+        ) : null}
+      </div>
+      {diagnosed.error ? (
+        <Alert tone="danger" role="alert" title="Not marked diagnosed">
+          <p>{diagnosed.error.message}</p>
+        </Alert>
+      ) : null}
+    </form>
+  );
+}

@@ -1,0 +1,233 @@
+// A measurement step: one box per reading with its own unit, checked and worked out as it is
+// typed by the same fault-tree code the server runs (range problems under the box, computed
+// values, and the step it would lead to). The readings are sent as typed, with their units; the
+// server converts them, so a reading in °F is stored as entered and in °C.
+import type { UnitPreferences } from '@heatpath/contracts';
+import {
+  formatRange,
+  formatWithUnit,
+  previewReadings,
+  type MeasurementInput,
+  type MeasurementNode,
+  type Reading,
+  type UnitCode,
+  type WalkEvent,
+} from '@heatpath/fault-tree';
+import { useMemo, useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/field';
+import type { WalkModel } from '../case-tree';
+import { computedDisplay, preferredUnit, readNumber, unitOptions } from '../units';
+
+interface MeasurementFormProps {
+  node: MeasurementNode & { id: string };
+  position: number;
+  model: WalkModel | null;
+  preferences: UnitPreferences;
+  disabled: boolean;
+  /** What the server said was wrong with each reading of the last attempt. */
+  refusedFields: Readonly<Record<string, string>>;
+  onAnswer: (event: WalkEvent, label: string) => void;
+}
+
+function rangeHint(input: MeasurementInput, unit: UnitCode): string {
+  const range = formatRange(input.range, input.quantity, unit);
+  const allowed = `Allowed: ${range}.`;
+  return input.hint ? `${input.hint} ${allowed}` : allowed;
+}
+
+export function MeasurementForm({
+  node,
+  position,
+  model,
+  preferences,
+  disabled,
+  refusedFields,
+  onAnswer,
+}: MeasurementFormProps) {
+  const [typed, setTyped] = useState<Record<string, string>>({});
+  const [units, setUnits] = useState<Record<string, UnitCode>>(() =>
+    Object.fromEntries(node.inputs.map((input) => [input.name, preferredUnit(input.quantity, preferences)])),
+  );
+  const [tried, setTried] = useState(false);
+  // Server refusals belong to the readings that were sent; editing a box clears its own.
+  const [edited, setEdited] = useState<ReadonlySet<string>>(new Set());
+
+  const readings = useMemo(() => {
+    const entered: Record<string, Reading> = {};
+    for (const input of node.inputs) {
+      const value = readNumber(typed[input.name] ?? '');
+      const unit = units[input.name];
+      if (value !== null && !Number.isNaN(value) && unit) entered[input.name] = { value, unit };
+    }
+    return entered;
+  }, [node.inputs, typed, units]);
+
+  const preview = useMemo(
+    () => (model ? previewReadings(model.tree, model.snapshot, readings) : null),
+    [model, readings],
+  );
+
+  const inputNames = new Set(node.inputs.map((input) => input.name));
+  const relevant = model
+    ? model.tree.formulas.computed
+        .filter((entry) => entry.inputs.some((name) => inputNames.has(name)))
+        .map((entry) => entry.value.name)
+    : [];
+  const liveValues = (preview?.computed ?? []).filter((view) => relevant.includes(view.name));
+  const next = preview?.toNodeId ? model?.tree.nodes.get(preview.toNodeId) : undefined;
+
+  const problemFor = (input: MeasurementInput): string | undefined => {
+    const text = typed[input.name] ?? '';
+    const value = readNumber(text);
+    if (value !== null && Number.isNaN(value)) return 'Enter a number, such as 92.5.';
+    if (value === null) return tried ? `Enter “${input.label}”.` : undefined;
+    return preview?.fields[input.name] ?? (edited.has(input.name) ? undefined : refusedFields[input.name]);
+  };
+
+  const change = (name: string, update: () => void) => {
+    update();
+    setEdited((before) => new Set(before).add(name));
+  };
+
+  const submit = () => {
+    setTried(true);
+    const complete = node.inputs.every((input) => readings[input.name] !== undefined);
+    const clean = node.inputs.every((input) => !preview?.fields[input.name]);
+    if (!complete || !clean) return;
+    const label = node.inputs
+      .map((input) => {
+        const reading = readings[input.name];
+        return reading ? `${input.label} ${formatWithUnit(reading.value, reading.unit)}` : '';
+      })
+      .join(', ');
+    setEdited(new Set());
+    onAnswer(
+      { type: 'answer.measurement', nodeId: node.id, position, readings },
+      node.inputs.length > 0 ? `Readings: ${label}` : 'Continue',
+    );
+  };
+
+  const buttonLabel =
+    node.inputs.length === 0 ? 'Continue' : node.inputs.length === 1 ? 'Save reading' : 'Save readings';
+
+  return (
+    <form
+      noValidate
+      aria-label="Readings"
+      className="flex flex-col gap-5"
+      onSubmit={(event) => {
+        event.preventDefault();
+        submit();
+      }}
+    >
+      {node.inputs.map((input) => {
+        const unit = units[input.name] ?? input.unit;
+        const options = unitOptions(input.quantity);
+        const signed = input.range.min < 0;
+        const text = typed[input.name] ?? '';
+        return (
+          <TextField
+            key={input.name}
+            label={input.label}
+            hint={rangeHint(input, unit)}
+            error={problemFor(input)}
+            value={text}
+            disabled={disabled}
+            onChange={(event) =>
+              change(input.name, () =>
+                setTyped((before) => ({ ...before, [input.name]: event.target.value })),
+              )
+            }
+            inputMode={signed ? 'text' : 'decimal'}
+            autoComplete="off"
+            spellCheck={false}
+            enterKeyHint="done"
+            className="text-lg"
+            after={
+              <>
+                {signed ? (
+                  <button
+                    type="button"
+                    disabled={disabled}
+                    onClick={() =>
+                      change(input.name, () =>
+                        setTyped((before) => ({
+                          ...before,
+                          [input.name]: /^[-−]/.test(text.trim()) ? text.trim().slice(1) : `-${text.trim()}`,
+                        })),
+                      )
+                    }
+                    className="min-h-touch min-w-touch shrink-0 rounded-control border-2 border-line-strong bg-surface px-3 text-lg font-bold hover:bg-sunken disabled:opacity-60"
+                  >
+                    <span aria-hidden="true">±</span>
+                    <span className="sr-only">Change the sign of {input.label}</span>
+                  </button>
+                ) : null}
+                {options.length > 1 ? (
+                  <select
+                    aria-label={`Unit for ${input.label}`}
+                    value={unit}
+                    disabled={disabled}
+                    onChange={(event) => {
+                      const chosen = options.find((option) => option.value === event.target.value);
+                      if (chosen) change(input.name, () => setUnits((before) => ({ ...before, [input.name]: chosen.value })));
+                    }}
+                    className="min-h-touch shrink-0 rounded-control border-2 border-line-strong bg-sunken px-3 text-base font-semibold"
+                  >
+                    {options.map((option) => (
+                      <option key={option.value} value={option.value}>
+                        {option.label}
+                      </option>
+                    ))}
+                  </select>
+                ) : options[0]?.label && options[0].label !== 'number' ? (
+                  <span className="flex min-w-14 shrink-0 items-center justify-center rounded-control bg-sunken px-3 font-semibold">
+                    {options[0].label}
+                  </span>
+                ) : null}
+              </>
+            }
+          />
+        );
+      })}
+
+      {liveValues.length > 0 ? (
+        <section aria-labelledby={`${node.id}-live`} className="rounded-control bg-sunken p-4">
+          <h3 id={`${node.id}-live`} className="font-bold">
+            Worked out as you type
+          </h3>
+          <dl className="mt-2 flex flex-col gap-2" aria-live="polite">
+            {liveValues.map((view) => (
+              <div key={view.name} className="flex flex-col">
+                <dt className="text-sm text-ink-muted">{view.label}</dt>
+                <dd className="text-xl font-bold">
+                  {computedDisplay(view, preferences) ?? (
+                    <span className="text-base font-normal text-ink-muted">Waiting for the readings</span>
+                  )}
+                </dd>
+              </div>
+            ))}
+          </dl>
+          {next ? (
+            <p className="mt-3">
+              <span className="font-semibold">Next: </span>
+              {next.kind === 'outcome' ? `finding “${next.title}”` : next.title}
+            </p>
+          ) : null}
+        </section>
+      ) : next ? (
+        <p>
+          <span className="font-semibold">Next: </span>
+          {next.kind === 'outcome' ? `finding “${next.title}”` : next.title}
+        </p>
+      ) : null}
+
+      <div>
+        <Button type="submit" size="large" disabled={disabled}>
+          {buttonLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}

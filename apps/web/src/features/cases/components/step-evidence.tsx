@@ -1,0 +1,45 @@
+// What the step asks to be recorded (a photo, a log) with the upload right there, and what has
+// been attached to the step so far.
+import type { CaseAttachment } from '@heatpath/contracts';
+import type { EvidenceRequest } from '@heatpath/fault-tree';
+import { useId } from 'react';
+import { Badge } from '../../../components/ui/badge';
+import { AttachButton } from './attach-button';
+import { AttachmentThumbnails } from './attachment-thumbnails';
+
+interface StepEvidenceProps {
+  caseId: string;
+  nodeId: string;
+  requests: readonly EvidenceRequest[];
+  attachments: readonly CaseAttachment[];
+  canAttach: boolean;
+}
+
+export function StepEvidence({ caseId, nodeId, requests, attachments, canAttach }: StepEvidenceProps) {
+  const baseId = useId();
+  if (requests.length === 0 && attachments.length === 0) return null;
+  return (
+    <section aria-labelledby={`${baseId}-heading`} className="flex flex-col gap-3">
+      <h3 id={`${baseId}-heading`} className="font-bold">
+        Evidence for this step
+      </h3>
+      {requests.map((request, index) => {
+        const labelId = `${baseId}-${index}`;
+        return (
+          <div key={`${request.kind}:${request.label}`} className="flex flex-col gap-2">
+            <p className="flex flex-wrap items-center gap-2">
+              <span id={labelId}>{request.label}</span>
+              <Badge tone={request.required ? 'caution' : 'neutral'}>
+                {request.required ? 'Required' : 'If you can'}
+              </Badge>
+            </p>
+            {canAttach ? (
+              <AttachButton caseId={caseId} nodeId={nodeId} kind={request.kind} describedBy={labelId} />
+            ) : null}
+          </div>
+        );
+      })}
+      <AttachmentThumbnails attachments={attachments} />
+    </section>
+  );
+}
