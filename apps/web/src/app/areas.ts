@@ -13,6 +13,11 @@ export interface Area {
   label: string;
   labelFor?: Partial<Record<Role, string>>;
   roles: readonly Role[];
+  /**
+   * Roles that may open this area's records by link without the area in their navigation: the
+   * service advisor opens a case page from Findings.
+   */
+  readers?: readonly Role[];
   /** What this area is for, as the home screen explains it to each role. */
   summary: Partial<Record<Role, string>>;
   /** Set while the capability behind this area is not built; its screen is a placeholder. */
@@ -54,12 +59,12 @@ export const areas: readonly Area[] = [
     label: 'Cases',
     labelFor: { technician: 'My cases' },
     roles: ['lead', 'technician'],
+    readers: ['advisor'],
     summary: {
       lead: 'Review the workshop’s open and finished cases and the findings they reached.',
       technician:
         'Open a case for a vehicle, answer the guided checks, record readings and reach a finding.',
     },
-    comingWith: 'cases',
   },
   {
     id: 'training',
@@ -89,9 +94,8 @@ export const areas: readonly Area[] = [
     roles: ['advisor'],
     summary: {
       advisor:
-        'Receive finished findings and export concern, cause and correction into the repair order.',
+        'Read the findings of diagnosed cases: concern, cause and correction, parts, labour and follow-ups.',
     },
-    comingWith: 'repair-order export',
   },
   {
     id: 'calculators',
@@ -114,6 +118,11 @@ export function areasFor(role: Role): Area[] {
 
 export function areaLabel(area: Area, role: Role): string {
   return area.labelFor?.[role] ?? area.label;
+}
+
+/** Whether a role may open one of the area's records (a case page), in its navigation or not. */
+export function mayRead(area: Area, role: Role): boolean {
+  return area.roles.includes(role) || (area.readers?.includes(role) ?? false);
 }
 
 export function getArea(id: AreaId): Area {

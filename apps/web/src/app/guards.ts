@@ -1,11 +1,11 @@
 // Loader helpers that decide who may see a screen before it renders: no session → sign-in (with
 // the way back), wrong role → a 403 the route's error page explains.
-import { roleLabels, type Me } from '@heatpath/contracts';
+import { roleLabels, type Me, type Role } from '@heatpath/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { data, redirect } from 'react-router';
 import { isUnauthenticated } from '../lib/api-client';
 import { meQueryOptions } from '../lib/auth';
-import { getArea, type AreaId } from './areas';
+import { getArea, mayRead, type Area, type AreaId } from './areas';
 
 export interface ForbiddenData {
   message: string;
@@ -38,6 +38,14 @@ export async function requireMe(queryClient: QueryClient, request: Request): Pro
   }
 }
 
+function forbidden(area: Area, roles: readonly Role[], me: Me) {
+  const who = roles.map((role) => roleLabels[role]).join(', ');
+  return data<ForbiddenData>(
+    { message: `${area.label} is open to: ${who}. You are signed in as ${roleLabels[me.role]}.` },
+    { status: 403 },
+  );
+}
+
 export async function requireArea(
   queryClient: QueryClient,
   request: Request,
@@ -45,12 +53,18 @@ export async function requireArea(
 ): Promise<Me> {
   const me = await requireMe(queryClient, request);
   const area = getArea(areaId);
-  if (!area.roles.includes(me.role)) {
-    const who = area.roles.map((role) => roleLabels[role]).join(', ');
-    throw data<ForbiddenData>(
-      { message: `${area.label} is open to: ${who}. You are signed in as ${roleLabels[me.role]}.` },
-      { status: 403 },
-    );
-  }
+  if (!area.roles.includes(me.role)) throw forbidden(area, area.roles, me);
+  return me;
+}
+
+/** For one record of an area (a case page): its own roles and its readers may open it. */
+export async function requireAreaRecord(
+  queryClient: QueryClient,
+  request: Request,
+  areaId: AreaId,
+): Promise<Me> {
+  const me = await requireMe(queryClient, request);
+  const area = getArea(areaId);
+  if (!mayRead(area, me.role)) throw forbidden(area, [...area.roles, ...(area.readers ?? [])], me);
   return me;
 }
