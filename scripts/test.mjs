@@ -11,7 +11,7 @@ import { pnpm, root, run, runPnpm, mustRun } from './lib/run.mjs';
 
 const began = Date.now();
 const results = [];
-const resultsDir = join(root, 'test-results');
+const resultsDir = process.env.HEATPATH_RESULTS_DIR ?? join(root, 'test-results');
 const only = process.env.HEATPATH_TEST_ONLY?.split(',').map((s) => s.trim());
 const wanted = (stage) => !only || only.includes(stage);
 
@@ -61,9 +61,11 @@ async function main() {
   const chromium = wanted('e2e') ? await ensureChromium() : null;
   if (wanted('unit')) await ensureIapws();
 
+  // Data directory named by port, so two runs on different ports never share a cluster.
+  const testPort = Number(process.env.PGPORT_TEST ?? 54339);
   const db = await startCluster({
-    dataDir: join(root, '.data', 'test-pg'),
-    port: Number(process.env.PGPORT_TEST ?? 54339),
+    dataDir: join(root, '.data', `test-pg-${testPort}`),
+    port: testPort,
     database: 'heatpath_test',
     fresh: true,
     fast: true,

@@ -5,3 +5,4 @@ export * from './vehicles';
 export * from './cases';
 export * from './findings';
 export * from './case-detail';
+export * from './trees';

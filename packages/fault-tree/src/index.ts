@@ -142,3 +142,7 @@ export {
   WALK_FORMAT,
 } from './walk/persist-walk.js';
 export type { PersistedWalk, RestoreResult } from './walk/persist-walk.js';
+
+// Diff between versions
+export { diffTrees } from './diff/diff-trees.js';
+export type { FieldChange, NodeChange, NodeRef, TreeDiff } from './diff/diff-trees.js';

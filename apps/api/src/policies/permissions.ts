@@ -15,6 +15,7 @@ export const permissions = {
   'cases.assign': ['lead'],
   'findings.edit': ['lead', 'technician'],
   'trees.read': ['lead', 'technician', 'advisor'],
+  'trees.edit': ['lead'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

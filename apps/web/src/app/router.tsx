@@ -1,11 +1,15 @@
 // Every route of the web app. Routes are thin: a loader that guards and prefetches with the
-// feature's query options, and a page that composes feature components. The calculators load
-// lazily because they bring mathjs, the heaviest dependency, which most screens never need.
+// feature's query options, and a page that composes feature components. The calculators and the
+// case page load lazily because they bring mathjs (and the case page XState and the fault-tree
+// package), the heaviest dependencies, which the other screens never need.
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, type RouteObject } from 'react-router';
 import type { AreaId } from './areas';
+import { CasesRoute, casesLoader, casesShouldRevalidate } from './routes/cases';
 import { ComingLaterArea, comingLaterLoader } from './routes/coming-later-area';
+import { FindingsRoute, findingsLoader, findingsShouldRevalidate } from './routes/findings';
 import { HomeRoute } from './routes/home';
+import { NewCaseRoute, newCaseLoader } from './routes/new-case';
 import { SignInRoute, signInLoader } from './routes/sign-in';
 import { SignedInLayout, signedInLoader } from './routes/signed-in-layout';
 import { StaffRoute, staffLoader } from './routes/staff';
@@ -13,8 +17,9 @@ import { AppErrorPage, NotFoundPage, RouteErrorPage, StartingUp } from './shell/
 
 // One module for every calculator route, so they share one lazily loaded chunk.
 const calculatorsModule = () => import('./routes/calculators');
+const caseModule = () => import('./routes/case');
 
-const comingLaterAreas: readonly AreaId[] = ['trees', 'cases', 'training', 'casebook', 'findings'];
+const comingLaterAreas: readonly AreaId[] = ['trees', 'training', 'casebook'];
 
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
@@ -35,6 +40,26 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               children: [
                 { index: true, Component: HomeRoute },
                 { path: 'staff', loader: staffLoader(queryClient), Component: StaffRoute },
+                {
+                  path: 'cases',
+                  loader: casesLoader(queryClient),
+                  shouldRevalidate: casesShouldRevalidate,
+                  Component: CasesRoute,
+                },
+                { path: 'cases/new', loader: newCaseLoader(queryClient), Component: NewCaseRoute },
+                {
+                  path: 'cases/:caseId',
+                  lazy: async () => {
+                    const route = await caseModule();
+                    return { loader: route.caseLoader(queryClient), Component: route.CaseRoute };
+                  },
+                },
+                {
+                  path: 'findings',
+                  loader: findingsLoader(queryClient),
+                  shouldRevalidate: findingsShouldRevalidate,
+                  Component: FindingsRoute,
+                },
                 ...comingLaterAreas.map((areaId) => ({
                   path: areaId,
                   loader: comingLaterLoader(queryClient, areaId),

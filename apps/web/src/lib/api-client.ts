@@ -61,7 +61,8 @@ async function send(path: string, options: RequestOptions): Promise<Response> {
   // cannot set it, so it guards against request forgery alongside the SameSite cookie.
   if (method !== 'GET') headers['X-Heatpath-Client'] = 'web';
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
-  const body = options.form ?? (options.body === undefined ? undefined : JSON.stringify(options.body));
+  const body =
+    options.form ?? (options.body === undefined ? undefined : JSON.stringify(options.body));
 
   try {
     return await fetch(path, {

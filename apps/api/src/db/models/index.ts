@@ -5,16 +5,17 @@ import { CaseEvent } from './case-event';
 import { Customer } from './customer';
 import { DiagnosticCase } from './diagnostic-case';
 import { Finding } from './finding';
+import { RegressionCase } from './regression-case';
 import { Tree } from './tree';
 import { TreeVersion } from './tree-version';
 import { User } from './user';
 import { Vehicle } from './vehicle';
 import { Workshop } from './workshop';
 
-export { Attachment, CaseEvent, Customer, DiagnosticCase, Finding, Tree, TreeVersion, User, Vehicle, Workshop };
+export { Attachment, CaseEvent, Customer, DiagnosticCase, Finding, RegressionCase, Tree, TreeVersion, User, Vehicle, Workshop };
 
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [Workshop, User, Customer, Vehicle, Tree, TreeVersion, DiagnosticCase, CaseEvent, Attachment, Finding]) {
+  for (const model of [Workshop, User, Customer, Vehicle, Tree, TreeVersion, DiagnosticCase, CaseEvent, Attachment, Finding, RegressionCase]) {
     model.initModel(sequelize);
   }
   const fk = (name: string) => ({ foreignKey: { name, allowNull: false } });
@@ -44,4 +45,8 @@ export function initModels(sequelize: Sequelize): void {
   Finding.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
   Finding.belongsTo(Workshop, fk('workshopId'));
   Finding.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor' });
+  RegressionCase.belongsTo(Tree, { foreignKey: 'treeId', as: 'tree' });
+  RegressionCase.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  RegressionCase.belongsTo(Workshop, fk('workshopId'));
+  RegressionCase.belongsTo(User, { foreignKey: 'addedBy', as: 'adder' });
 }

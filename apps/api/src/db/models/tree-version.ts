@@ -8,6 +8,12 @@ import type { Workshop } from './workshop';
 
 export type TreeVersionStatus = 'draft' | 'published' | 'retired';
 
+export interface PublishConfirmation {
+  confirmedBy: string;
+  confirmedAt: string;
+  changedCases: { caseId: string; reference: string; from: string | null; to: string | null }[];
+}
+
 export class TreeVersion extends Model<InferAttributes<TreeVersion>, InferCreationAttributes<TreeVersion>> {
   declare id: CreationOptional<string>;
   declare treeId: ForeignKey<Tree['id']>;
@@ -22,6 +28,9 @@ export class TreeVersion extends Model<InferAttributes<TreeVersion>, InferCreati
   declare publishedBy: ForeignKey<User['id']> | null;
   declare publishedAt: Date | null;
   declare retiredAt: CreationOptional<Date | null>;
+  /** Set when a publish went ahead although regression cases would reach another outcome. */
+  declare publishConfirmation: CreationOptional<PublishConfirmation | null>;
+  declare basedOnVersion: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare tree?: NonAttribute<Tree>;
@@ -37,6 +46,8 @@ export class TreeVersion extends Model<InferAttributes<TreeVersion>, InferCreati
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         publishedAt: { type: DataTypes.DATE, allowNull: true },
         retiredAt: { type: DataTypes.DATE, allowNull: true },
+        publishConfirmation: { type: DataTypes.JSONB, allowNull: true },
+        basedOnVersion: { type: DataTypes.INTEGER, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

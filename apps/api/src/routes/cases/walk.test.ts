@@ -74,7 +74,7 @@ describe('walking a case', () => {
     // The same answer again with a new key is a duplicate submit from a stale screen.
     const duplicate = await answer(tech, caseId, stuckShroudPath[0]!, 0);
     expect(duplicate.status).toBe(409);
-    expect(duplicate.body.error.message).toMatch(/reload/);
+    expect(duplicate.body.error.message).toMatch(/reload/i);
     // A second device still showing the first step.
     const lead = await signedIn(app, people.lead.email, testPassword);
     const stale = await answer(lead, caseId, { nodeId: 'interview-pattern', answer: { type: 'answer.choice', choiceId: 'no-pattern' } }, 0);

@@ -17,17 +17,30 @@ const controlClasses =
 interface FieldFrameProps {
   id: string;
   label: ReactNode;
+  /** A short fact on the label's line, such as the allowed range; read as a description. */
+  labelAside?: ReactNode;
   hint?: ReactNode;
   error?: string | undefined;
   children: ReactNode;
 }
 
-function FieldFrame({ id, label, hint, error, children }: FieldFrameProps) {
+function FieldFrame({ id, label, labelAside, hint, error, children }: FieldFrameProps) {
   return (
     <div className="flex flex-col gap-1.5">
-      <label htmlFor={id} className="font-semibold">
-        {label}
-      </label>
+      {labelAside ? (
+        <div className="flex flex-wrap items-baseline justify-between gap-x-3">
+          <label htmlFor={id} className="font-semibold">
+            {label}
+          </label>
+          <span id={`${id}-aside`} className="text-sm text-ink-muted">
+            {labelAside}
+          </span>
+        </div>
+      ) : (
+        <label htmlFor={id} className="font-semibold">
+          {label}
+        </label>
+      )}
       {hint ? (
         <p id={`${id}-hint`} className="text-sm text-ink-muted">
           {hint}
@@ -53,13 +66,20 @@ export function FieldError({ id, message }: { id: string; message: string }) {
   );
 }
 
-function describedBy(id: string, hint: ReactNode, error: string | undefined): string | undefined {
-  const ids = [hint ? `${id}-hint` : '', error ? `${id}-error` : ''].filter(Boolean);
-  return ids.length > 0 ? ids.join(' ') : undefined;
+function describedBy(
+  id: string,
+  hint: ReactNode,
+  error: string | undefined,
+  aside?: ReactNode,
+): string | undefined {
+  const ids = [aside ? `${id}-aside` : '', hint ? `${id}-hint` : '', error ? `${id}-error` : ''];
+  const present = ids.filter(Boolean);
+  return present.length > 0 ? present.join(' ') : undefined;
 }
 
 interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'id'> {
   label: ReactNode;
+  labelAside?: ReactNode;
   hint?: ReactNode;
   error?: string | undefined;
   /** Text shown after the box, such as a unit ("°C"). */
@@ -71,6 +91,7 @@ interface TextFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 'id
 
 export function TextField({
   label,
+  labelAside,
   hint,
   error,
   suffix,
@@ -86,12 +107,12 @@ export function TextField({
       id={id}
       className={`${controlClasses} ${className}`}
       aria-invalid={error ? true : undefined}
-      aria-describedby={describedBy(id, hint, error)}
+      aria-describedby={describedBy(id, hint, error, labelAside)}
       {...rest}
     />
   );
   return (
-    <FieldFrame id={id} label={label} hint={hint} error={error}>
+    <FieldFrame id={id} label={label} labelAside={labelAside} hint={hint} error={error}>
       {suffix || after ? (
         <div className="flex items-stretch gap-2">
           {input}

@@ -3,7 +3,12 @@
 // Only the case page loads this module (it brings mathjs and XState), and a published version
 // never changes, so each version is compiled once per page load and kept.
 import type { CaseDetail } from '@heatpath/contracts';
-import { compileTree, replayWalk, type CompiledTree, type WalkSnapshot } from '@heatpath/fault-tree';
+import {
+  compileTree,
+  replayWalk,
+  type CompiledTree,
+  type WalkSnapshot,
+} from '@heatpath/fault-tree';
 import { useMemo } from 'react';
 
 const compiledByVersion = new Map<string, CompiledTree | null>();

@@ -11,18 +11,26 @@ import {
   type UnitCode,
 } from '@heatpath/fault-tree';
 
+function wantedUnit(quantity: Quantity, preferences: UnitPreferences): UnitCode | null {
+  const fahrenheit = preferences.temperature === 'F';
+  switch (quantity) {
+    case 'temperature':
+      return fahrenheit ? 'degF' : 'degC';
+    case 'temperatureDelta':
+      return fahrenheit ? 'degF' : 'K';
+    case 'pressure':
+      return preferences.pressure === 'psi' ? 'psi' : 'bar';
+    case 'volume':
+      return preferences.volume === 'qt' ? 'qt' : 'L';
+    default:
+      return null;
+  }
+}
+
 /** The person's preferred unit for a quantity, where the quantity can be entered in it. */
 export function preferredUnit(quantity: Quantity, preferences: UnitPreferences): UnitCode {
   const info = quantityInfo[quantity];
-  const wanted: UnitCode | undefined = {
-    temperature: preferences.temperature === 'F' ? 'degF' : 'degC',
-    temperatureDelta: preferences.temperature === 'F' ? 'degF' : 'K',
-    pressure: preferences.pressure,
-    volume: preferences.volume,
-    time: undefined,
-    percentage: undefined,
-    number: undefined,
-  }[quantity] satisfies UnitCode | undefined;
+  const wanted = wantedUnit(quantity, preferences);
   return wanted && info.entryUnits.includes(wanted) ? wanted : info.canonical;
 }
 
@@ -52,4 +60,19 @@ export function computedDisplay(view: ComputedView, preferences: UnitPreferences
   const unit = preferredUnit(view.quantity, preferences);
   if (unit === view.unit) return view.display;
   return `${formatCanonical(view.value, view.quantity, unit)} (${view.display})`;
+}
+
+/**
+ * The person's units, adjusted to the units chosen in this step's boxes: someone typing °F sees
+ * the values worked out from them in °F too.
+ */
+export function unitsAsEntered(
+  preferences: UnitPreferences,
+  chosen: readonly UnitCode[],
+): UnitPreferences {
+  return {
+    temperature: chosen.includes('degF') ? 'F' : chosen.includes('degC') ? 'C' : preferences.temperature,
+    pressure: chosen.includes('psi') ? 'psi' : chosen.includes('bar') ? 'bar' : preferences.pressure,
+    volume: chosen.includes('qt') ? 'qt' : chosen.includes('L') ? 'L' : preferences.volume,
+  };
 }

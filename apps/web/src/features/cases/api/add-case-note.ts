@@ -23,6 +23,8 @@ export function addCaseNote({ caseId, note, signal }: AddCaseNoteInput) {
 export function useAddCaseNote() {
   const queryClient = useQueryClient();
   return useMutation({
+    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    networkMode: 'always',
     mutationFn: addCaseNote,
     onSuccess: (_note, { caseId }) =>
       queryClient.invalidateQueries({ queryKey: casesKeys.detail(caseId) }),

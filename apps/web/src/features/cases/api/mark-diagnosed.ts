@@ -13,6 +13,8 @@ export function markDiagnosed(caseId: string) {
 export function useMarkDiagnosed() {
   const queryClient = useQueryClient();
   return useMutation({
+    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    networkMode: 'always',
     mutationFn: markDiagnosed,
     onSuccess: (detail) => {
       queryClient.setQueryData(casesKeys.detail(detail.id), detail);

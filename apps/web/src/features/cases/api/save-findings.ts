@@ -21,6 +21,8 @@ export function saveFindings({ caseId, findings }: SaveFindingsInput) {
 export function useSaveFindings() {
   const queryClient = useQueryClient();
   return useMutation({
+    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    networkMode: 'always',
     mutationFn: saveFindings,
     onSuccess: (detail) => {
       queryClient.setQueryData(casesKeys.detail(detail.id), detail);

@@ -20,7 +20,11 @@ export function submitWalkEvent({ caseId, idempotencyKey, event, signal }: Submi
   });
 }
 
-/** The cache is updated by the caller (useWalkAnswers), which also owns retries. */
+/**
+ * The cache is updated by the caller (useWalkAnswers), which also owns retries. Sent even when
+ * the browser says it is offline, so a failure shows at once as "not saved yet" instead of the
+ * request waiting silently; the caller retries when the connection returns.
+ */
 export function useSubmitWalkEvent() {
-  return useMutation({ mutationFn: submitWalkEvent });
+  return useMutation({ mutationFn: submitWalkEvent, networkMode: 'always' });
 }

@@ -29,6 +29,8 @@ export function uploadAttachment({ caseId, file, nodeId, photoOnly }: UploadAtta
 export function useUploadAttachment() {
   const queryClient = useQueryClient();
   return useMutation({
+    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    networkMode: 'always',
     mutationFn: uploadAttachment,
     onSuccess: (_attachment, { caseId }) =>
       queryClient.invalidateQueries({ queryKey: casesKeys.detail(caseId) }),

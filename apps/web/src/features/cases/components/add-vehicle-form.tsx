@@ -10,7 +10,7 @@ import {
 } from '@heatpath/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useId, useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -57,7 +57,7 @@ export function AddVehicleForm({ initialQuery, onAdded, onCancel }: AddVehicleFo
     },
   });
   const { errors } = form.formState;
-  const vin = form.watch('vin') ?? '';
+  const vin = useWatch({ control: form.control, name: 'vin' }) ?? '';
   const duplicates = useVehicleSearch(duplicateOf ?? '');
 
   const submit = form.handleSubmit((values) => {
@@ -90,7 +90,11 @@ export function AddVehicleForm({ initialQuery, onAdded, onCancel }: AddVehicleFo
         <Alert
           tone="danger"
           role="alert"
-          title={create.error.status === 409 ? 'Already on file' : 'Vehicle not added'}
+          title={
+            isApiError(create.error) && create.error.status === 409
+              ? 'Already on file'
+              : 'Vehicle not added'
+          }
         >
           <p>{create.error.message}</p>
           {found.map((vehicle) => (
@@ -126,8 +130,18 @@ export function AddVehicleForm({ initialQuery, onAdded, onCancel }: AddVehicleFo
           error={errors.plate?.message}
           {...form.register('plate')}
         />
-        <TextField label="Make" autoComplete="off" error={errors.make?.message} {...form.register('make')} />
-        <TextField label="Model" autoComplete="off" error={errors.model?.message} {...form.register('model')} />
+        <TextField
+          label="Make"
+          autoComplete="off"
+          error={errors.make?.message}
+          {...form.register('make')}
+        />
+        <TextField
+          label="Model"
+          autoComplete="off"
+          error={errors.model?.message}
+          {...form.register('model')}
+        />
         <TextField
           label="Model year"
           inputMode="numeric"

@@ -12,10 +12,19 @@ interface AnswerStatusProps {
   onDismiss: () => void;
 }
 
-export function AnswerStatus({ pending, notice, onRetry, onDiscard, onDismiss }: AnswerStatusProps) {
+export function AnswerStatus({
+  pending,
+  notice,
+  onRetry,
+  onDiscard,
+  onDismiss,
+}: AnswerStatusProps) {
   if (pending?.status === 'sending') {
     return (
-      <div role="status" className="flex items-center gap-3 rounded-control bg-info-bg p-3 text-info-ink">
+      <div
+        role="status"
+        className="flex items-center gap-3 rounded-control bg-info-bg p-3 text-info-ink"
+      >
         <span
           aria-hidden="true"
           className="size-5 shrink-0 animate-spin rounded-full border-4 border-info-line border-t-transparent"
@@ -30,9 +39,10 @@ export function AnswerStatus({ pending, notice, onRetry, onDiscard, onDismiss }:
     return (
       <Alert tone="danger" role="alert" title="Not saved yet">
         <p>
-          “{pending.label}” has not reached the server. {pending.problem} It stays on this device
-          and is sent again by itself when the connection is back.
+          “{pending.label}” is kept on this device but has not reached the server. It is sent again
+          by itself when the connection is back.
         </p>
+        {pending.problem ? <p className="text-sm">{pending.problem}</p> : null}
         <div className="flex flex-wrap gap-3">
           <Button onClick={onRetry}>Retry</Button>
           <Button variant="quiet" onClick={onDiscard}>
@@ -46,8 +56,8 @@ export function AnswerStatus({ pending, notice, onRetry, onDiscard, onDismiss }:
     return (
       <Alert tone="info" role="alert" title="The case has moved on">
         <p>
-          “{notice.label}” was not saved: the case changed elsewhere, perhaps on another device.
-          It now shows where the case stands.
+          “{notice.label}” was not saved: the case changed elsewhere, perhaps on another device. It
+          now shows where the case stands.
         </p>
         <p className="text-sm">{notice.message}</p>
         <div>

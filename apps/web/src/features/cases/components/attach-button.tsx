@@ -30,7 +30,13 @@ interface AttachButtonProps {
   disabled?: boolean;
 }
 
-export function AttachButton({ caseId, nodeId, kind, describedBy, disabled = false }: AttachButtonProps) {
+export function AttachButton({
+  caseId,
+  nodeId,
+  kind,
+  describedBy,
+  disabled = false,
+}: AttachButtonProps) {
   const input = useRef<HTMLInputElement>(null);
   const upload = useUploadAttachment();
   const [file, setFile] = useState<File | null>(null);
@@ -50,7 +56,8 @@ export function AttachButton({ caseId, nodeId, kind, describedBy, disabled = fal
   };
 
   const lost =
-    upload.error && (!isApiError(upload.error) || upload.error.code === 'network' || upload.error.status >= 500);
+    upload.error &&
+    (!isApiError(upload.error) || upload.error.code === 'network' || upload.error.status >= 500);
 
   return (
     <div className="flex flex-col gap-2">
@@ -89,7 +96,12 @@ export function AttachButton({ caseId, nodeId, kind, describedBy, disabled = fal
           <p>{upload.error.message}</p>
           {lost && file ? (
             <div>
-              <Button variant="secondary" onClick={() => send(file)} busy={upload.isPending} busyLabel="Uploading…">
+              <Button
+                variant="secondary"
+                onClick={() => send(file)}
+                busy={upload.isPending}
+                busyLabel="Uploading…"
+              >
                 Retry upload
               </Button>
             </div>

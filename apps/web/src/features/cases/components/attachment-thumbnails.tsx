@@ -32,7 +32,11 @@ export function AttachmentThumbnails({
                 />
               ) : (
                 <span className="flex aspect-square w-full items-center justify-center rounded-[0.375rem] bg-sunken text-lg font-bold">
-                  {attachment.kind === 'log' ? 'Log' : attachment.kind === 'photo' ? 'Photo' : 'File'}
+                  {attachment.kind === 'log'
+                    ? 'Log'
+                    : attachment.kind === 'photo'
+                      ? 'Photo'
+                      : 'File'}
                 </span>
               )}
               <span className="truncate text-sm" title={attachment.name}>

@@ -11,16 +11,27 @@ interface AttachmentsGalleryProps {
   canAttach: boolean;
 }
 
-export function AttachmentsGallery({ caseId, attachments, stepTitle, canAttach }: AttachmentsGalleryProps) {
+export function AttachmentsGallery({
+  caseId,
+  attachments,
+  stepTitle,
+  canAttach,
+}: AttachmentsGalleryProps) {
   return (
-    <section aria-labelledby="attachments-heading" className="flex flex-col gap-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-6">
+    <section
+      aria-labelledby="attachments-heading"
+      className="flex flex-col gap-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
+    >
       <h2 id="attachments-heading" className="text-lg font-bold">
-        Photos and files <span className="text-sm font-normal text-ink-muted">({attachments.length})</span>
+        Photos and files{' '}
+        <span className="text-sm font-normal text-ink-muted">({attachments.length})</span>
       </h2>
       {attachments.length === 0 ? <p className="text-ink-muted">Nothing attached yet.</p> : null}
       <AttachmentThumbnails
         attachments={attachments}
-        captionFor={(attachment) => (attachment.nodeId ? stepTitle(attachment.nodeId) : 'Whole case')}
+        captionFor={(attachment) =>
+          attachment.nodeId ? stepTitle(attachment.nodeId) : 'Whole case'
+        }
       />
       {canAttach ? <AttachButton caseId={caseId} kind="any" /> : null}
     </section>

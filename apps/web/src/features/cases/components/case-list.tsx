@@ -50,62 +50,73 @@ export function CaseList({
 
   return (
     <div className="flex flex-col gap-5">
-      <div className="grid gap-4 md:grid-cols-2 lg:grid-cols-[auto_1fr_1fr_1fr] lg:items-end">
-        {showScope ? (
-          <SegmentedChoice
-            legend="Show"
-            value={filters.scope}
-            choices={[
-              { value: 'mine', label: 'My cases' },
-              { value: 'workshop', label: 'Whole workshop' },
-            ]}
-            onChange={(scope) => onFiltersChange({ ...filters, scope })}
-          />
-        ) : null}
-        <TextField
-          label="Search cases"
-          type="search"
-          value={filters.q ?? ''}
-          onChange={(event) => onFiltersChange({ ...filters, q: event.target.value || undefined })}
-          hint="Plate, VIN, customer or case number"
-          autoComplete="off"
-          spellCheck={false}
-          enterKeyHint="search"
-        />
-        {showStatus ? (
-          <SelectField
-            label="Status"
-            value={filters.status ?? anyValue}
+      <div className="flex flex-wrap items-end gap-4">
+        <div className="min-w-64 flex-[2_1_20rem]">
+          <TextField
+            label="Search cases"
+            type="search"
+            value={filters.q ?? ''}
             onChange={(event) =>
-              onFiltersChange({
-                ...filters,
-                status: caseStatuses.find((status) => status === event.target.value),
-              })
+              onFiltersChange({ ...filters, q: event.target.value || undefined })
             }
-            options={[
-              { value: anyValue, label: 'Any status' },
-              ...caseStatuses.map((status) => ({ value: status, label: statusLabel(status) })),
-            ]}
+            placeholder="Plate, VIN, customer or case number"
+            className="placeholder:text-ink-muted"
+            autoComplete="off"
+            spellCheck={false}
+            enterKeyHint="search"
           />
+        </div>
+        {showScope ? (
+          <div className="shrink-0 [&_label]:whitespace-nowrap">
+            <SegmentedChoice
+              legend="Show"
+              value={filters.scope}
+              choices={[
+                { value: 'mine', label: 'My cases' },
+                { value: 'workshop', label: 'Whole workshop' },
+              ]}
+              onChange={(scope) => onFiltersChange({ ...filters, scope })}
+            />
+          </div>
+        ) : null}
+        {showStatus ? (
+          <div className="min-w-48 flex-[1_1_12rem]">
+            <SelectField
+              label="Status"
+              value={filters.status ?? anyValue}
+              onChange={(event) =>
+                onFiltersChange({
+                  ...filters,
+                  status: caseStatuses.find((status) => status === event.target.value),
+                })
+              }
+              options={[
+                { value: anyValue, label: 'Any status' },
+                ...caseStatuses.map((status) => ({ value: status, label: statusLabel(status) })),
+              ]}
+            />
+          </div>
         ) : null}
         {technicians ? (
-          <SelectField
-            label="Technician"
-            value={filters.technicianId ?? anyValue}
-            onChange={(event) =>
-              onFiltersChange({ ...filters, technicianId: event.target.value || undefined })
-            }
-            options={[
-              { value: anyValue, label: 'Anyone' },
-              ...technicians.map((person) => ({ value: person.id, label: person.name })),
-            ]}
-          />
+          <div className="min-w-48 flex-[1_1_12rem]">
+            <SelectField
+              label="Technician"
+              value={filters.technicianId ?? anyValue}
+              onChange={(event) =>
+                onFiltersChange({ ...filters, technicianId: event.target.value || undefined })
+              }
+              options={[
+                { value: anyValue, label: 'Anyone' },
+                ...technicians.map((person) => ({ value: person.id, label: person.name })),
+              ]}
+            />
+          </div>
         ) : null}
       </div>
 
       {cases.isPending ? (
         <LoadingState label="Loading cases…" />
-      ) : cases.isError ? (
+      ) : cases.isError && rows.length === 0 ? (
         <ErrorState
           title="Cases not loaded"
           message={cases.error.message}
@@ -144,7 +155,12 @@ export function CaseList({
             </div>
           ) : null}
           {cases.isFetchNextPageError ? (
-            <ErrorState title="More cases not loaded" message={cases.error?.message ?? ''} />
+            <ErrorState
+              title="More cases not loaded"
+              message={cases.error?.message ?? ''}
+              onRetry={() => void cases.fetchNextPage()}
+              retrying={cases.isFetchingNextPage}
+            />
           ) : null}
         </>
       )}

@@ -44,7 +44,10 @@ export function CaseNotes({ caseId, notes, currentStep, stepTitle, canWrite }: C
   };
 
   return (
-    <section aria-labelledby="notes-heading" className="flex flex-col gap-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-6">
+    <section
+      aria-labelledby="notes-heading"
+      className="flex flex-col gap-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
+    >
       <h2 id="notes-heading" className="text-lg font-bold">
         Notes <span className="text-sm font-normal text-ink-muted">({notes.length})</span>
       </h2>

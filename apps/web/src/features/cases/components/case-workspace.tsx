@@ -3,9 +3,9 @@
 // Everything is rebuilt from GET /api/cases/:caseId, so a reload or another device opens the case
 // exactly where it stands. Part of the lazily loaded case chunk.
 import type { CaseDetail } from '@heatpath/contracts';
-import type { ReactNode } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
+import { isApiError } from '../../../lib/api-client';
 import { useMe } from '../../../lib/auth';
 import { useCase } from '../api/get-case';
 import { formatDateTime } from '../case-format';
@@ -13,6 +13,7 @@ import { useWalkModel } from '../case-tree';
 import { useWalkAnswers, type WalkAnswers } from '../hooks/use-walk-answers';
 import { AttachmentsGallery } from './attachments-gallery';
 import { AuditTrail } from './audit-trail';
+import { CaseFacts } from './case-facts';
 import { CaseHeader } from './case-header';
 import { CaseNotes } from './case-notes';
 import { ComputedValues } from './computed-values';
@@ -21,19 +22,13 @@ import { FindingsEditor } from './findings-editor';
 import { FindingsView } from './findings-view';
 import { WalkPath } from './walk-path';
 
-interface CaseWorkspaceProps {
-  caseId: string;
-  /** A way back to the list the person came from, shown beside the case's title. */
-  backLink?: ReactNode;
-}
-
-export function CaseWorkspace({ caseId, backLink }: CaseWorkspaceProps) {
+export function CaseWorkspace({ caseId }: { caseId: string }) {
   const query = useCase(caseId);
   const answers = useWalkAnswers(caseId);
 
   if (query.isPending) return <LoadingState label="Loading the case…" />;
   if (query.isError) {
-    const missing = query.error.status === 404;
+    const missing = isApiError(query.error) && query.error.status === 404;
     return (
       <ErrorState
         title={missing ? 'Case not found' : 'Case not loaded'}
@@ -43,18 +38,10 @@ export function CaseWorkspace({ caseId, backLink }: CaseWorkspaceProps) {
       />
     );
   }
-  return <CaseView detail={query.data} answers={answers} backLink={backLink} />;
+  return <CaseView detail={query.data} answers={answers} />;
 }
 
-function CaseView({
-  detail,
-  answers,
-  backLink,
-}: {
-  detail: CaseDetail;
-  answers: WalkAnswers;
-  backLink: ReactNode;
-}) {
+function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswers }) {
   const me = useMe();
   const model = useWalkModel(detail);
   const preferences = me.preferences.units;
@@ -67,7 +54,7 @@ function CaseView({
 
   return (
     <div className="flex flex-col gap-5">
-      <CaseHeader detail={detail} aside={backLink} />
+      <CaseHeader detail={detail} />
 
       {walk.divergence ? (
         <Alert tone="danger" title="This case’s record no longer fits its tree">
@@ -79,7 +66,10 @@ function CaseView({
       ) : null}
       {detail.status === 'diagnosed' && detail.diagnosedAt ? (
         <Alert tone="ok" title="Diagnosed">
-          <p>Marked diagnosed {formatDateTime(detail.diagnosedAt)}. The findings below go to the repair order.</p>
+          <p>
+            Marked diagnosed {formatDateTime(detail.diagnosedAt)}. The findings below go to the
+            repair order.
+          </p>
         </Alert>
       ) : null}
 
@@ -117,6 +107,7 @@ function CaseView({
           canWrite={detail.can.walk}
         />
       </div>
+      <CaseFacts detail={detail} />
       <AuditTrail caseId={detail.id} stepTitle={stepTitle} />
     </div>
   );

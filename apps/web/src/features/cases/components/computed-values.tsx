@@ -4,10 +4,19 @@ import type { UnitPreferences } from '@heatpath/contracts';
 import type { WalkSummary } from '@heatpath/fault-tree';
 import { computedDisplay } from '../units';
 
-export function ComputedValues({ walk, preferences }: { walk: WalkSummary; preferences: UnitPreferences }) {
+export function ComputedValues({
+  walk,
+  preferences,
+}: {
+  walk: WalkSummary;
+  preferences: UnitPreferences;
+}) {
   const known = walk.computed.filter((view) => view.value !== null);
   return (
-    <section aria-labelledby="computed-heading" className="rounded-panel border-2 border-line bg-surface p-4 sm:p-6">
+    <section
+      aria-labelledby="computed-heading"
+      className="rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
+    >
       <h2 id="computed-heading" className="mb-3 text-lg font-bold">
         Worked out so far
       </h2>

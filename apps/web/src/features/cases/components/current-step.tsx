@@ -44,7 +44,10 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
           variant="secondary"
           disabled={answers.pending !== null}
           onClick={() =>
-            answers.answer({ type: 'walk.back', nodeId: node.id, position: walk.position }, 'Step back')
+            answers.answer(
+              { type: 'walk.back', nodeId: node.id, position: walk.position },
+              'Step back',
+            )
           }
         >
           <span aria-hidden="true">←</span> Step back
@@ -77,32 +80,52 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
     node.estimatedMinutes !== undefined ? `About ${node.estimatedMinutes} min` : null,
   ].filter(Boolean);
 
+  // On a wide screen the cautions take the left column. Short answer controls (choices, Done)
+  // then sit under the instruction on the right, so both stay in view beside long cautions; a
+  // measurement's boxes need the right column to themselves, and its prompt goes under the cautions.
+  const textBeside = node.cautions.length > 0 && node.kind !== 'measurement';
+  const instruction = (
+    <div className="flex flex-col gap-2">
+      <p className="text-lg" data-testid="step-instruction">
+        {text}
+      </p>
+      {facts.length > 0 ? <p className="text-ink-muted">{facts.join(' · ')}</p> : null}
+    </div>
+  );
+  const why = node.notes ? (
+    <p className="text-sm text-ink-muted">
+      <span className="font-semibold">Why this step: </span>
+      {node.notes}
+    </p>
+  ) : null;
+
   return (
     <section
       aria-labelledby="current-step-title"
       className="rounded-panel border-2 border-line-strong bg-surface p-4 sm:p-6"
     >
-      <p className="text-sm font-semibold text-ink-muted">
-        Step {walk.path.length + 1} · {kindLabels[node.kind]}
-      </p>
-      <h2 id="current-step-title" className="mb-4 text-2xl font-bold">
-        {node.title}
-      </h2>
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1.05fr)_minmax(0,1fr)]">
+      <div className="mb-3 flex flex-wrap items-baseline gap-x-4 gap-y-1">
+        <h2 id="current-step-title" className="text-2xl font-bold">
+          {node.title}
+        </h2>
+        <p className="font-semibold text-ink-muted">
+          Step {walk.path.length + 1} · {kindLabels[node.kind]}
+        </p>
+      </div>
+      <div
+        className={
+          'grid gap-5 ' +
+          (node.kind === 'measurement'
+            ? 'lg:grid-cols-[minmax(0,1.15fr)_minmax(0,1fr)]'
+            : 'lg:grid-cols-2')
+        }
+      >
         <div className="flex flex-col gap-4">
           <StepCautions cautions={node.cautions} />
-          <p className="text-lg" data-testid="step-instruction">
-            {text}
-          </p>
-          {facts.length > 0 ? <p className="text-ink-muted">{facts.join(' · ')}</p> : null}
-          {node.notes ? (
-            <p className="text-sm text-ink-muted">
-              <span className="font-semibold">Why this step: </span>
-              {node.notes}
-            </p>
-          ) : null}
+          {textBeside ? null : instruction}
         </div>
         <div className="flex flex-col gap-4">
+          {textBeside ? instruction : null}
           {status}
           {!canWalk ? (
             <p className="rounded-control bg-sunken p-3">
@@ -115,7 +138,9 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
               node={node}
               position={walk.position}
               disabled={disabled}
-              pendingChoiceId={pendingEvent?.type === 'answer.choice' ? pendingEvent.choiceId : null}
+              pendingChoiceId={
+                pendingEvent?.type === 'answer.choice' ? pendingEvent.choiceId : null
+              }
               onAnswer={answers.answer}
             />
           ) : node.kind === 'measurement' ? (
@@ -148,6 +173,7 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
             canAttach={canWalk}
           />
           {stepBack}
+          {why}
         </div>
       </div>
     </section>

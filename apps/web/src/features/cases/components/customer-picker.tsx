@@ -105,7 +105,8 @@ function CustomerSearch({
   const settled = useDebouncedValue(query.trim(), 250);
   const search = useCustomerSearch(settled);
   const results = settled.length >= minCustomerQuery ? (search.data?.customers ?? []) : [];
-  const searched = settled.length >= minCustomerQuery && search.isSuccess && !search.isPlaceholderData;
+  const searched =
+    settled.length >= minCustomerQuery && search.isSuccess && !search.isPlaceholderData;
 
   return (
     <div className="flex flex-col gap-4">

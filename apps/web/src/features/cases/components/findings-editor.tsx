@@ -32,7 +32,10 @@ function toValues(findings: Findings): FindingsFormValues {
       quantity: String(part.quantity),
       partNumber: part.partNumber ?? '',
     })),
-    labour: findings.labour.map((line) => ({ operation: line.operation, hours: String(line.hours) })),
+    labour: findings.labour.map((line) => ({
+      operation: line.operation,
+      hours: String(line.hours),
+    })),
     followUps: findings.followUps.map((text) => ({ text })),
   };
 }
@@ -79,7 +82,10 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
         quantity: toNumber(part.quantity),
         partNumber: part.partNumber.trim() || null,
       })),
-      labour: values.labour.map((line) => ({ operation: line.operation, hours: toNumber(line.hours) })),
+      labour: values.labour.map((line) => ({
+        operation: line.operation,
+        hours: toNumber(line.hours),
+      })),
       followUps: values.followUps.map((followUp) => followUp.text),
     };
     const parsed = updateFindingsRequestSchema.safeParse(request);
@@ -121,16 +127,16 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
         </h2>
         <p className="text-sm text-ink-muted">
           Drafted from the finding; edit before you mark the case diagnosed.
-          {findings.updatedBy ? ` Last saved by ${findings.updatedBy.name}, ${formatDateTime(findings.updatedAt)}.` : ''}
+          {findings.updatedBy
+            ? ` Last saved by ${findings.updatedBy.name}, ${formatDateTime(findings.updatedAt)}.`
+            : ''}
         </p>
       </div>
 
       {conflict || (newerOnServer && !save.isPending) ? (
         <Alert tone="danger" role="alert" title="Someone else saved these findings">
           <p>
-            {conflict
-              ? save.error?.message
-              : 'Newer findings were saved since you opened them.'}{' '}
+            {conflict ? save.error?.message : 'Newer findings were saved since you opened them.'}{' '}
             Reload them to see the changes; what you typed here will be replaced.
           </p>
           <div>
@@ -145,11 +151,22 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
         </Alert>
       ) : null}
 
-      <TextAreaField label="Concern" rows={2} error={errors.concern?.message} {...form.register('concern')} />
-      <TextAreaField label="Cause" rows={4} error={errors.cause?.message} {...form.register('cause')} />
+      <TextAreaField
+        label="Concern"
+        rows={2}
+        error={errors.concern?.message}
+        {...form.register('concern')}
+      />
+      <TextAreaField
+        label="Cause"
+        rows={4}
+        error={errors.cause?.message}
+        {...form.register('cause')}
+      />
       <TextAreaField
         label="Correction"
         rows={3}
+        className="field-sizing-content"
         error={errors.correction?.message}
         {...form.register('correction')}
       />
@@ -168,13 +185,21 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
               {...form.register(`parts.${index}.description`)}
             />
             <TextField
-              label={`Quantity of part ${index + 1}`}
+              label={
+                <>
+                  Quantity<span className="sr-only"> of part {index + 1}</span>
+                </>
+              }
               inputMode="decimal"
               error={errors.parts?.[index]?.quantity?.message}
               {...form.register(`parts.${index}.quantity`)}
             />
             <TextField
-              label={`Part number of part ${index + 1}`}
+              label={
+                <>
+                  Part number<span className="sr-only"> of part {index + 1}</span>
+                </>
+              }
               error={errors.parts?.[index]?.partNumber?.message}
               {...form.register(`parts.${index}.partNumber`)}
             />
@@ -207,7 +232,11 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
               {...form.register(`labour.${index}.operation`)}
             />
             <TextField
-              label={`Hours for operation ${index + 1}`}
+              label={
+                <>
+                  Hours<span className="sr-only"> for operation {index + 1}</span>
+                </>
+              }
               inputMode="decimal"
               error={errors.labour?.[index]?.hours?.message}
               {...form.register(`labour.${index}.hours`)}
@@ -232,6 +261,7 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
             <TextAreaField
               label={`Follow-up ${index + 1}`}
               rows={2}
+              className="field-sizing-content"
               error={errors.followUps?.[index]?.text?.message}
               {...form.register(`followUps.${index}.text`)}
             />

@@ -8,7 +8,13 @@ function isUnitCode(unit: string): unit is UnitCode {
   return (unitCodes as readonly string[]).includes(unit);
 }
 
-export function FindingsView({ findings, diagnosedAt }: { findings: Findings; diagnosedAt: string | null }) {
+export function FindingsView({
+  findings,
+  diagnosedAt,
+}: {
+  findings: Findings;
+  diagnosedAt: string | null;
+}) {
   return (
     <section
       aria-labelledby="findings-heading"
@@ -19,8 +25,12 @@ export function FindingsView({ findings, diagnosedAt }: { findings: Findings; di
           Findings
         </h2>
         <p className="text-sm text-ink-muted">
-          {diagnosedAt ? `Diagnosed ${formatDateTime(diagnosedAt)}. ` : 'Draft, not yet marked diagnosed. '}
-          {findings.updatedBy ? `Last saved by ${findings.updatedBy.name}, ${formatDateTime(findings.updatedAt)}.` : ''}
+          {diagnosedAt
+            ? `Diagnosed ${formatDateTime(diagnosedAt)}. `
+            : 'Draft, not yet marked diagnosed. '}
+          {findings.updatedBy
+            ? `Last saved by ${findings.updatedBy.name}, ${formatDateTime(findings.updatedAt)}.`
+            : ''}
         </p>
       </div>
       <dl className="grid gap-4 lg:grid-cols-3">

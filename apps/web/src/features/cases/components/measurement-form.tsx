@@ -4,8 +4,9 @@
 // server converts them, so a reading in °F is stored as entered and in °C.
 import type { UnitPreferences } from '@heatpath/contracts';
 import {
-  formatRange,
+  formatNumber,
   formatWithUnit,
+  fromCanonical,
   previewReadings,
   type MeasurementInput,
   type MeasurementNode,
@@ -17,7 +18,7 @@ import { useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import type { WalkModel } from '../case-tree';
-import { computedDisplay, preferredUnit, readNumber, unitOptions } from '../units';
+import { computedDisplay, preferredUnit, readNumber, unitOptions, unitsAsEntered } from '../units';
 
 interface MeasurementFormProps {
   node: MeasurementNode & { id: string };
@@ -30,10 +31,15 @@ interface MeasurementFormProps {
   onAnswer: (event: WalkEvent, label: string) => void;
 }
 
-function rangeHint(input: MeasurementInput, unit: UnitCode): string {
-  const range = formatRange(input.range, input.quantity, unit);
-  const allowed = `Allowed: ${range}.`;
-  return input.hint ? `${input.hint} ${allowed}` : allowed;
+/** "Allowed 32 to 302 °F": the input's range in the unit chosen for the box. */
+function allowedRange(input: MeasurementInput, unit: UnitCode): string {
+  const min = fromCanonical(input.range.min, unit, input.quantity);
+  const max = fromCanonical(input.range.max, unit, input.quantity);
+  return `Allowed ${withMinus(formatNumber(min))} to ${withMinus(formatWithUnit(max, unit))}`;
+}
+
+function withMinus(text: string): string {
+  return text.replace(/^-/, '−');
 }
 
 export function MeasurementForm({
@@ -47,7 +53,9 @@ export function MeasurementForm({
 }: MeasurementFormProps) {
   const [typed, setTyped] = useState<Record<string, string>>({});
   const [units, setUnits] = useState<Record<string, UnitCode>>(() =>
-    Object.fromEntries(node.inputs.map((input) => [input.name, preferredUnit(input.quantity, preferences)])),
+    Object.fromEntries(
+      node.inputs.map((input) => [input.name, preferredUnit(input.quantity, preferences)]),
+    ),
   );
   const [tried, setTried] = useState(false);
   // Server refusals belong to the readings that were sent; editing a box clears its own.
@@ -75,6 +83,7 @@ export function MeasurementForm({
         .map((entry) => entry.value.name)
     : [];
   const liveValues = (preview?.computed ?? []).filter((view) => relevant.includes(view.name));
+  const shownUnits = unitsAsEntered(preferences, Object.values(units));
   const next = preview?.toNodeId ? model?.tree.nodes.get(preview.toNodeId) : undefined;
 
   const problemFor = (input: MeasurementInput): string | undefined => {
@@ -82,7 +91,10 @@ export function MeasurementForm({
     const value = readNumber(text);
     if (value !== null && Number.isNaN(value)) return 'Enter a number, such as 92.5.';
     if (value === null) return tried ? `Enter “${input.label}”.` : undefined;
-    return preview?.fields[input.name] ?? (edited.has(input.name) ? undefined : refusedFields[input.name]);
+    return (
+      preview?.fields[input.name] ??
+      (edited.has(input.name) ? undefined : refusedFields[input.name])
+    );
   };
 
   const change = (name: string, update: () => void) => {
@@ -108,8 +120,19 @@ export function MeasurementForm({
     );
   };
 
+  const nextLine = next ? (
+    <p aria-live="polite">
+      <span className="font-semibold">Next: </span>
+      {next.kind === 'outcome' ? `finding “${next.title}”` : next.title}
+    </p>
+  ) : null;
+
   const buttonLabel =
-    node.inputs.length === 0 ? 'Continue' : node.inputs.length === 1 ? 'Save reading' : 'Save readings';
+    node.inputs.length === 0
+      ? 'Continue'
+      : node.inputs.length === 1
+        ? 'Save reading'
+        : 'Save readings';
 
   return (
     <form
@@ -130,7 +153,8 @@ export function MeasurementForm({
           <TextField
             key={input.name}
             label={input.label}
-            hint={rangeHint(input, unit)}
+            labelAside={allowedRange(input, unit)}
+            hint={input.hint}
             error={problemFor(input)}
             value={text}
             disabled={disabled}
@@ -154,7 +178,9 @@ export function MeasurementForm({
                       change(input.name, () =>
                         setTyped((before) => ({
                           ...before,
-                          [input.name]: /^[-−]/.test(text.trim()) ? text.trim().slice(1) : `-${text.trim()}`,
+                          [input.name]: /^[-−]/.test(text.trim())
+                            ? text.trim().slice(1)
+                            : `-${text.trim()}`,
                         })),
                       )
                     }
@@ -171,7 +197,10 @@ export function MeasurementForm({
                     disabled={disabled}
                     onChange={(event) => {
                       const chosen = options.find((option) => option.value === event.target.value);
-                      if (chosen) change(input.name, () => setUnits((before) => ({ ...before, [input.name]: chosen.value })));
+                      if (chosen)
+                        change(input.name, () =>
+                          setUnits((before) => ({ ...before, [input.name]: chosen.value })),
+                        );
                     }}
                     className="min-h-touch shrink-0 rounded-control border-2 border-line-strong bg-sunken px-3 text-base font-semibold"
                   >
@@ -193,35 +222,32 @@ export function MeasurementForm({
       })}
 
       {liveValues.length > 0 ? (
-        <section aria-labelledby={`${node.id}-live`} className="rounded-control bg-sunken p-4">
-          <h3 id={`${node.id}-live`} className="font-bold">
-            Worked out as you type
-          </h3>
-          <dl className="mt-2 flex flex-col gap-2" aria-live="polite">
+        <section
+          aria-label="Worked out as you type"
+          className="flex flex-col gap-2 rounded-control bg-sunken px-4 py-3"
+        >
+          <dl className="flex flex-col gap-1" aria-live="polite">
             {liveValues.map((view) => (
-              <div key={view.name} className="flex flex-col">
-                <dt className="text-sm text-ink-muted">{view.label}</dt>
+              <div
+                key={view.name}
+                className="flex flex-wrap items-baseline justify-between gap-x-3"
+              >
+                <dt>{view.label}</dt>
                 <dd className="text-xl font-bold">
-                  {computedDisplay(view, preferences) ?? (
-                    <span className="text-base font-normal text-ink-muted">Waiting for the readings</span>
+                  {computedDisplay(view, shownUnits) ?? (
+                    <span className="text-base font-normal text-ink-muted">
+                      waiting for readings
+                    </span>
                   )}
                 </dd>
               </div>
             ))}
           </dl>
-          {next ? (
-            <p className="mt-3">
-              <span className="font-semibold">Next: </span>
-              {next.kind === 'outcome' ? `finding “${next.title}”` : next.title}
-            </p>
-          ) : null}
+          {nextLine}
         </section>
-      ) : next ? (
-        <p>
-          <span className="font-semibold">Next: </span>
-          {next.kind === 'outcome' ? `finding “${next.title}”` : next.title}
-        </p>
-      ) : null}
+      ) : (
+        nextLine
+      )}
 
       <div>
         <Button type="submit" size="large" disabled={disabled}>

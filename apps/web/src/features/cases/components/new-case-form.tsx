@@ -8,7 +8,7 @@ import {
   type Vehicle,
 } from '@heatpath/contracts';
 import { useState } from 'react';
-import { useForm, type Path } from 'react-hook-form';
+import { useForm, useWatch, type Path } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FieldError, SelectField, TextAreaField, TextField } from '../../../components/ui/field';
@@ -69,8 +69,8 @@ export function NewCaseForm({ assignees, onCreated }: NewCaseFormProps) {
     },
   });
   const { errors } = form.formState;
-  const mileageUnit = form.watch('mileageUnit');
-  const treeId = form.watch('treeId');
+  const mileageUnit = useWatch({ control: form.control, name: 'mileageUnit' });
+  const treeId = useWatch({ control: form.control, name: 'treeId' });
 
   const chooseVehicle = (chosen: Vehicle | null) => {
     setVehicle(chosen);
@@ -179,7 +179,7 @@ export function NewCaseForm({ assignees, onCreated }: NewCaseFormProps) {
               error={errors.complaint?.message}
               {...form.register('complaint')}
             />
-            <div className="grid grid-cols-[minmax(0,16rem)_auto] items-end gap-3">
+            <div className="grid grid-cols-[minmax(0,16rem)_minmax(0,10rem)] items-end gap-3">
               <TextField
                 label="Mileage at intake"
                 inputMode="numeric"

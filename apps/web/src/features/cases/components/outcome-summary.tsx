@@ -17,12 +17,14 @@ export function OutcomeSummary({ outcome, stepNumber, children }: OutcomeSummary
       aria-labelledby="current-step-title"
       className="rounded-panel border-2 border-l-8 border-ok-line bg-surface p-4 sm:p-6"
     >
-      <p className="text-sm font-semibold text-ink-muted">
-        Step {stepNumber} · <span aria-hidden="true">✓</span> Finding reached
-      </p>
-      <h2 id="current-step-title" className="mb-4 text-2xl font-bold">
-        {outcome.title}
-      </h2>
+      <div className="mb-3 flex flex-wrap items-baseline gap-x-4 gap-y-1">
+        <h2 id="current-step-title" className="text-2xl font-bold">
+          {outcome.title}
+        </h2>
+        <p className="font-semibold text-ok-ink">
+          <span aria-hidden="true">✓ </span>Finding reached at step {stepNumber}
+        </p>
+      </div>
       <div className="grid gap-6 lg:grid-cols-2">
         <div className="flex flex-col gap-4">
           <StepCautions cautions={outcome.cautions} />

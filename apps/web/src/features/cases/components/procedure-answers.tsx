@@ -21,19 +21,12 @@ export function ProcedureAnswers({
   onAnswer,
 }: ProcedureAnswersProps) {
   const [note, setNote] = useState('');
+  // Folded until wanted, so the two answers stay in view beside a long instruction.
+  const [writing, setWriting] = useState(false);
   const send = (result: ProcedureResult, label: string) =>
     onAnswer({ type: 'answer.procedure', nodeId: node.id, position, result }, label, note);
   return (
     <div className="flex flex-col gap-4">
-      <TextAreaField
-        label="Note on this step (optional)"
-        hint="What you found or why it could not be done. Saved with your answer."
-        rows={2}
-        value={note}
-        maxLength={4000}
-        disabled={disabled}
-        onChange={(event) => setNote(event.target.value)}
-      />
       <div className="grid gap-3 sm:grid-cols-2">
         {node.done ? (
           <Button
@@ -59,6 +52,24 @@ export function ProcedureAnswers({
           </Button>
         ) : null}
       </div>
+      {writing ? (
+        <TextAreaField
+          label="Note on this step (optional)"
+          hint="What you found, or why it could not be done. Saved with your answer."
+          rows={2}
+          value={note}
+          maxLength={4000}
+          disabled={disabled}
+          autoFocus
+          onChange={(event) => setNote(event.target.value)}
+        />
+      ) : (
+        <div>
+          <Button variant="secondary" disabled={disabled} onClick={() => setWriting(true)}>
+            Add a note
+          </Button>
+        </div>
+      )}
     </div>
   );
 }

@@ -1,5 +1,6 @@
-// A step's cautions, each as the app's one safety-note style and always before the instruction,
-// so nobody reads "open the cap" before "only on a cold system".
+// A step's cautions in the app's one safety-note style, always before the instruction, so nobody
+// reads "open the cap" before "only on a cold system". All of a step's cautions sit in one note,
+// each led by its hazard, so a step with three of them still leaves its instruction in view.
 import type { Caution } from '@heatpath/fault-tree';
 import { SafetyNote } from '../../../components/ui/alert';
 import { hazardLabels } from '../case-format';
@@ -7,15 +8,17 @@ import { hazardLabels } from '../case-format';
 export function StepCautions({ cautions }: { cautions: readonly Caution[] }) {
   if (cautions.length === 0) return null;
   return (
-    <div className="flex flex-col gap-3" data-testid="step-cautions">
-      {cautions.map((caution) => (
-        <SafetyNote key={`${caution.hazard}:${caution.text}`}>
-          <p>
-            <span className="font-bold">{hazardLabels[caution.hazard]}. </span>
-            {caution.text}
-          </p>
-        </SafetyNote>
-      ))}
+    <div data-testid="step-cautions">
+      <SafetyNote>
+        <ul className="flex flex-col gap-2">
+          {cautions.map((caution) => (
+            <li key={`${caution.hazard}:${caution.text}`}>
+              <span className="font-bold">{hazardLabels[caution.hazard]}. </span>
+              {caution.text}
+            </li>
+          ))}
+        </ul>
+      </SafetyNote>
     </div>
   );
 }

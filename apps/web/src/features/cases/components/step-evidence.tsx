@@ -15,7 +15,13 @@ interface StepEvidenceProps {
   canAttach: boolean;
 }
 
-export function StepEvidence({ caseId, nodeId, requests, attachments, canAttach }: StepEvidenceProps) {
+export function StepEvidence({
+  caseId,
+  nodeId,
+  requests,
+  attachments,
+  canAttach,
+}: StepEvidenceProps) {
   const baseId = useId();
   if (requests.length === 0 && attachments.length === 0) return null;
   return (
@@ -29,12 +35,15 @@ export function StepEvidence({ caseId, nodeId, requests, attachments, canAttach 
           <div key={`${request.kind}:${request.label}`} className="flex flex-col gap-2">
             <p className="flex flex-wrap items-center gap-2">
               <span id={labelId}>{request.label}</span>
-              <Badge tone={request.required ? 'caution' : 'neutral'}>
-                {request.required ? 'Required' : 'If you can'}
-              </Badge>
+              <Badge>{request.required ? 'Required' : 'If you can'}</Badge>
             </p>
             {canAttach ? (
-              <AttachButton caseId={caseId} nodeId={nodeId} kind={request.kind} describedBy={labelId} />
+              <AttachButton
+                caseId={caseId}
+                nodeId={nodeId}
+                kind={request.kind}
+                describedBy={labelId}
+              />
             ) : null}
           </div>
         );

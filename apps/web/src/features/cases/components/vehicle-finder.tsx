@@ -38,7 +38,8 @@ export function VehicleFinder({ selected, onSelect }: VehicleFinderProps) {
   }
 
   const results = settled.length >= minVehicleQuery ? (search.data?.vehicles ?? []) : [];
-  const searched = settled.length >= minVehicleQuery && search.isSuccess && !search.isPlaceholderData;
+  const searched =
+    settled.length >= minVehicleQuery && search.isSuccess && !search.isPlaceholderData;
 
   return (
     <div className="flex flex-col gap-4">
@@ -90,7 +91,10 @@ export function VehicleFinder({ selected, onSelect }: VehicleFinderProps) {
         </p>
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
-        <Button variant={searched && results.length === 0 ? 'primary' : 'secondary'} onClick={() => setAdding(true)}>
+        <Button
+          variant={searched && results.length === 0 ? 'primary' : 'secondary'}
+          onClick={() => setAdding(true)}
+        >
           Add vehicle
         </Button>
         <span className="text-sm text-ink-muted">when it is not on file yet</span>

@@ -48,4 +48,3 @@ export function WalkPath({ walk }: { walk: WalkSummary }) {
     </Disclosure>
   );
 }
-
