@@ -6,7 +6,10 @@ import { installDependencies } from './lib/install.mjs';
 import { fail } from './lib/log.mjs';
 import { mustRun, root } from './lib/run.mjs';
 
-const benches = { 'step-save': ['apps/api', 'bench/step-save.bench.ts'] };
+const benches = {
+  'step-save': ['apps/api', 'bench/step-save.bench.ts'],
+  'case-list': ['apps/api', 'bench/case-list.bench.ts'],
+};
 
 async function main() {
   const bench = benches[process.argv[2]];

@@ -71,8 +71,16 @@ export function unitsAsEntered(
   chosen: readonly UnitCode[],
 ): UnitPreferences {
   return {
-    temperature: chosen.includes('degF') ? 'F' : chosen.includes('degC') ? 'C' : preferences.temperature,
-    pressure: chosen.includes('psi') ? 'psi' : chosen.includes('bar') ? 'bar' : preferences.pressure,
+    temperature: chosen.includes('degF')
+      ? 'F'
+      : chosen.includes('degC')
+        ? 'C'
+        : preferences.temperature,
+    pressure: chosen.includes('psi')
+      ? 'psi'
+      : chosen.includes('bar')
+        ? 'bar'
+        : preferences.pressure,
     volume: chosen.includes('qt') ? 'qt' : chosen.includes('L') ? 'L' : preferences.volume,
   };
 }

@@ -166,7 +166,7 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
       <TextAreaField
         label="Correction"
         rows={3}
-        className="field-sizing-content"
+        className="field-sizing-content min-h-24"
         error={errors.correction?.message}
         {...form.register('correction')}
       />
@@ -261,7 +261,7 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
             <TextAreaField
               label={`Follow-up ${index + 1}`}
               rows={2}
-              className="field-sizing-content"
+              className="field-sizing-content min-h-24"
               error={errors.followUps?.[index]?.text?.message}
               {...form.register(`followUps.${index}.text`)}
             />
