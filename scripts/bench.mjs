@@ -17,7 +17,7 @@ async function main() {
   await installDependencies();
   const db = await startCluster({ dataDir: join(root, '.data', 'bench-pg'), port: Number(process.env.PGPORT_BENCH ?? 54349), database: 'heatpath_bench', fresh: true });
   try {
-    await mustRun(process.execPath, ['--import', 'tsx', bench[1]], 'The benchmark failed.', { cwd: join(root, bench[0]), env: { ...process.env, DATABASE_URL: db.url, SESSION_SECRET: 'heatpath-bench-session-secret-0123456789' } });
+    await mustRun(process.execPath, [...(process.env.BENCH_NODE_FLAGS ? process.env.BENCH_NODE_FLAGS.split(' ') : []), '--import', 'tsx', bench[1]], 'The benchmark failed.', { cwd: join(root, bench[0]), env: { ...process.env, DATABASE_URL: db.url, SESSION_SECRET: 'heatpath-bench-session-secret-0123456789' } });
   } finally {
     db.stop();
     db.remove();

@@ -37,10 +37,10 @@ describe('the signed-in shell', () => {
   );
 
   it('marks areas that are not built as coming later, without controls', async () => {
-    mockApi({ 'GET /api/me': () => json(makeMe({ role: 'technician' })) });
-    renderApp('/cases');
-    expect(await screen.findByRole('heading', { level: 1, name: 'My cases' })).toBeTruthy();
-    expect(screen.getByText('Coming with cases')).toBeTruthy();
+    mockApi({ 'GET /api/me': () => json(makeMe({ role: 'apprentice' })) });
+    renderApp('/casebook');
+    expect(await screen.findByRole('heading', { level: 1, name: 'Casebook' })).toBeTruthy();
+    expect(screen.getByText('Coming with the training casebook')).toBeTruthy();
     expect(within(screen.getByRole('main')).queryAllByRole('button')).toHaveLength(0);
   });
 

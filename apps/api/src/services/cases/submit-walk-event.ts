@@ -11,7 +11,7 @@ import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { draftFindings } from './draft-findings';
 import { findCase } from './find-case';
-import { walkEventsOf } from './walk-state';
+import { walkEventsAndKey } from './walk-state';
 
 export interface SubmitResult {
   walk: WalkSummary;
@@ -33,7 +33,7 @@ export async function submitWalkEvent(options: {
   return sequelize.transaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true, bare: true });
     const tree = await compiledPublishedTree(kase.treeVersionId, (id) => TreeVersion.findByPk(id, { transaction }));
-    const events = await walkEventsOf(kase.id, transaction);
+    const { events, keySeen } = await walkEventsAndKey(kase.id, idempotencyKey, transaction);
 
     const replay = replayWalk(tree, events);
     const summary = (snapshot = replay.snapshot, applied = replay.applied): WalkSummary => ({
@@ -42,8 +42,7 @@ export async function submitWalkEvent(options: {
       applied,
     });
 
-    const earlier = await CaseEvent.findOne({ where: { caseId: kase.id, idempotencyKey }, transaction });
-    if (earlier) return { walk: summary(), repeated: true };
+    if (keySeen) return { walk: summary(), repeated: true };
 
     if (kase.status === 'diagnosed' || kase.status === 'closed') {
       throw new AppError('conflict', `This case is already ${kase.status === 'closed' ? 'closed' : 'diagnosed'}; reopen it before changing the walk.`);

@@ -25,6 +25,28 @@ export async function walkEventsOf(caseId: string, transaction?: Transaction): P
   return rows.map((row) => row.payload.event);
 }
 
+/**
+ * One read of a case's history for an answer: the walk events in order, and whether an event
+ * with this idempotency key is already stored (of any kind, since keys are unique per case).
+ */
+export async function walkEventsAndKey(
+  caseId: string,
+  idempotencyKey: string,
+  transaction: Transaction,
+): Promise<{ events: unknown[]; keySeen: boolean }> {
+  const rows = (await CaseEvent.findAll({
+    where: { caseId },
+    order: [['seq', 'ASC']],
+    attributes: ['kind', 'payload', 'idempotencyKey'],
+    raw: true,
+    transaction,
+  })) as unknown as { kind: string; payload: { event?: unknown }; idempotencyKey: string | null }[];
+  return {
+    events: rows.filter((r) => r.kind === 'answer' || r.kind === 'back').map((r) => r.payload.event),
+    keySeen: rows.some((r) => r.idempotencyKey === idempotencyKey),
+  };
+}
+
 export async function walkOf(kase: DiagnosticCase, transaction?: Transaction): Promise<WalkSummary> {
   if (!kase.treeVersion) throw new Error('walkOf needs the tree version loaded.');
   const tree = compiledTreeOf(kase.treeVersion);

@@ -8,7 +8,6 @@ import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { isApiError } from '../../../lib/api-client';
 import { useMe } from '../../../lib/auth';
 import { useCase } from '../api/get-case';
-import { formatDateTime } from '../case-format';
 import { useWalkModel } from '../case-tree';
 import { useWalkAnswers, type WalkAnswers } from '../hooks/use-walk-answers';
 import { AttachmentsGallery } from './attachments-gallery';
@@ -46,6 +45,7 @@ function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswer
   const model = useWalkModel(detail);
   const preferences = me.preferences.units;
   const { walk, findings } = detail;
+  const readOnlyFindings = findings && !detail.can.editFindings ? findings : null;
 
   const stepTitle = (nodeId: string): string | null =>
     model?.tree.nodes.get(nodeId)?.title ??
@@ -64,13 +64,13 @@ function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswer
           </p>
         </Alert>
       ) : null}
-      {detail.status === 'diagnosed' && detail.diagnosedAt ? (
-        <Alert tone="ok" title="Diagnosed">
-          <p>
-            Marked diagnosed {formatDateTime(detail.diagnosedAt)}. The findings below go to the
-            repair order.
-          </p>
-        </Alert>
+      {readOnlyFindings ? (
+        // Read only (the advisor, or a diagnosed case): the findings are what the page is for.
+        <FindingsView
+          findings={readOnlyFindings}
+          outcomeTitle={walk.outcome?.title ?? null}
+          diagnosedAt={detail.diagnosedAt}
+        />
       ) : null}
 
       <CurrentStep detail={detail} model={model} answers={answers} preferences={preferences} />
@@ -82,9 +82,7 @@ function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswer
           findings={findings}
           canMarkDiagnosed={detail.can.markDiagnosed}
         />
-      ) : findings ? (
-        <FindingsView findings={findings} diagnosedAt={detail.diagnosedAt} />
-      ) : walk.status === 'reached-outcome' ? (
+      ) : !findings && walk.status === 'reached-outcome' ? (
         <LoadingState label="Drafting the findings…" />
       ) : null}
 

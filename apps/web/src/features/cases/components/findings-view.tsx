@@ -10,9 +10,12 @@ function isUnitCode(unit: string): unit is UnitCode {
 
 export function FindingsView({
   findings,
+  outcomeTitle,
   diagnosedAt,
 }: {
   findings: Findings;
+  /** The finding the walk reached, as the tree names it. */
+  outcomeTitle: string | null;
   diagnosedAt: string | null;
 }) {
   return (
@@ -20,32 +23,39 @@ export function FindingsView({
       aria-labelledby="findings-heading"
       className="flex flex-col gap-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
     >
-      <div className="flex flex-wrap items-baseline justify-between gap-3">
-        <h2 id="findings-heading" className="text-xl font-bold">
-          Findings
-        </h2>
+      <div className="flex flex-col gap-1">
+        <div className="flex flex-wrap items-baseline gap-x-4 gap-y-1">
+          <h2 id="findings-heading" className="text-xl font-bold">
+            Findings
+            {outcomeTitle ? <span className="sr-only">: {outcomeTitle}</span> : null}
+          </h2>
+          {outcomeTitle ? (
+            <p aria-hidden="true" className="text-lg font-semibold">
+              {outcomeTitle}
+            </p>
+          ) : null}
+        </div>
         <p className="text-sm text-ink-muted">
-          {diagnosedAt
-            ? `Diagnosed ${formatDateTime(diagnosedAt)}. `
-            : 'Draft, not yet marked diagnosed. '}
+          {diagnosedAt ? (
+            <span className="font-semibold text-ok-ink">
+              <span aria-hidden="true">✓ </span>Diagnosed {formatDateTime(diagnosedAt)}.{' '}
+            </span>
+          ) : (
+            'Draft, not yet marked diagnosed. '
+          )}
           {findings.updatedBy
             ? `Last saved by ${findings.updatedBy.name}, ${formatDateTime(findings.updatedAt)}.`
             : ''}
         </p>
       </div>
-      <dl className="grid gap-4 lg:grid-cols-3">
-        <div>
-          <dt className="font-bold">Concern</dt>
-          <dd className="whitespace-pre-line">{findings.concern}</dd>
-        </div>
-        <div>
-          <dt className="font-bold">Cause</dt>
-          <dd className="whitespace-pre-line">{findings.cause}</dd>
-        </div>
-        <div>
-          <dt className="font-bold">Correction</dt>
-          <dd className="whitespace-pre-line">{findings.correction}</dd>
-        </div>
+      {/* Laid out as the repair order reads: each heading beside its text on a wide screen. */}
+      <dl className="grid gap-x-6 gap-y-3 md:grid-cols-[9rem_minmax(0,1fr)]">
+        <dt className="font-bold">Concern</dt>
+        <dd className="whitespace-pre-line">{findings.concern}</dd>
+        <dt className="font-bold">Cause</dt>
+        <dd className="whitespace-pre-line">{findings.cause}</dd>
+        <dt className="font-bold">Correction</dt>
+        <dd className="whitespace-pre-line">{findings.correction}</dd>
       </dl>
       <div className="grid gap-4 lg:grid-cols-3">
         <div>

@@ -16,7 +16,7 @@ export interface HomeArea {
 
 const intros: Record<Role, string> = {
   lead: 'Run the workshop’s diagnosis: the people, the order of checks, the cases and the training.',
-  technician: 'Work at the car: the figures you need now, and your cases once they arrive.',
+  technician: 'Work at the car: your cases, their guided checks, and the figures you need.',
   apprentice: 'Learn from the workshop’s finished cases and practise the figures.',
   advisor: 'Pass findings on to the repair order and the customer.',
 };

@@ -1,0 +1,27 @@
+// GET /api/trees/:treeId/draft: the open draft with its revision (for optimistic saves) and the
+// problems the server found in it.
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { treesKeys } from './get-tree-library';
+import { treeVersionDetailSchema } from './response-schemas';
+
+export function getDraft(treeId: string, signal?: AbortSignal) {
+  return apiRequest(`/api/trees/${encodeURIComponent(treeId)}/draft`, treeVersionDetailSchema, {
+    signal,
+  });
+}
+
+export function draftQueryOptions(treeId: string) {
+  return queryOptions({
+    queryKey: treesKeys.draft(treeId),
+    queryFn: ({ signal }) => getDraft(treeId, signal),
+    // The editor owns the working copy once it is open; a background refetch must never replace
+    // what the lead is typing. Conflicts are found by the save's revision check instead.
+    staleTime: Infinity,
+    refetchOnWindowFocus: false,
+  });
+}
+
+export function useDraft(treeId: string) {
+  return useQuery(draftQueryOptions(treeId));
+}

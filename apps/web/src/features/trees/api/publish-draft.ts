@@ -1,0 +1,33 @@
+// POST /api/trees/:treeId/draft/publish: publishes a clean draft with a change note. The API
+// answers 409 for a stale revision, for problems, and for regression-set cases whose outcome
+// would change; the last is published only when the lead confirms.
+import type { PublishDraftRequest } from '@heatpath/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '../../../lib/api-client';
+import { treesKeys } from './get-tree-library';
+import { treeVersionDetailSchema } from './response-schemas';
+
+export interface PublishDraftInput {
+  treeId: string;
+  request: PublishDraftRequest;
+}
+
+export function publishDraft({ treeId, request }: PublishDraftInput) {
+  return apiRequest(
+    `/api/trees/${encodeURIComponent(treeId)}/draft/publish`,
+    treeVersionDetailSchema,
+    { method: 'POST', body: request },
+  );
+}
+
+export function usePublishDraft() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: publishDraft,
+    onSuccess: (_published, { treeId }) => {
+      // The draft is now a published version: nothing is left under the draft key.
+      queryClient.removeQueries({ queryKey: treesKeys.draft(treeId) });
+      return queryClient.invalidateQueries({ queryKey: treesKeys.all });
+    },
+  });
+}
