@@ -15,9 +15,31 @@ async function main() {
   const bench = benches[process.argv[2]];
   if (!bench) throw new Error(`Use one of: ${Object.keys(benches).join(', ')}`);
   await installDependencies();
-  const db = await startCluster({ dataDir: join(root, '.data', 'bench-pg'), port: Number(process.env.PGPORT_BENCH ?? 54349), database: 'heatpath_bench', fresh: true });
+  const db = await startCluster({
+    dataDir: join(root, '.data', 'bench-pg'),
+    port: Number(process.env.PGPORT_BENCH ?? 54349),
+    database: 'heatpath_bench',
+    fresh: true,
+  });
   try {
-    await mustRun(process.execPath, [...(process.env.BENCH_NODE_FLAGS ? process.env.BENCH_NODE_FLAGS.split(' ') : []), '--import', 'tsx', bench[1]], 'The benchmark failed.', { cwd: join(root, bench[0]), env: { ...process.env, DATABASE_URL: db.url, SESSION_SECRET: 'heatpath-bench-session-secret-0123456789' } });
+    await mustRun(
+      process.execPath,
+      [
+        ...(process.env.BENCH_NODE_FLAGS ? process.env.BENCH_NODE_FLAGS.split(' ') : []),
+        '--import',
+        'tsx',
+        bench[1],
+      ],
+      'The benchmark failed.',
+      {
+        cwd: join(root, bench[0]),
+        env: {
+          ...process.env,
+          DATABASE_URL: db.url,
+          SESSION_SECRET: 'heatpath-bench-session-secret-0123456789',
+        },
+      },
+    );
   } finally {
     db.stop();
     db.remove();

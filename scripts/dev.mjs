@@ -9,23 +9,48 @@ import { mustRun, pnpm, root } from './lib/run.mjs';
 
 async function main() {
   await installDependencies();
-  const db = await startCluster({ dataDir: join(root, '.data', 'pg'), port: Number(process.env.PGPORT ?? 54329), database: process.env.PGDATABASE ?? 'heatpath' });
+  const db = await startCluster({
+    dataDir: join(root, '.data', 'pg'),
+    port: Number(process.env.PGPORT ?? 54329),
+    database: process.env.PGDATABASE ?? 'heatpath',
+  });
   const env = {
     ...process.env,
     NODE_ENV: 'development',
     DATABASE_URL: db.url,
-    SESSION_SECRET: process.env.SESSION_SECRET ?? ensureSecret(join(root, '.data', 'session-secret')),
+    SESSION_SECRET:
+      process.env.SESSION_SECRET ?? ensureSecret(join(root, '.data', 'session-secret')),
     HEATPATH_DEMO: process.env.HEATPATH_DEMO ?? 'true',
     UPLOAD_DIR: process.env.UPLOAD_DIR ?? join(root, '.data', 'uploads'),
   };
   const api = join(root, 'apps', 'api');
-  await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'migrate'], 'Migrating failed.', { cwd: api, env });
-  await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'], 'Seeding failed.', { cwd: api, env });
+  await mustRun(
+    process.execPath,
+    ['--import', 'tsx', 'src/db/cli.ts', 'migrate'],
+    'Migrating failed.',
+    { cwd: api, env },
+  );
+  await mustRun(
+    process.execPath,
+    ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'],
+    'Seeding failed.',
+    { cwd: api, env },
+  );
   const children = [
-    spawn(pnpm[0], [...pnpm[1], 'exec', 'tsx', 'watch', 'src/server.ts'], { cwd: api, env, stdio: 'inherit' }),
-    spawn(pnpm[0], [...pnpm[1], 'exec', 'vite', '--host', '127.0.0.1'], { cwd: join(root, 'apps', 'web'), env, stdio: 'inherit' }),
+    spawn(pnpm[0], [...pnpm[1], 'exec', 'tsx', 'watch', 'src/server.ts'], {
+      cwd: api,
+      env,
+      stdio: 'inherit',
+    }),
+    spawn(pnpm[0], [...pnpm[1], 'exec', 'vite', '--host', '127.0.0.1'], {
+      cwd: join(root, 'apps', 'web'),
+      env,
+      stdio: 'inherit',
+    }),
   ];
-  ok('API on http://127.0.0.1:' + (process.env.PORT ?? 3000) + ', web app on http://127.0.0.1:5173');
+  ok(
+    'API on http://127.0.0.1:' + (process.env.PORT ?? 3000) + ', web app on http://127.0.0.1:5173',
+  );
   const stop = () => {
     for (const c of children) c.kill('SIGTERM');
     db.stop();

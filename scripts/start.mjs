@@ -14,10 +14,14 @@ const pgPort = Number(process.env.PGPORT ?? 54329);
 const dataRoot = join(root, '.data');
 
 async function main() {
-  if (!Number.isInteger(port) || port < 1 || port > 65535) throw new BootstrapError(`PORT must be a port number, got "${process.env.PORT}".`);
-  if (!Number.isInteger(pgPort) || pgPort < 1 || pgPort > 65535) throw new BootstrapError(`PGPORT must be a port number, got "${process.env.PGPORT}".`);
+  if (!Number.isInteger(port) || port < 1 || port > 65535)
+    throw new BootstrapError(`PORT must be a port number, got "${process.env.PORT}".`);
+  if (!Number.isInteger(pgPort) || pgPort < 1 || pgPort > 65535)
+    throw new BootstrapError(`PGPORT must be a port number, got "${process.env.PGPORT}".`);
   if (!(await portIsFree(port))) {
-    throw new BootstrapError(`Port ${port} is already in use: stop the program using it or run with another port, e.g. PORT=${port + 1} npm start.`);
+    throw new BootstrapError(
+      `Port ${port} is already in use: stop the program using it or run with another port, e.g. PORT=${port + 1} npm start.`,
+    );
   }
   await installDependencies();
   const db = await startCluster({
@@ -39,15 +43,32 @@ async function main() {
   };
   const api = join(root, 'apps', 'api');
   step('Migrating the database…');
-  await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'migrate'], 'Migrating the database failed; see the message above.', { cwd: api, env });
+  await mustRun(
+    process.execPath,
+    ['--import', 'tsx', 'src/db/cli.ts', 'migrate'],
+    'Migrating the database failed; see the message above.',
+    { cwd: api, env },
+  );
   if (env.HEATPATH_DEMO === 'true') {
-    await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'], 'Seeding the demo workshop failed; see the message above.', { cwd: api, env });
+    await mustRun(
+      process.execPath,
+      ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'],
+      'Seeding the demo workshop failed; see the message above.',
+      { cwd: api, env },
+    );
   }
   step('Building the web app…');
-  await runPnpm(['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'], 'Building the web app failed; see the message above.');
+  await runPnpm(
+    ['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'],
+    'Building the web app failed; see the message above.',
+  );
 
   step('Starting Heatpath…');
-  const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], { cwd: api, env, stdio: ['ignore', 'pipe', 'inherit'] });
+  const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
+    cwd: api,
+    env,
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
   let announced = false;
   let pending = '';
   server.stdout.on('data', (chunk) => {

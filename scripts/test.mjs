@@ -25,7 +25,11 @@ async function check(stage, cmd, args, options) {
   step(`${stage}…`);
   const t = Date.now();
   const code = await run(cmd, args, options);
-  record(stage, { passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0 }, (Date.now() - t) / 1000);
+  record(
+    stage,
+    { passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0 },
+    (Date.now() - t) / 1000,
+  );
 }
 
 async function vitest(stage, projects, env = {}) {
@@ -33,7 +37,16 @@ async function vitest(stage, projects, env = {}) {
   const t = Date.now();
   const report = join(resultsDir, `${stage}.json`);
   rmSync(report, { force: true });
-  const args = [...pnpm[1], 'exec', 'vitest', 'run', ...projects.flatMap((p) => ['--project', p]), '--reporter=default', '--reporter=json', `--outputFile.json=${report}`];
+  const args = [
+    ...pnpm[1],
+    'exec',
+    'vitest',
+    'run',
+    ...projects.flatMap((p) => ['--project', p]),
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile.json=${report}`,
+  ];
   const code = await run(pnpm[0], args, { env: { ...process.env, ...env } });
   let counts = { passed: 0, failed: code === 0 ? 0 : 1, skipped: 0 };
   if (existsSync(report)) {
@@ -77,7 +90,15 @@ async function main() {
 
   if (wanted('lint')) {
     await check('lint', pnpm[0], [...pnpm[1], 'exec', 'eslint', '.', '--max-warnings', '0']);
-    await check('format', pnpm[0], [...pnpm[1], 'exec', 'prettier', '--check', '--log-level', 'warn', '.']);
+    await check('format', pnpm[0], [
+      ...pnpm[1],
+      'exec',
+      'prettier',
+      '--check',
+      '--log-level',
+      'warn',
+      '.',
+    ]);
   }
   if (wanted('typecheck')) await check('typecheck', pnpm[0], [...pnpm[1], 'exec', 'tsc', '-b']);
   if (wanted('unit')) await vitest('unit', ['unit', 'web']);
@@ -97,10 +118,27 @@ async function main() {
       UPLOAD_DIR: join(root, '.data', 'test-uploads'),
     };
     const api = join(root, 'apps', 'api');
-    await runPnpm(['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'], 'Building the web app failed; see above.');
-    await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'migrate'], 'Migrating the e2e database failed.', { cwd: api, env });
-    await mustRun(process.execPath, ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'], 'Seeding the e2e database failed.', { cwd: api, env });
-    const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], { cwd: api, env, stdio: ['ignore', 'ignore', 'inherit'] });
+    await runPnpm(
+      ['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'],
+      'Building the web app failed; see above.',
+    );
+    await mustRun(
+      process.execPath,
+      ['--import', 'tsx', 'src/db/cli.ts', 'migrate'],
+      'Migrating the e2e database failed.',
+      { cwd: api, env },
+    );
+    await mustRun(
+      process.execPath,
+      ['--import', 'tsx', 'src/db/cli.ts', 'seed-demo'],
+      'Seeding the e2e database failed.',
+      { cwd: api, env },
+    );
+    const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
+      cwd: api,
+      env,
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
     const baseUrl = `http://127.0.0.1:${port}`;
     const deadline = Date.now() + 30_000;
     while (Date.now() < deadline) {
@@ -112,16 +150,32 @@ async function main() {
       await new Promise((r) => setTimeout(r, 200));
     }
     try {
-      await vitest('e2e', ['e2e'], { E2E_BASE_URL: baseUrl, CHROMIUM_PATH: chromium, E2E_ARTIFACTS: join(resultsDir, 'screenshots') });
+      await vitest('e2e', ['e2e'], {
+        E2E_BASE_URL: baseUrl,
+        CHROMIUM_PATH: chromium,
+        E2E_ARTIFACTS: join(resultsDir, 'screenshots'),
+      });
     } finally {
       server.kill('SIGTERM');
     }
   }
 
-  const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), { passed: 0, failed: 0, skipped: 0 });
+  const total = results.reduce(
+    (a, r) => ({
+      passed: a.passed + r.passed,
+      failed: a.failed + r.failed,
+      skipped: a.skipped + r.skipped,
+    }),
+    { passed: 0, failed: 0, skipped: 0 },
+  );
   console.log(`\nHeatpath test run took ${((Date.now() - began) / 1000).toFixed(0)} s.`);
-  for (const r of results) console.log(`  ${r.stage.padEnd(10)} ${r.passed} passed, ${r.failed} failed${r.skipped ? `, ${r.skipped} skipped` : ''}`);
-  console.log(`Summary: ${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`);
+  for (const r of results)
+    console.log(
+      `  ${r.stage.padEnd(10)} ${r.passed} passed, ${r.failed} failed${r.skipped ? `, ${r.skipped} skipped` : ''}`,
+    );
+  console.log(
+    `Summary: ${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`,
+  );
   process.exit(total.failed ? 1 : 0);
 }
 

@@ -26,10 +26,14 @@ export async function aptInstall(packages, why) {
     await run('apt-get', ['update', '-qq'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
     aptUpdated = true;
   }
-  const code = await run('apt-get', ['install', '-y', '-qq', '--no-install-recommends', ...packages], {
-    env,
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  const code = await run(
+    'apt-get',
+    ['install', '-y', '-qq', '--no-install-recommends', ...packages],
+    {
+      env,
+      stdio: ['ignore', 'ignore', 'inherit'],
+    },
+  );
   if (code !== 0) throw new BootstrapError(sentence);
   ok(`Installed ${packages.join(', ')}.`);
 }

@@ -13,7 +13,9 @@ export function fail(error) {
   if (error instanceof BootstrapError) {
     console.error(`${paint('31', '✗')} ${error.message}`);
   } else if (error && error.code === 'ENOSPC') {
-    console.error(`${paint('31', '✗')} The disk is full: free some space and run the command again.`);
+    console.error(
+      `${paint('31', '✗')} The disk is full: free some space and run the command again.`,
+    );
   } else {
     console.error(`${paint('31', '✗')} ${error?.stack ?? error}`);
   }

@@ -13,13 +13,18 @@ const config = loadConfig({ ...process.env, NODE_ENV: 'production', LOG_LEVEL: '
 const sequelize = createSequelize(config.databaseUrl, { poolMax: config.dbPoolMax });
 initModels(sequelize);
 const app = createApp({
-  config: { ...config, signInLimits: { perAccount: 100_000, perAddress: 100_000, windowMinutes: 1 } },
+  config: {
+    ...config,
+    signInLimits: { perAccount: 100_000, perAddress: 100_000, windowMinutes: 1 },
+  },
   sequelize,
   logger: createLogger('silent'),
 });
 
 const pool = new pg.Pool({ connectionString: config.databaseUrl, max: config.dbPoolMax });
-await pool.query('CREATE TABLE IF NOT EXISTS bench_floor (id bigserial PRIMARY KEY, payload jsonb NOT NULL, created_at timestamptz NOT NULL DEFAULT now())');
+await pool.query(
+  'CREATE TABLE IF NOT EXISTS bench_floor (id bigserial PRIMARY KEY, payload jsonb NOT NULL, created_at timestamptz NOT NULL DEFAULT now())',
+);
 const floor = express();
 floor.use(express.json());
 floor.post('/floor', async (req, res) => {

@@ -26,9 +26,23 @@ async function seedWorkshop(name: string) {
   const workshop = await Workshop.create({ name });
   const techs = [];
   for (let i = 0; i < 8; i += 1) {
-    techs.push(await User.create({ workshopId: workshop.id, email: `t${i}-${workshop.id.slice(0, 8)}@bench.test`, name: `Tech ${i}`, role: 'technician', passwordHash }));
+    techs.push(
+      await User.create({
+        workshopId: workshop.id,
+        email: `t${i}-${workshop.id.slice(0, 8)}@bench.test`,
+        name: `Tech ${i}`,
+        role: 'technician',
+        passwordHash,
+      }),
+    );
   }
-  const lead = await User.create({ workshopId: workshop.id, email: `lead-${workshop.id.slice(0, 8)}@bench.test`, name: 'Lead', role: 'lead', passwordHash });
+  const lead = await User.create({
+    workshopId: workshop.id,
+    email: `lead-${workshop.id.slice(0, 8)}@bench.test`,
+    name: 'Lead',
+    role: 'lead',
+    passwordHash,
+  });
   await installShippedTrees({ workshopId: workshop.id, userId: lead.id });
   const tree = await Tree.findOne({ where: { workshopId: workshop.id } });
   const version = await TreeVersion.findOne({ where: { treeId: tree!.id } });
@@ -54,7 +68,9 @@ async function seedWorkshop(name: string) {
        FROM generate_series(1, $5) g JOIN v ON v.n = 1 + g % ($5 / 5)`,
     { bind: [workshop.id, version!.id, techs.map((t) => t.id), lead.id, perWorkshop] },
   );
-  await sequelize.query(`UPDATE workshops SET case_counter = $2 WHERE id = $1`, { bind: [workshop.id, perWorkshop] });
+  await sequelize.query(`UPDATE workshops SET case_counter = $2 WHERE id = $1`, {
+    bind: [workshop.id, perWorkshop],
+  });
   return { workshop, lead, techs };
 }
 
@@ -64,9 +80,16 @@ await seedWorkshop('Other Bench Workshop');
 await sequelize.query('ANALYZE');
 console.log(`seeded ${2 * perWorkshop} cases in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
 
-const app = createApp({ config: { ...config, signInLimits: { perAccount: 1e6, perAddress: 1e6, windowMinutes: 1 } }, sequelize, logger: createLogger('silent') });
+const app = createApp({
+  config: { ...config, signInLimits: { perAccount: 1e6, perAddress: 1e6, windowMinutes: 1 } },
+  sequelize,
+  logger: createLogger('silent'),
+});
 const agent = supertest.agent(app).set('X-Heatpath-Client', 'web');
-await agent.post('/api/auth/sign-in').send({ email: mine.lead.email, password: 'bench-password-1' }).expect(200);
+await agent
+  .post('/api/auth/sign-in')
+  .send({ email: mine.lead.email, password: 'bench-password-1' })
+  .expect(200);
 
 async function time(label: string, query: Record<string, string | number>, runs = 20) {
   const times: number[] = [];
@@ -78,14 +101,17 @@ async function time(label: string, query: Record<string, string | number>, runs 
     body = res.body;
   }
   times.sort((a, b) => a - b);
-  console.log(`${label.padEnd(34)} median ${times[Math.floor(runs / 2)]!.toFixed(1).padStart(6)} ms   max ${times[runs - 1]!.toFixed(1).padStart(6)} ms   (${body.cases.length} rows)`);
+  console.log(
+    `${label.padEnd(34)} median ${times[Math.floor(runs / 2)]!.toFixed(1).padStart(6)} ms   max ${times[runs - 1]!.toFixed(1).padStart(6)} ms   (${body.cases.length} rows)`,
+  );
   return body;
 }
 
 const first = await time('first page (25)', { limit: 25 });
 // Walk 1,000 pages deep by cursor, then time that page.
 let cursor = first.nextCursor;
-for (let i = 0; i < 1000 && cursor; i += 1) cursor = (await agent.get('/api/cases').query({ limit: 25, cursor }).expect(200)).body.nextCursor;
+for (let i = 0; i < 1000 && cursor; i += 1)
+  cursor = (await agent.get('/api/cases').query({ limit: 25, cursor }).expect(200)).body.nextCursor;
 await time('page 1,001 by keyset cursor', { limit: 25, cursor: cursor ?? '' });
 await time('status = diagnosed', { limit: 25, status: 'diagnosed' });
 await time('one technician', { limit: 25, technicianId: mine.techs[3]!.id });
@@ -96,6 +122,9 @@ const [plan] = await sequelize.query(
   `EXPLAIN SELECT id FROM cases WHERE workshop_id = $1 AND (created_at, id) < (now() - interval '20000 minutes', gen_random_uuid()) ORDER BY created_at DESC, id DESC LIMIT 26`,
   { bind: [mine.workshop.id] },
 );
-console.log('deep-page plan:', (plan as { 'QUERY PLAN': string }[]).map((r) => r['QUERY PLAN']).join(' | '));
+console.log(
+  'deep-page plan:',
+  (plan as { 'QUERY PLAN': string }[]).map((r) => r['QUERY PLAN']).join(' | '),
+);
 await sequelize.close();
 process.exit(0);

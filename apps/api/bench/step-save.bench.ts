@@ -37,12 +37,29 @@ const passwordHash = await hashPassword('bench-password-1');
 const techs: { email: string; caseIds: string[] }[] = [];
 let number = 0;
 for (let t = 0; t < technicians; t += 1) {
-  const user = await User.create({ workshopId: workshop.id, email: `bench-${t}@bench.test`, name: `Bench ${t}`, role: 'technician', passwordHash });
+  const user = await User.create({
+    workshopId: workshop.id,
+    email: `bench-${t}@bench.test`,
+    name: `Bench ${t}`,
+    role: 'technician',
+    passwordHash,
+  });
   const caseIds: string[] = [];
   for (let c = 0; c < casesEach; c += 1) {
     const vehicle = await createVehicle(workshop.id);
     number += 1;
-    const kase = await DiagnosticCase.create({ workshopId: workshop.id, number, vehicleId: vehicle.id, customerId: vehicle.customerId, complaint: 'Bench complaint', symptom: 'bench', treeVersionId: version!.id, assignedTo: user.id, createdBy: user.id, currentNodeId: 'interview-pattern' });
+    const kase = await DiagnosticCase.create({
+      workshopId: workshop.id,
+      number,
+      vehicleId: vehicle.id,
+      customerId: vehicle.customerId,
+      complaint: 'Bench complaint',
+      symptom: 'bench',
+      treeVersionId: version!.id,
+      assignedTo: user.id,
+      createdBy: user.id,
+      currentNodeId: 'interview-pattern',
+    });
     caseIds.push(kase.id);
   }
   techs.push({ email: user.email, caseIds });
@@ -54,12 +71,18 @@ const server = spawn(process.execPath, ['--import', 'tsx', 'bench/bench-server.t
   env: { ...process.env, BENCH_APP_PORT: String(appPort), BENCH_FLOOR_PORT: String(floorPort) },
   stdio: ['ignore', 'pipe', 'inherit'],
 });
-await new Promise<void>((resolve) => server.stdout.on('data', (d: Buffer) => d.toString().includes('ready') && resolve()));
+await new Promise<void>((resolve) =>
+  server.stdout.on('data', (d: Buffer) => d.toString().includes('ready') && resolve()),
+);
 
 const base = `http://127.0.0.1:${appPort}`;
 const cookies: string[] = [];
 for (const t of techs) {
-  const res = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-heatpath-client': 'web' }, body: JSON.stringify({ email: t.email, password: 'bench-password-1' }) });
+  const res = await fetch(`${base}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', 'x-heatpath-client': 'web' },
+    body: JSON.stringify({ email: t.email, password: 'bench-password-1' }),
+  });
   cookies.push((res.headers.get('set-cookie') ?? '').split(';')[0] ?? '');
 }
 
@@ -74,8 +97,14 @@ interface Measured {
 function run(opts: autocannon.Options): Promise<Measured> {
   return new Promise((resolve, reject) => {
     const times: number[] = [];
-    const instance = autocannon(opts, (error, result) => (error ? reject(error) : resolve({ result, times })));
-    instance.on('response', (_client: unknown, _status: number, _bytes: number, responseTime: number) => times.push(responseTime));
+    const instance = autocannon(opts, (error, result) =>
+      error ? reject(error) : resolve({ result, times }),
+    );
+    instance.on(
+      'response',
+      (_client: unknown, _status: number, _bytes: number, responseTime: number) =>
+        times.push(responseTime),
+    );
   });
 }
 
@@ -85,7 +114,14 @@ function percentile(times: number[], p: number): number {
 }
 
 // Warm both paths (JIT, pools, the compiled-tree cache) before measuring.
-await run({ url: `http://127.0.0.1:${floorPort}/floor`, method: 'POST', connections: 10, amount: 500, headers: { 'content-type': 'application/json' }, body: JSON.stringify({ warm: true }) });
+await run({
+  url: `http://127.0.0.1:${floorPort}/floor`,
+  method: 'POST',
+  connections: 10,
+  amount: 500,
+  headers: { 'content-type': 'application/json' },
+  body: JSON.stringify({ warm: true }),
+});
 
 const floor = await run({
   url: `http://127.0.0.1:${floorPort}/floor`,
@@ -93,7 +129,12 @@ const floor = await run({
   connections: technicians,
   amount: requests,
   headers: { 'content-type': 'application/json' },
-  body: JSON.stringify({ type: 'answer.choice', nodeId: 'interview-pattern', position: 0, choiceId: 'speed-or-load' }),
+  body: JSON.stringify({
+    type: 'answer.choice',
+    nodeId: 'interview-pattern',
+    position: 0,
+    choiceId: 'speed-or-load',
+  }),
 });
 
 // One autocannon client per technician, one connection each: a technician answers one step,
@@ -114,13 +155,21 @@ const perTech = await Promise.all(
               ...req,
               method: 'POST',
               path: `/api/cases/${t.caseIds[state.caseIndex % t.caseIds.length]}/walk`,
-              headers: { 'content-type': 'application/json', 'x-heatpath-client': 'web', cookie: cookies[i]! },
-              body: JSON.stringify({ idempotencyKey: randomUUID(), event: { ...step.answer, nodeId: step.nodeId, position: state.step } }),
+              headers: {
+                'content-type': 'application/json',
+                'x-heatpath-client': 'web',
+                cookie: cookies[i]!,
+              },
+              body: JSON.stringify({
+                idempotencyKey: randomUUID(),
+                event: { ...step.answer, nodeId: step.nodeId, position: state.step },
+              }),
             };
           },
           onResponse: (status, body) => {
             if (status !== 201) {
-              if (unexpected < 3) console.log(`step save answered ${status}: ${body.slice(0, 300)}`);
+              if (unexpected < 3)
+                console.log(`step save answered ${status}: ${body.slice(0, 300)}`);
               unexpected += 1;
               return;
             }
@@ -137,7 +186,11 @@ const perTech = await Promise.all(
 );
 const walkSeconds = (Date.now() - walkStarted) / 1000;
 const walk: Measured = {
-  result: { ...perTech[0]!.result, non2xx: perTech.reduce((n, m) => n + m.result.non2xx, 0), requests: { ...perTech[0]!.result.requests, average: requests / walkSeconds } },
+  result: {
+    ...perTech[0]!.result,
+    non2xx: perTech.reduce((n, m) => n + m.result.non2xx, 0),
+    requests: { ...perTech[0]!.result.requests, average: requests / walkSeconds },
+  },
   times: perTech.flatMap((m) => m.times),
 };
 server.kill('SIGTERM');
@@ -145,9 +198,13 @@ server.kill('SIGTERM');
 const row = (name: string, m: Measured) =>
   `${name.padEnd(20)} p50 ${percentile(m.times, 50).toFixed(1).padStart(6)} ms   p95 ${percentile(m.times, 95).toFixed(1).padStart(6)} ms   p99 ${percentile(m.times, 99).toFixed(1).padStart(6)} ms   ${Math.round(m.result.requests.average)} req/s   ${m.result.non2xx} non-2xx`;
 const ratio = (p: number) => (percentile(walk.times, p) / percentile(floor.times, p)).toFixed(2);
-console.log(`\nStep-save benchmark: ${technicians} concurrent technicians, ${requests} requests per run (${casesEach} cases × ${stuckShroudPath.length} steps each)`);
+console.log(
+  `\nStep-save benchmark: ${technicians} concurrent technicians, ${requests} requests per run (${casesEach} cases × ${stuckShroudPath.length} steps each)`,
+);
 console.log(row('floor (1 INSERT)', floor));
 console.log(row('step save (walk)', walk));
-console.log(`ratio step save / floor: p50 ${ratio(50)}×, p95 ${ratio(95)}× (target ≤ 1.5×), p99 ${ratio(99)}×`);
+console.log(
+  `ratio step save / floor: p50 ${ratio(50)}×, p95 ${ratio(95)}× (target ≤ 1.5×), p99 ${ratio(99)}×`,
+);
 if (unexpected) console.log(`${unexpected} step saves did not return 201 — see the server log.`);
 process.exit(0);

@@ -19,7 +19,11 @@ const envSchema = z
     PGDATABASE: z.string().default('heatpath'),
     DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
     SESSION_SECRET: z.string().optional(),
-    SESSION_TTL_HOURS: z.coerce.number().positive().max(24 * 30).default(12),
+    SESSION_TTL_HOURS: z.coerce
+      .number()
+      .positive()
+      .max(24 * 30)
+      .default(12),
     COOKIE_SECURE: bool.default(false),
     TRUST_PROXY: bool.default(false),
     HEATPATH_DEMO: bool.default(false),
@@ -29,12 +33,22 @@ const envSchema = z
     SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
     SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(40),
     SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
-    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    LOG_LEVEL: z
+      .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
+      .default('info'),
   })
   .transform((env, ctx) => {
-    const secret = env.SESSION_SECRET ?? (env.NODE_ENV === 'production' ? undefined : 'heatpath-local-development-secret-not-for-production');
+    const secret =
+      env.SESSION_SECRET ??
+      (env.NODE_ENV === 'production'
+        ? undefined
+        : 'heatpath-local-development-secret-not-for-production');
     if (!secret || secret.length < 32) {
-      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'SESSION_SECRET must be set to at least 32 random characters.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['SESSION_SECRET'],
+        message: 'SESSION_SECRET must be set to at least 32 random characters.',
+      });
       return z.NEVER;
     }
     const databaseUrl =

@@ -21,7 +21,11 @@ export type WalkEventRequest = z.infer<typeof walkEventRequestSchema>;
 export const addNoteRequestSchema = z.object({
   idempotencyKey: idempotencyKeySchema,
   nodeId: z.string().max(80).nullish(),
-  text: z.string().trim().min(1, 'Write the note first.').max(4000, 'Keep a note under 4000 characters.'),
+  text: z
+    .string()
+    .trim()
+    .min(1, 'Write the note first.')
+    .max(4000, 'Keep a note under 4000 characters.'),
 });
 export type AddNoteRequest = z.infer<typeof addNoteRequestSchema>;
 

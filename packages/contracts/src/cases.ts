@@ -21,7 +21,12 @@ export const createCaseRequestSchema = z
       .trim()
       .min(3, 'Write down the complaint in the customer’s words.')
       .max(2000, 'Keep the complaint under 2000 characters.'),
-    mileageAtIntake: z.coerce.number().int().min(0, 'Mileage cannot be negative.').max(3_000_000).nullish(),
+    mileageAtIntake: z.coerce
+      .number()
+      .int()
+      .min(0, 'Mileage cannot be negative.')
+      .max(3_000_000)
+      .nullish(),
     mileageUnit: z.enum(distanceUnits).default('km'),
     treeId: z.uuid({ error: 'Choose the symptom to start from.' }),
     assignedTo: z.uuid().nullish(),
@@ -51,7 +56,14 @@ export const caseSummarySchema = z.object({
   status: z.enum(caseStatuses),
   complaint: z.string(),
   symptom: z.string(),
-  vehicle: z.object({ id: z.uuid(), plate: z.string().nullable(), vin: z.string().nullable(), make: z.string(), model: z.string(), year: z.number().nullable() }),
+  vehicle: z.object({
+    id: z.uuid(),
+    plate: z.string().nullable(),
+    vin: z.string().nullable(),
+    make: z.string(),
+    model: z.string(),
+    year: z.number().nullable(),
+  }),
   customerName: z.string().nullable(),
   assignee: personRefSchema.nullable(),
   currentStepTitle: z.string().nullable(),

@@ -3,7 +3,10 @@ import { z } from 'zod';
 
 export const partLineSchema = z.object({
   description: z.string().trim().min(1, 'Describe the part.').max(200),
-  quantity: z.number({ error: 'Enter a quantity.' }).positive('A quantity must be more than zero.').max(1000),
+  quantity: z
+    .number({ error: 'Enter a quantity.' })
+    .positive('A quantity must be more than zero.')
+    .max(1000),
   partNumber: z.string().trim().max(60).nullish(),
 });
 export const labourLineSchema = z.object({

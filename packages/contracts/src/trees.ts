@@ -13,7 +13,11 @@ export const createTreeRequestSchema = z.union([
     title: z.string().trim().min(3, 'Give the tree a title.').max(160),
     symptom: z.string().trim().min(3, 'Say which symptom the tree starts from.').max(500),
   }),
-  z.object({ mode: z.literal('copy'), fromTreeId: z.uuid(), title: z.string().trim().min(3).max(160) }),
+  z.object({
+    mode: z.literal('copy'),
+    fromTreeId: z.uuid(),
+    title: z.string().trim().min(3).max(160),
+  }),
   z.object({ mode: z.literal('import'), definition: z.unknown() }),
 ]);
 export type CreateTreeRequest = z.infer<typeof createTreeRequestSchema>;
@@ -54,7 +58,11 @@ export interface TreeVersionInfo {
   updatedAt: string;
   caseCount: number;
   basedOnVersion: number | null;
-  publishConfirmation: { confirmedBy: string; confirmedAt: string; changedCases: { caseId: string; reference: string; from: string | null; to: string | null }[] } | null;
+  publishConfirmation: {
+    confirmedBy: string;
+    confirmedAt: string;
+    changedCases: { caseId: string; reference: string; from: string | null; to: string | null }[];
+  } | null;
 }
 
 export interface TreeLibraryEntry {

@@ -30,7 +30,11 @@ export const vinSchema = z
   });
 
 export const customerInputSchema = z.object({
-  name: z.string({ error: 'Enter the customer’s name.' }).trim().min(1, 'Enter the customer’s name.').max(120),
+  name: z
+    .string({ error: 'Enter the customer’s name.' })
+    .trim()
+    .min(1, 'Enter the customer’s name.')
+    .max(120),
   phone: optionalText(40, 'A phone number'),
   email: z
     .union([z.literal(''), z.email({ error: 'Enter a valid e-mail address.' })])
@@ -51,7 +55,10 @@ const currentYear = new Date().getFullYear();
 
 export const vehicleInputSchema = z
   .object({
-    vin: z.union([z.literal(''), vinSchema]).transform((v) => (v === '' ? null : v)).nullish(),
+    vin: z
+      .union([z.literal(''), vinSchema])
+      .transform((v) => (v === '' ? null : v))
+      .nullish(),
     plate: optionalText(16, 'A plate'),
     make: z.string({ error: 'Enter the make.' }).trim().min(1, 'Enter the make.').max(60),
     model: z.string({ error: 'Enter the model.' }).trim().min(1, 'Enter the model.').max(60),
@@ -63,7 +70,12 @@ export const vehicleInputSchema = z
       .nullish(),
     engine: optionalText(80, 'The engine'),
     fuel: z.enum(fuelKinds, { error: 'Choose a fuel.' }).nullish(),
-    mileage: z.coerce.number().int('Enter the mileage as a whole number.').min(0, 'Mileage cannot be negative.').max(3_000_000).nullish(),
+    mileage: z.coerce
+      .number()
+      .int('Enter the mileage as a whole number.')
+      .min(0, 'Mileage cannot be negative.')
+      .max(3_000_000)
+      .nullish(),
     mileageUnit: z.enum(distanceUnits).default('km'),
     customerId: z.uuid().nullish(),
   })

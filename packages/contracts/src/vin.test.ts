@@ -5,7 +5,11 @@ import { checkVin, vinCheckDigit } from './vin';
 describe('checkVin', () => {
   it('accepts the widely printed worked example 1M8GDM9AXKP042788 (49 CFR 565.15)', () => {
     expect(vinCheckDigit('1M8GDM9AXKP042788')).toBe('X');
-    expect(checkVin('1M8GDM9AXKP042788')).toMatchObject({ valid: true, checkDigit: 'matches', warning: null });
+    expect(checkVin('1M8GDM9AXKP042788')).toMatchObject({
+      valid: true,
+      checkDigit: 'matches',
+      warning: null,
+    });
   });
 
   it('warns, without refusing, when position 9 does not match (49 CFR 565.15)', () => {

@@ -3,9 +3,29 @@
 // markets often carry no check digit, so a mismatch is a warning, never a refusal.
 
 const transliteration: Record<string, number> = {
-  A: 1, B: 2, C: 3, D: 4, E: 5, F: 6, G: 7, H: 8,
-  J: 1, K: 2, L: 3, M: 4, N: 5, P: 7, R: 9,
-  S: 2, T: 3, U: 4, V: 5, W: 6, X: 7, Y: 8, Z: 9,
+  A: 1,
+  B: 2,
+  C: 3,
+  D: 4,
+  E: 5,
+  F: 6,
+  G: 7,
+  H: 8,
+  J: 1,
+  K: 2,
+  L: 3,
+  M: 4,
+  N: 5,
+  P: 7,
+  R: 9,
+  S: 2,
+  T: 3,
+  U: 4,
+  V: 5,
+  W: 6,
+  X: 7,
+  Y: 8,
+  Z: 9,
 };
 const weights = [8, 7, 6, 5, 4, 3, 2, 10, 0, 9, 8, 7, 6, 5, 4, 3, 2];
 
@@ -19,7 +39,8 @@ export function normaliseVin(raw: string): string {
 export function vinFormProblem(vin: string): string | null {
   if (vin.length !== 17) return `A VIN has 17 characters; this one has ${vin.length}.`;
   const bad = vin.match(/[IOQ]/);
-  if (bad) return `A VIN never contains the letters I, O or Q (found "${bad[0]}"; it is probably 1 or 0).`;
+  if (bad)
+    return `A VIN never contains the letters I, O or Q (found "${bad[0]}"; it is probably 1 or 0).`;
   if (!vinPattern.test(vin)) return 'A VIN holds only capital letters and digits.';
   return null;
 }

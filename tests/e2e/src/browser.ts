@@ -13,7 +13,10 @@ export const demoPassword = 'heatpath-demo';
 export interface BrowserSession {
   browser: Browser;
   close: () => Promise<void>;
-  newPage: (viewport?: { width: number; height: number }) => Promise<{ page: Page; context: BrowserContext }>;
+  newPage: (viewport?: {
+    width: number;
+    height: number;
+  }) => Promise<{ page: Page; context: BrowserContext }>;
 }
 
 export async function launch(): Promise<BrowserSession> {

@@ -19,7 +19,10 @@ describe('calculators', () => {
     await page.goto('/calculators');
     await page.getByRole('link', { name: /Coolant protection/ }).click();
     await page.getByText('Ethylene glycol (EG)').click();
-    await page.getByRole('group', { name: 'The refractometer shows' }).getByText('Concentration').click();
+    await page
+      .getByRole('group', { name: 'The refractometer shows' })
+      .getByText('Concentration')
+      .click();
     await page.getByLabel('Concentration', { exact: true }).fill('50');
     const result = page.getByRole('region', { name: 'Result' });
     // ASHRAE table interpolated to 50 vol % EG: about −37.0 °C (trade-facts.md, Source A);
@@ -32,7 +35,10 @@ describe('calculators', () => {
     await page.waitForLoadState('networkidle');
     await page.reload();
     await page.getByText('Ethylene glycol (EG)').click();
-    await page.getByRole('group', { name: 'The refractometer shows' }).getByText('Concentration').click();
+    await page
+      .getByRole('group', { name: 'The refractometer shows' })
+      .getByText('Concentration')
+      .click();
     await page.getByLabel('Concentration', { exact: true }).fill('50');
     await page.getByRole('region', { name: 'Result' }).getByText(/°F/).first().waitFor();
     await screenshot(page, 'calculator-protection-phone-fahrenheit');
@@ -50,7 +56,10 @@ describe('calculators', () => {
     await page.getByLabel('Cap rating').fill('1.4');
     const result = page.getByRole('region', { name: 'Result' });
     // IAPWS-IF97 saturation temperature at 2.41325 bar absolute: 126.25 °C (trade-facts.md).
-    await result.getByText(/126\.[23]\s?°C/).first().waitFor();
+    await result
+      .getByText(/126\.[23]\s?°C/)
+      .first()
+      .waitFor();
     expect(await result.getByText(/IAPWS/).count()).toBeGreaterThan(0);
     expect(await page.getByText(/Never open the cap/i).count()).toBeGreaterThan(0);
     await screenshot(page, 'calculator-boiling-tablet');

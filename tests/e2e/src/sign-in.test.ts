@@ -13,10 +13,30 @@ afterAll(async () => {
 });
 
 const roles = [
-  { email: 'lead@harbourlane.test', role: 'lead', sees: ['Staff', 'Calculators'], notSees: ['Casebook'] },
-  { email: 'tech@harbourlane.test', role: 'technician', sees: ['Calculators'], notSees: ['Staff', 'Casebook'] },
-  { email: 'apprentice@harbourlane.test', role: 'apprentice', sees: ['Casebook', 'Calculators'], notSees: ['Staff'] },
-  { email: 'advisor@harbourlane.test', role: 'advisor', sees: ['Calculators'], notSees: ['Staff', 'Casebook'] },
+  {
+    email: 'lead@harbourlane.test',
+    role: 'lead',
+    sees: ['Staff', 'Calculators'],
+    notSees: ['Casebook'],
+  },
+  {
+    email: 'tech@harbourlane.test',
+    role: 'technician',
+    sees: ['Calculators'],
+    notSees: ['Staff', 'Casebook'],
+  },
+  {
+    email: 'apprentice@harbourlane.test',
+    role: 'apprentice',
+    sees: ['Casebook', 'Calculators'],
+    notSees: ['Staff'],
+  },
+  {
+    email: 'advisor@harbourlane.test',
+    role: 'advisor',
+    sees: ['Calculators'],
+    notSees: ['Staff', 'Casebook'],
+  },
 ] as const;
 
 describe('signing in', () => {
@@ -26,9 +46,15 @@ describe('signing in', () => {
       await signIn(page, r.email);
       const nav = page.getByRole('navigation', { name: 'Main' });
       await nav.waitFor();
-      for (const label of r.sees) await expect(nav.getByRole('link', { name: label, exact: false }).first().isVisible()).resolves.toBe(true);
-      for (const label of r.notSees) expect(await nav.getByRole('link', { name: label }).count()).toBe(0);
-      expect(await page.getByText('Harbour Lane Garage').filter({ visible: true }).count()).toBeGreaterThan(0);
+      for (const label of r.sees)
+        await expect(
+          nav.getByRole('link', { name: label, exact: false }).first().isVisible(),
+        ).resolves.toBe(true);
+      for (const label of r.notSees)
+        expect(await nav.getByRole('link', { name: label }).count()).toBe(0);
+      expect(
+        await page.getByText('Harbour Lane Garage').filter({ visible: true }).count(),
+      ).toBeGreaterThan(0);
       await screenshot(page, `home-${r.role}`);
       await context.close();
     });
@@ -47,7 +73,10 @@ describe('signing in', () => {
   it('the lead adds a technician who can then sign in; the other workshop does not see them', async () => {
     const { page, context } = await session.newPage();
     await signIn(page, 'lead@harbourlane.test');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Staff' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Staff' })
+      .click();
     const email = `e2e-${Date.now()}@harbourlane.test`;
     const form = page.getByRole('form', { name: 'Add a staff member' });
     await form.getByLabel('Name').fill('Ebba Quill');
@@ -66,7 +95,10 @@ describe('signing in', () => {
 
     const other = await session.newPage();
     await signIn(other.page, 'lead@millbrook.test');
-    await other.page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Staff' }).click();
+    await other.page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Staff' })
+      .click();
     await other.page.getByText('lead@millbrook.test').waitFor();
     expect(await other.page.getByText(email).count()).toBe(0);
     expect(await other.page.getByText('lead@harbourlane.test').count()).toBe(0);

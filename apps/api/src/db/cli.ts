@@ -15,12 +15,18 @@ async function main(): Promise<void> {
   switch (command) {
     case 'migrate': {
       const done = await migrateUp(sequelize);
-      console.log(done.length ? `✓ Applied migrations: ${done.join(', ')}` : '✓ Database schema is up to date.');
+      console.log(
+        done.length
+          ? `✓ Applied migrations: ${done.join(', ')}`
+          : '✓ Database schema is up to date.',
+      );
       break;
     }
     case 'seed-demo': {
       const seeded = await seedDemo(sequelize);
-      console.log(seeded ? '✓ Seeded the demo workshops.' : '✓ Demo data already present; left as it is.');
+      console.log(
+        seeded ? '✓ Seeded the demo workshops.' : '✓ Demo data already present; left as it is.',
+      );
       break;
     }
     case 'reset': {

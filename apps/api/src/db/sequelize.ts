@@ -3,7 +3,10 @@
 import { Sequelize } from 'sequelize';
 import pg from 'pg';
 
-export function createSequelize(databaseUrl: string, options: { poolMax?: number } = {}): Sequelize {
+export function createSequelize(
+  databaseUrl: string,
+  options: { poolMax?: number } = {},
+): Sequelize {
   return new Sequelize(databaseUrl, {
     dialect: 'postgres',
     dialectModule: pg,

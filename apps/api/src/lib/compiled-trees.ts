@@ -11,7 +11,10 @@ const maxEntries = 300;
 
 export class TreeDoesNotCompileError extends AppError {
   constructor(readonly problems: readonly TreeProblem[]) {
-    super('conflict', `This tree version has ${problems.length} problem(s) and cannot be walked: ${problems[0]?.message ?? ''}`);
+    super(
+      'conflict',
+      `This tree version has ${problems.length} problem(s) and cannot be walked: ${problems[0]?.message ?? ''}`,
+    );
   }
 }
 
@@ -21,7 +24,9 @@ export class TreeDoesNotCompileError extends AppError {
  */
 export async function compiledPublishedTree(
   versionId: string,
-  load: (id: string) => Promise<Pick<TreeVersion, 'id' | 'status' | 'definition' | 'revision'> | null>,
+  load: (
+    id: string,
+  ) => Promise<Pick<TreeVersion, 'id' | 'status' | 'definition' | 'revision'> | null>,
 ): Promise<CompiledTree> {
   const hit = cache.get(versionId);
   if (hit) return hit;
@@ -30,7 +35,9 @@ export async function compiledPublishedTree(
   return compiledTreeOf(version);
 }
 
-export function compiledTreeOf(version: Pick<TreeVersion, 'id' | 'status' | 'definition' | 'revision'>): CompiledTree {
+export function compiledTreeOf(
+  version: Pick<TreeVersion, 'id' | 'status' | 'definition' | 'revision'>,
+): CompiledTree {
   // Drafts change; key them by revision so an edit is never served stale.
   const key = version.status === 'draft' ? `${version.id}#${version.revision}` : version.id;
   const hit = cache.get(key);

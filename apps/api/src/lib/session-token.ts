@@ -29,7 +29,11 @@ export function createSessionSigner(secret: string, ttlHours: number) {
     async verify(token: string | undefined): Promise<SessionClaims | null> {
       if (!token) return null;
       try {
-        const { payload } = await jwtVerify(token, key, { issuer, audience, algorithms: ['HS256'] });
+        const { payload } = await jwtVerify(token, key, {
+          issuer,
+          audience,
+          algorithms: ['HS256'],
+        });
         if (typeof payload.sub !== 'string' || typeof payload.wid !== 'string') return null;
         return { userId: payload.sub, workshopId: payload.wid };
       } catch (error) {

@@ -18,9 +18,14 @@ export function authenticate(signer: SessionSigner): RequestHandler {
     const claims = await signer.verify(cookies[sessionCookieName]);
     if (!claims) throw new AppError('unauthenticated', 'Please sign in to continue.');
     const user = await findSessionUser(claims);
-    if (!user) throw new AppError('unauthenticated', 'Your session has ended. Please sign in again.');
+    if (!user)
+      throw new AppError('unauthenticated', 'Your session has ended. Please sign in again.');
     res.locals.user = user;
-    res.locals.actor = { userId: user.id, workshopId: claims.workshopId, role: user.role } satisfies Actor;
+    res.locals.actor = {
+      userId: user.id,
+      workshopId: claims.workshopId,
+      role: user.role,
+    } satisfies Actor;
     next();
   };
 }

@@ -11,7 +11,10 @@ export const crossSiteGuard: RequestHandler = (req, _res, next) => {
   if (safeMethods.has(req.method)) return next();
   if (!req.get(clientHeader)) {
     return next(
-      new AppError('forbidden', 'This request did not come from the Heatpath app (missing X-Heatpath-Client header).'),
+      new AppError(
+        'forbidden',
+        'This request did not come from the Heatpath app (missing X-Heatpath-Client header).',
+      ),
     );
   }
   next();

@@ -31,7 +31,10 @@ function toAppError(error: unknown): AppError | null {
       return new AppError('payload_too_large', 'The request body is too large.');
     case 'encoding.unsupported':
     case 'charset.unsupported':
-      return new AppError('unsupported_media_type', 'The request body uses an unsupported encoding.');
+      return new AppError(
+        'unsupported_media_type',
+        'The request body uses an unsupported encoding.',
+      );
     default:
       return null;
   }
@@ -45,12 +48,20 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   const known = toAppError(error);
   if (known) {
     res.status(known.status).json({
-      error: { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) },
+      error: {
+        code: known.code,
+        message: known.message,
+        ...(known.fields ? { fields: known.fields } : {}),
+      },
     });
     return;
   }
   req.log?.error({ err: error }, 'unhandled error');
   res.status(500).json({
-    error: { code: 'internal', message: 'Something went wrong on our side. Your last change may not be saved; please try again.' },
+    error: {
+      code: 'internal',
+      message:
+        'Something went wrong on our side. Your last change may not be saved; please try again.',
+    },
   });
 };

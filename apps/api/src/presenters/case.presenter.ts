@@ -1,5 +1,11 @@
 // Cases as the API returns them: a line in the list, and the whole case for its page.
-import type { CaseAttachment, CaseDetail, CaseNote, CaseSummary, Findings } from '@heatpath/contracts';
+import type {
+  CaseAttachment,
+  CaseDetail,
+  CaseNote,
+  CaseSummary,
+  Findings,
+} from '@heatpath/contracts';
 import type { WalkSummary } from '@heatpath/fault-tree';
 import type { Attachment, CaseEvent, DiagnosticCase, Finding, User } from '../db/models/index';
 import { can } from '../policies/permissions';
@@ -45,7 +51,10 @@ export function presentFindings(finding: Finding, editor: User | null): Findings
   };
 }
 
-export function presentAttachment(a: Attachment, uploader: User | null | undefined): CaseAttachment {
+export function presentAttachment(
+  a: Attachment,
+  uploader: User | null | undefined,
+): CaseAttachment {
   const base = `/api/cases/${a.caseId}/attachments/${a.id}`;
   return {
     id: a.id,
@@ -83,7 +92,8 @@ export function presentCaseDetail(options: {
 }): CaseDetail {
   const { kase, walk, actor } = options;
   const version = kase.treeVersion;
-  if (!kase.vehicle || !version) throw new Error('presentCaseDetail needs vehicle and tree version loaded.');
+  if (!kase.vehicle || !version)
+    throw new Error('presentCaseDetail needs vehicle and tree version loaded.');
   const open = kase.status === 'open' || kase.status === 'in_diagnosis';
   const walkable = can(actor, 'cases.walk') && open;
   return {
@@ -111,7 +121,9 @@ export function presentCaseDetail(options: {
     walk,
     notes: options.notes.map(presentNote),
     attachments: options.attachments.map((a) => presentAttachment(a.attachment, a.uploader)),
-    findings: options.findings ? presentFindings(options.findings.finding, options.findings.editor) : null,
+    findings: options.findings
+      ? presentFindings(options.findings.finding, options.findings.editor)
+      : null,
     can: {
       walk: walkable,
       editFindings: can(actor, 'findings.edit') && open,

@@ -3,7 +3,10 @@ import type { TreeVersionDetail, TreeVersionInfo } from '@heatpath/contracts';
 import { validateTree } from '@heatpath/fault-tree';
 import type { TreeVersion, User } from '../db/models/index';
 
-export function presentVersionInfo(v: TreeVersion, extra: { caseCount: number; publisher: User | null | undefined }): TreeVersionInfo {
+export function presentVersionInfo(
+  v: TreeVersion,
+  extra: { caseCount: number; publisher: User | null | undefined },
+): TreeVersionInfo {
   return {
     id: v.id,
     version: v.version,
@@ -20,6 +23,14 @@ export function presentVersionInfo(v: TreeVersion, extra: { caseCount: number; p
   };
 }
 
-export function presentVersionDetail(v: TreeVersion, extra: { caseCount: number; publisher: User | null | undefined }): TreeVersionDetail {
-  return { ...presentVersionInfo(v, extra), treeId: v.treeId, definition: v.definition, problems: validateTree(v.definition) };
+export function presentVersionDetail(
+  v: TreeVersion,
+  extra: { caseCount: number; publisher: User | null | undefined },
+): TreeVersionDetail {
+  return {
+    ...presentVersionInfo(v, extra),
+    treeId: v.treeId,
+    definition: v.definition,
+    problems: validateTree(v.definition),
+  };
 }

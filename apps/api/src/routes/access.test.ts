@@ -20,26 +20,63 @@ interface RouteCase {
 
 const routes: RouteCase[] = [
   { method: 'get', path: () => '/api/me', allowed: 'all', ok: 200 },
-  { method: 'patch', path: () => '/api/me/preferences', body: () => ({ units: { volume: 'qt' } }), allowed: 'all', ok: 200 },
+  {
+    method: 'patch',
+    path: () => '/api/me/preferences',
+    body: () => ({ units: { volume: 'qt' } }),
+    allowed: 'all',
+    ok: 200,
+  },
   { method: 'get', path: () => '/api/staff', allowed: ['lead'], ok: 200 },
   {
     method: 'post',
     path: () => '/api/staff',
-    body: () => ({ email: `m-${Math.random().toString(36).slice(2)}@factory.test`, name: 'Matrix', role: 'advisor', password: 'matrix-password' }),
+    body: () => ({
+      email: `m-${Math.random().toString(36).slice(2)}@factory.test`,
+      name: 'Matrix',
+      role: 'advisor',
+      password: 'matrix-password',
+    }),
     allowed: ['lead'],
     ok: 201,
   },
-  { method: 'patch', path: (w) => `/api/staff/${w.people.advisor.id}`, body: () => ({ name: 'Renamed' }), allowed: ['lead'], ok: 200 },
-  { method: 'get', path: () => '/api/vehicles?q=ZZ', allowed: ['lead', 'technician', 'advisor'], ok: 200 },
+  {
+    method: 'patch',
+    path: (w) => `/api/staff/${w.people.advisor.id}`,
+    body: () => ({ name: 'Renamed' }),
+    allowed: ['lead'],
+    ok: 200,
+  },
+  {
+    method: 'get',
+    path: () => '/api/vehicles?q=ZZ',
+    allowed: ['lead', 'technician', 'advisor'],
+    ok: 200,
+  },
   {
     method: 'post',
     path: () => '/api/vehicles',
-    body: () => ({ plate: `M${Math.random().toString(36).slice(2, 8)}`, make: 'Brisa', model: 'Orlo' }),
+    body: () => ({
+      plate: `M${Math.random().toString(36).slice(2, 8)}`,
+      make: 'Brisa',
+      model: 'Orlo',
+    }),
     allowed: ['lead', 'technician', 'advisor'],
     ok: 201,
   },
-  { method: 'get', path: () => '/api/customers?q=Zz', allowed: ['lead', 'technician', 'advisor'], ok: 200 },
-  { method: 'post', path: () => '/api/customers', body: () => ({ name: 'Matrix Customer' }), allowed: ['lead', 'technician', 'advisor'], ok: 201 },
+  {
+    method: 'get',
+    path: () => '/api/customers?q=Zz',
+    allowed: ['lead', 'technician', 'advisor'],
+    ok: 200,
+  },
+  {
+    method: 'post',
+    path: () => '/api/customers',
+    body: () => ({ name: 'Matrix Customer' }),
+    allowed: ['lead', 'technician', 'advisor'],
+    ok: 201,
+  },
 ];
 
 const label = (r: RouteCase) =>
@@ -60,7 +97,10 @@ describe('route × role access', () => {
 
     it(`${label(route)} unauthenticated → 401`, async () => {
       const w = await createWorkshop();
-      const res = await supertest(app)[route.method](route.path(w)).set(clientHeaders).send(route.body?.(w));
+      const res = await supertest(app)
+        [route.method](route.path(w))
+        .set(clientHeaders)
+        .send(route.body?.(w));
       expect(res.status).toBe(401);
       expect(res.body.error.code).toBe('unauthenticated');
     });

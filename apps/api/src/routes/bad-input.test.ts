@@ -13,19 +13,31 @@ function expectCleanError(body: unknown) {
 
 describe('bad input', () => {
   it('malformed JSON → 400', async () => {
-    const res = await supertest(app).post('/api/auth/sign-in').set(clientHeaders).set('Content-Type', 'application/json').send('{"email": ');
+    const res = await supertest(app)
+      .post('/api/auth/sign-in')
+      .set(clientHeaders)
+      .set('Content-Type', 'application/json')
+      .send('{"email": ');
     expect(res.status).toBe(400);
-    expect(res.body).toEqual({ error: { code: 'bad_request', message: 'The request body is not valid JSON.' } });
+    expect(res.body).toEqual({
+      error: { code: 'bad_request', message: 'The request body is not valid JSON.' },
+    });
   });
 
   it('oversized body → 413', async () => {
-    const res = await supertest(app).post('/api/auth/sign-in').set(clientHeaders).send({ email: 'a@b.test', password: 'x'.repeat(5000) });
+    const res = await supertest(app)
+      .post('/api/auth/sign-in')
+      .set(clientHeaders)
+      .send({ email: 'a@b.test', password: 'x'.repeat(5000) });
     expect(res.status).toBe(413);
     expect(res.body.error.code).toBe('payload_too_large');
   });
 
   it('wrong types → 400 naming the field', async () => {
-    const res = await supertest(app).post('/api/auth/sign-in').set(clientHeaders).send({ email: 42, password: ['x'] });
+    const res = await supertest(app)
+      .post('/api/auth/sign-in')
+      .set(clientHeaders)
+      .send({ email: 42, password: ['x'] });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['email', 'password']);
     expectCleanError(res.body);
@@ -44,8 +56,13 @@ describe('bad input', () => {
   it('a failure inside the server → 500 without internals', async () => {
     // A database that is not there makes the sign-in limiter's store fail for real.
     const { createSequelize } = await import('../db/sequelize');
-    const broken = createSequelize('postgres://postgres:x@127.0.0.1:1/heatpath_test', { poolMax: 1 });
-    const res = await supertest(testApp({}, broken)).post('/api/auth/sign-in').set(clientHeaders).send({ email: 'a@b.test', password: 'x' });
+    const broken = createSequelize('postgres://postgres:x@127.0.0.1:1/heatpath_test', {
+      poolMax: 1,
+    });
+    const res = await supertest(testApp({}, broken))
+      .post('/api/auth/sign-in')
+      .set(clientHeaders)
+      .send({ email: 'a@b.test', password: 'x' });
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe('internal');
     expectCleanError(res.body);

@@ -16,7 +16,11 @@ export interface TestWorkshop {
   people: Record<Role, User>;
 }
 
-export async function createUser(workshopId: string, role: Role, extra: Partial<{ name: string; active: boolean }> = {}) {
+export async function createUser(
+  workshopId: string,
+  role: Role,
+  extra: Partial<{ name: string; active: boolean }> = {},
+) {
   const tag = randomUUID().slice(0, 8);
   return User.create({
     workshopId,
@@ -29,7 +33,9 @@ export async function createUser(workshopId: string, role: Role, extra: Partial<
 }
 
 /** A fresh workshop with one person in every role. */
-export async function createWorkshop(name = `Workshop ${randomUUID().slice(0, 8)}`): Promise<TestWorkshop> {
+export async function createWorkshop(
+  name = `Workshop ${randomUUID().slice(0, 8)}`,
+): Promise<TestWorkshop> {
   const workshop = await Workshop.create({ name });
   const people = {} as Record<Role, User>;
   for (const role of roles) people[role] = await createUser(workshop.id, role);
@@ -37,7 +43,9 @@ export async function createWorkshop(name = `Workshop ${randomUUID().slice(0, 8)
 }
 
 /** A workshop that also has the shipped trees, published as version 1. */
-export async function createWorkshopWithTrees(): Promise<TestWorkshop & { trees: Record<string, string> }> {
+export async function createWorkshopWithTrees(): Promise<
+  TestWorkshop & { trees: Record<string, string> }
+> {
   const w = await createWorkshop();
   await installShippedTrees({ workshopId: w.workshop.id, userId: w.people.lead.id });
   const trees = await Tree.findAll({ where: { workshopId: w.workshop.id } });
@@ -45,7 +53,24 @@ export async function createWorkshopWithTrees(): Promise<TestWorkshop & { trees:
 }
 
 export async function createVehicle(workshopId: string) {
-  const customer = await Customer.create({ workshopId, name: `Customer ${randomUUID().slice(0, 6)}`, phone: null, email: null });
+  const customer = await Customer.create({
+    workshopId,
+    name: `Customer ${randomUUID().slice(0, 6)}`,
+    phone: null,
+    email: null,
+  });
   const plate = `F${randomUUID().slice(0, 6).toUpperCase()}`;
-  return Vehicle.create({ workshopId, customerId: customer.id, plate, plateKey: plate, vin: null, make: 'Corvane', model: 'Tessel', year: 2016, engine: '1.4 petrol', fuel: 'petrol', mileage: 120000 });
+  return Vehicle.create({
+    workshopId,
+    customerId: customer.id,
+    plate,
+    plateKey: plate,
+    vin: null,
+    make: 'Corvane',
+    model: 'Tessel',
+    year: 2016,
+    engine: '1.4 petrol',
+    fuel: 'petrol',
+    mileage: 120000,
+  });
 }

@@ -6,7 +6,9 @@ import { migrateUp } from '../db/migrator';
 export default async function setup(): Promise<void> {
   const url = process.env.DATABASE_URL;
   if (!url || !/_test(\?|$)/.test(new URL(url).pathname + (new URL(url).search || ''))) {
-    throw new Error('API tests need DATABASE_URL pointing at a *_test database: run them through `npm test`.');
+    throw new Error(
+      'API tests need DATABASE_URL pointing at a *_test database: run them through `npm test`.',
+    );
   }
   const sequelize = createSequelize(url, { poolMax: 2 });
   await sequelize.query('DROP SCHEMA public CASCADE; CREATE SCHEMA public;');

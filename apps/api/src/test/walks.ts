@@ -11,18 +11,58 @@ const bar = (v: number) => ({ value: v, unit: 'bar' });
 /** Engine at 110 °C with the radiator inlet barely warm, thermostat good, shroud found stuck. */
 export const stuckShroudPath: { nodeId: string; answer: Answer }[] = [
   { nodeId: 'interview-pattern', answer: { type: 'answer.choice', choiceId: 'speed-or-load' } },
-  { nodeId: 'level-cold', answer: { type: 'answer.measurement', readings: { topUpLitres: { value: 0.2, unit: 'L' } } } },
+  {
+    nodeId: 'level-cold',
+    answer: { type: 'answer.measurement', readings: { topUpLitres: { value: 0.2, unit: 'L' } } },
+  },
   { nodeId: 'visual-leaks', answer: { type: 'answer.choice', choiceId: 'none-seen' } },
   { nodeId: 'glycol-type', answer: { type: 'answer.choice', choiceId: 'ethylene' } },
-  { nodeId: 'concentration-eg', answer: { type: 'answer.measurement', readings: { egPercent: { value: 50, unit: '%' } } } },
-  { nodeId: 'cap-test', answer: { type: 'answer.measurement', readings: { capRating: bar(1.4), capOpening: bar(1.38), capHeldAfterMinute: bar(1.35) } } },
-  { nodeId: 'pressure-test', answer: { type: 'answer.measurement', readings: { testPressure: bar(1.4), pressureAfterHold: bar(1.38), holdMinutes: { value: 15, unit: 'min' } } } },
+  {
+    nodeId: 'concentration-eg',
+    answer: { type: 'answer.measurement', readings: { egPercent: { value: 50, unit: '%' } } },
+  },
+  {
+    nodeId: 'cap-test',
+    answer: {
+      type: 'answer.measurement',
+      readings: { capRating: bar(1.4), capOpening: bar(1.38), capHeldAfterMinute: bar(1.35) },
+    },
+  },
+  {
+    nodeId: 'pressure-test',
+    answer: {
+      type: 'answer.measurement',
+      readings: {
+        testPressure: bar(1.4),
+        pressureAfterHold: bar(1.38),
+        holdMinutes: { value: 15, unit: 'min' },
+      },
+    },
+  },
   { nodeId: 'block-test', answer: { type: 'answer.procedure', result: 'done' } },
   { nodeId: 'block-test-result', answer: { type: 'answer.choice', choiceId: 'no-gas' } },
-  { nodeId: 'warm-up-live-data', answer: { type: 'answer.measurement', readings: { liveDataTemp: c(110), sensorHousingIr: c(106) } } },
-  { nodeId: 'hose-temps', answer: { type: 'answer.measurement', readings: { radiatorInletTemp: c(52), radiatorOutletTemp: c(45) } } },
+  {
+    nodeId: 'warm-up-live-data',
+    answer: {
+      type: 'answer.measurement',
+      readings: { liveDataTemp: c(110), sensorHousingIr: c(106) },
+    },
+  },
+  {
+    nodeId: 'hose-temps',
+    answer: {
+      type: 'answer.measurement',
+      readings: { radiatorInletTemp: c(52), radiatorOutletTemp: c(45) },
+    },
+  },
   { nodeId: 'thermostat-test', answer: { type: 'answer.procedure', result: 'done' } },
-  { nodeId: 'thermostat-opening', answer: { type: 'answer.measurement', readings: { thermostatRated: c(87), thermostatOpenedAt: c(88) } } },
+  {
+    nodeId: 'thermostat-opening',
+    answer: {
+      type: 'answer.measurement',
+      readings: { thermostatRated: c(87), thermostatOpenedAt: c(88) },
+    },
+  },
   { nodeId: 'main-loop-bleed', answer: { type: 'answer.procedure', result: 'done' } },
   { nodeId: 'main-loop-retest', answer: { type: 'answer.choice', choiceId: 'still-no-flow' } },
   { nodeId: 'pump-removal', answer: { type: 'answer.procedure', result: 'done' } },

@@ -1,14 +1,23 @@
 // A photo, file or log attached to a case or one of its steps. The bytes live in storage under
 // a generated key; this row is written only after they are safely there.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { DiagnosticCase } from './diagnostic-case';
 import type { User } from './user';
 import type { Workshop } from './workshop';
 
 export type AttachmentKind = 'photo' | 'file' | 'log';
 
-export class Attachment extends Model<InferAttributes<Attachment>, InferCreationAttributes<Attachment>> {
+export class Attachment extends Model<
+  InferAttributes<Attachment>,
+  InferCreationAttributes<Attachment>
+> {
   declare id: CreationOptional<string>;
   declare caseId: ForeignKey<DiagnosticCase['id']>;
   declare workshopId: ForeignKey<Workshop['id']>;

@@ -1,15 +1,32 @@
 // One entry in a case's history: an answer, a step back, a note, a status change. Never
 // updated or deleted; the walk and the audit trail are both read from these.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, NonAttribute, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  NonAttribute,
+  Sequelize,
+} from 'sequelize';
 import type { DiagnosticCase } from './diagnostic-case';
 import type { User } from './user';
 import type { Workshop } from './workshop';
 
-export const caseEventKinds = ['answer', 'back', 'note', 'status', 'attachment', 'findings'] as const;
+export const caseEventKinds = [
+  'answer',
+  'back',
+  'note',
+  'status',
+  'attachment',
+  'findings',
+] as const;
 export type CaseEventKind = (typeof caseEventKinds)[number];
 
-export class CaseEvent extends Model<InferAttributes<CaseEvent>, InferCreationAttributes<CaseEvent>> {
+export class CaseEvent extends Model<
+  InferAttributes<CaseEvent>,
+  InferCreationAttributes<CaseEvent>
+> {
   declare id: CreationOptional<string>;
   declare caseId: ForeignKey<DiagnosticCase['id']>;
   declare workshopId: ForeignKey<Workshop['id']>;

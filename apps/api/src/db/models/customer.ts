@@ -1,6 +1,12 @@
 // A workshop's customer: who owns the vehicle and how to reach them.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { Workshop } from './workshop';
 
 export class Customer extends Model<InferAttributes<Customer>, InferCreationAttributes<Customer>> {

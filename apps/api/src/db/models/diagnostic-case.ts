@@ -1,6 +1,13 @@
 // A case: one vehicle's complaint walked through one pinned tree version.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, NonAttribute, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  NonAttribute,
+  Sequelize,
+} from 'sequelize';
 import type { Customer } from './customer';
 import type { TreeVersion } from './tree-version';
 import type { User } from './user';
@@ -10,7 +17,10 @@ import type { Workshop } from './workshop';
 export const caseStatuses = ['open', 'in_diagnosis', 'diagnosed', 'closed'] as const;
 export type CaseStatus = (typeof caseStatuses)[number];
 
-export class DiagnosticCase extends Model<InferAttributes<DiagnosticCase>, InferCreationAttributes<DiagnosticCase>> {
+export class DiagnosticCase extends Model<
+  InferAttributes<DiagnosticCase>,
+  InferCreationAttributes<DiagnosticCase>
+> {
   declare id: CreationOptional<string>;
   declare workshopId: ForeignKey<Workshop['id']>;
   declare number: number;

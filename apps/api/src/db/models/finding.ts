@@ -1,7 +1,13 @@
 // The findings of a diagnosed case: concern, cause, correction, lines and readings, drafted from
 // the reached outcome and edited by the technician.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { FindingsLines } from '@heatpath/contracts';
 import type { DiagnosticCase } from './diagnostic-case';
 import type { User } from './user';

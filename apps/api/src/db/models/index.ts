@@ -12,10 +12,34 @@ import { User } from './user';
 import { Vehicle } from './vehicle';
 import { Workshop } from './workshop';
 
-export { Attachment, CaseEvent, Customer, DiagnosticCase, Finding, RegressionCase, Tree, TreeVersion, User, Vehicle, Workshop };
+export {
+  Attachment,
+  CaseEvent,
+  Customer,
+  DiagnosticCase,
+  Finding,
+  RegressionCase,
+  Tree,
+  TreeVersion,
+  User,
+  Vehicle,
+  Workshop,
+};
 
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [Workshop, User, Customer, Vehicle, Tree, TreeVersion, DiagnosticCase, CaseEvent, Attachment, Finding, RegressionCase]) {
+  for (const model of [
+    Workshop,
+    User,
+    Customer,
+    Vehicle,
+    Tree,
+    TreeVersion,
+    DiagnosticCase,
+    CaseEvent,
+    Attachment,
+    Finding,
+    RegressionCase,
+  ]) {
     model.initModel(sequelize);
   }
   const fk = (name: string) => ({ foreignKey: { name, allowNull: false } });

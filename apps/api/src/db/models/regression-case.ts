@@ -1,12 +1,21 @@
 // A finished case a lead keeps in a tree's regression set: every new draft is replayed against it.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { DiagnosticCase } from './diagnostic-case';
 import type { Tree } from './tree';
 import type { User } from './user';
 import type { Workshop } from './workshop';
 
-export class RegressionCase extends Model<InferAttributes<RegressionCase>, InferCreationAttributes<RegressionCase>> {
+export class RegressionCase extends Model<
+  InferAttributes<RegressionCase>,
+  InferCreationAttributes<RegressionCase>
+> {
   declare treeId: ForeignKey<Tree['id']>;
   declare caseId: ForeignKey<DiagnosticCase['id']>;
   declare workshopId: ForeignKey<Workshop['id']>;
@@ -20,7 +29,12 @@ export class RegressionCase extends Model<InferAttributes<RegressionCase>, Infer
         caseId: { type: DataTypes.UUID, primaryKey: true },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'tree_regression_cases', modelName: 'RegressionCase', updatedAt: false },
+      {
+        sequelize,
+        tableName: 'tree_regression_cases',
+        modelName: 'RegressionCase',
+        updatedAt: false,
+      },
     );
   }
 }

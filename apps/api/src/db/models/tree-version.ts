@@ -1,7 +1,14 @@
 // One version of a tree: a draft the lead edits, or a published version that the database
 // itself refuses to change (see migration 0002's trigger).
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, NonAttribute, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  NonAttribute,
+  Sequelize,
+} from 'sequelize';
 import type { Tree } from './tree';
 import type { User } from './user';
 import type { Workshop } from './workshop';
@@ -14,7 +21,10 @@ export interface PublishConfirmation {
   changedCases: { caseId: string; reference: string; from: string | null; to: string | null }[];
 }
 
-export class TreeVersion extends Model<InferAttributes<TreeVersion>, InferCreationAttributes<TreeVersion>> {
+export class TreeVersion extends Model<
+  InferAttributes<TreeVersion>,
+  InferCreationAttributes<TreeVersion>
+> {
   declare id: CreationOptional<string>;
   declare treeId: ForeignKey<Tree['id']>;
   declare workshopId: ForeignKey<Workshop['id']>;
@@ -40,7 +50,11 @@ export class TreeVersion extends Model<InferAttributes<TreeVersion>, InferCreati
       {
         id: { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true },
         version: { type: DataTypes.INTEGER, allowNull: false },
-        status: { type: DataTypes.ENUM('draft', 'published', 'retired'), allowNull: false, defaultValue: 'draft' },
+        status: {
+          type: DataTypes.ENUM('draft', 'published', 'retired'),
+          allowNull: false,
+          defaultValue: 'draft',
+        },
         definition: { type: DataTypes.JSONB, allowNull: false },
         changeNote: { type: DataTypes.TEXT, allowNull: true },
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },

@@ -1,6 +1,12 @@
 // A workshop's decision tree: a stable identity whose content lives in its versions.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 import type { Workshop } from './workshop';
 
 export class Tree extends Model<InferAttributes<Tree>, InferCreationAttributes<Tree>> {

@@ -1,6 +1,13 @@
 // A person who signs in. Belongs to exactly one workshop; deactivated people keep their history.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, NonAttribute, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  NonAttribute,
+  Sequelize,
+} from 'sequelize';
 import { defaultUnitPreferences, roles } from '@heatpath/contracts';
 import type { Role, UnitPreferences } from '@heatpath/contracts';
 import type { Workshop } from './workshop';

@@ -1,6 +1,13 @@
 // A vehicle the workshop has seen, found again by VIN or plate before a duplicate is made.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, ForeignKey, InferAttributes, InferCreationAttributes, NonAttribute, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  ForeignKey,
+  InferAttributes,
+  InferCreationAttributes,
+  NonAttribute,
+  Sequelize,
+} from 'sequelize';
 import type { Customer } from './customer';
 import type { Workshop } from './workshop';
 

@@ -1,6 +1,11 @@
 // A workshop: the tenant every other record belongs to.
 import { DataTypes, Model } from 'sequelize';
-import type { CreationOptional, InferAttributes, InferCreationAttributes, Sequelize } from 'sequelize';
+import type {
+  CreationOptional,
+  InferAttributes,
+  InferCreationAttributes,
+  Sequelize,
+} from 'sequelize';
 
 export const workshopLimits = { name: 120 } as const;
 

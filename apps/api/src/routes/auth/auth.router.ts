@@ -57,13 +57,19 @@ export function authRouter(deps: { config: Config; sequelize: Sequelize; signer:
     path: '/',
   };
 
-  router.post('/sign-in', perAddress, perAccount, validate('body', signInRequestSchema), async (_req, res) => {
-    const input = res.locals.body as SignInRequest;
-    const user = await signInUser(input);
-    const token = await signer.sign({ userId: user.id, workshopId: user.workshopId });
-    res.cookie(sessionCookieName, token, { ...cookieOptions, maxAge: signer.ttlMs });
-    res.json({ me: presentMe(user) });
-  });
+  router.post(
+    '/sign-in',
+    perAddress,
+    perAccount,
+    validate('body', signInRequestSchema),
+    async (_req, res) => {
+      const input = res.locals.body as SignInRequest;
+      const user = await signInUser(input);
+      const token = await signer.sign({ userId: user.id, workshopId: user.workshopId });
+      res.cookie(sessionCookieName, token, { ...cookieOptions, maxAge: signer.ttlMs });
+      res.json({ me: presentMe(user) });
+    },
+  );
 
   router.post('/sign-out', (_req, res) => {
     res.clearCookie(sessionCookieName, cookieOptions);

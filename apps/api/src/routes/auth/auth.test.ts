@@ -12,9 +12,15 @@ describe('POST /api/auth/sign-in', () => {
   it('signs in, sets an httpOnly SameSite=Lax cookie and returns the person', async () => {
     const { workshop, people } = await createWorkshop();
     const agent = agentFor(app);
-    const res = await agent.post('/api/auth/sign-in').send({ email: people.technician.email, password: testPassword });
+    const res = await agent
+      .post('/api/auth/sign-in')
+      .send({ email: people.technician.email, password: testPassword });
     expect(res.status).toBe(200);
-    expect(res.body.me).toMatchObject({ email: people.technician.email, role: 'technician', workshop: { id: workshop.id } });
+    expect(res.body.me).toMatchObject({
+      email: people.technician.email,
+      role: 'technician',
+      workshop: { id: workshop.id },
+    });
     const cookie = String(res.headers['set-cookie']);
     expect(cookie).toMatch(/heatpath_session=/);
     expect(cookie).toMatch(/HttpOnly/i);
@@ -31,7 +37,9 @@ describe('POST /api/auth/sign-in', () => {
 
   it('accepts the address in any letter case', async () => {
     const { people } = await createWorkshop();
-    const res = await agentFor(app).post('/api/auth/sign-in').send({ email: people.lead.email.toUpperCase(), password: testPassword });
+    const res = await agentFor(app)
+      .post('/api/auth/sign-in')
+      .send({ email: people.lead.email.toUpperCase(), password: testPassword });
     expect(res.status).toBe(200);
   });
 
@@ -46,7 +54,9 @@ describe('POST /api/auth/sign-in', () => {
     for (const body of attempts) {
       const res = await agentFor(app).post('/api/auth/sign-in').send(body);
       expect(res.status).toBe(401);
-      expect(res.body).toEqual({ error: { code: 'unauthenticated', message: signInFailedMessage } });
+      expect(res.body).toEqual({
+        error: { code: 'unauthenticated', message: signInFailedMessage },
+      });
       expect(res.headers['set-cookie']).toBeUndefined();
     }
   });
@@ -61,7 +71,9 @@ describe('POST /api/auth/sign-in', () => {
 
   it('refuses a request without the Heatpath client header (cross-site guard)', async () => {
     const { people } = await createWorkshop();
-    const res = await supertest(app).post('/api/auth/sign-in').send({ email: people.lead.email, password: testPassword });
+    const res = await supertest(app)
+      .post('/api/auth/sign-in')
+      .send({ email: people.lead.email, password: testPassword });
     expect(res.status).toBe(403);
     expect(res.body.error.message).toMatch(/Heatpath app/);
   });
@@ -69,26 +81,44 @@ describe('POST /api/auth/sign-in', () => {
 
 describe('sign-in rate limits', () => {
   it('stops repeated failures for one account, even when the right password follows', async () => {
-    const app = testApp({ signInLimits: { perAccount: 3, perAddress: 100_000, windowMinutes: 15 } });
+    const app = testApp({
+      signInLimits: { perAccount: 3, perAddress: 100_000, windowMinutes: 15 },
+    });
     const { people } = await createWorkshop();
     for (let i = 0; i < 3; i += 1) {
-      const res = await agentFor(app).post('/api/auth/sign-in').send({ email: people.lead.email, password: 'nope-nope' });
+      const res = await agentFor(app)
+        .post('/api/auth/sign-in')
+        .send({ email: people.lead.email, password: 'nope-nope' });
       expect(res.status).toBe(401);
     }
-    const blocked = await agentFor(app).post('/api/auth/sign-in').send({ email: people.lead.email, password: testPassword });
+    const blocked = await agentFor(app)
+      .post('/api/auth/sign-in')
+      .send({ email: people.lead.email, password: testPassword });
     expect(blocked.status).toBe(429);
-    expect(blocked.body.error).toEqual({ code: 'rate_limited', message: expect.stringMatching(/Too many sign-in attempts/) });
+    expect(blocked.body.error).toEqual({
+      code: 'rate_limited',
+      message: expect.stringMatching(/Too many sign-in attempts/),
+    });
     // Another account from the same address is unaffected.
-    const other = await agentFor(app).post('/api/auth/sign-in').send({ email: people.technician.email, password: testPassword });
+    const other = await agentFor(app)
+      .post('/api/auth/sign-in')
+      .send({ email: people.technician.email, password: testPassword });
     expect(other.status).toBe(200);
   });
 
   it('stops too many attempts from one address', async () => {
-    const app = testApp({ trustProxy: true, signInLimits: { perAccount: 1000, perAddress: 4, windowMinutes: 15 } });
+    const app = testApp({
+      trustProxy: true,
+      signInLimits: { perAccount: 1000, perAddress: 4, windowMinutes: 15 },
+    });
     const { people } = await createWorkshop();
     const address = `203.0.113.${Math.floor(Math.random() * 250) + 1}`;
     const send = () =>
-      supertest(app).post('/api/auth/sign-in').set(clientHeaders).set('X-Forwarded-For', address).send({ email: people.advisor.email, password: testPassword });
+      supertest(app)
+        .post('/api/auth/sign-in')
+        .set(clientHeaders)
+        .set('X-Forwarded-For', address)
+        .send({ email: people.advisor.email, password: testPassword });
     for (let i = 0; i < 4; i += 1) expect((await send()).status).toBe(200);
     expect((await send()).status).toBe(429);
   });
@@ -99,7 +129,9 @@ describe('POST /api/auth/sign-out', () => {
     const app = testApp();
     const { people } = await createWorkshop();
     const agent = agentFor(app);
-    await agent.post('/api/auth/sign-in').send({ email: people.advisor.email, password: testPassword });
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: people.advisor.email, password: testPassword });
     expect((await agent.get('/api/me')).status).toBe(200);
     const out = await agent.post('/api/auth/sign-out');
     expect(out.status).toBe(204);
@@ -113,14 +145,18 @@ describe('sessions', () => {
   const app = testApp();
 
   it('rejects a forged cookie', async () => {
-    const res = await supertest(app).get('/api/me').set('Cookie', 'heatpath_session=eyJhbGciOiJIUzI1NiJ9.e30.abc');
+    const res = await supertest(app)
+      .get('/api/me')
+      .set('Cookie', 'heatpath_session=eyJhbGciOiJIUzI1NiJ9.e30.abc');
     expect(res.status).toBe(401);
   });
 
   it('ends the session of a person the lead deactivates', async () => {
     const { people } = await createWorkshop();
     const agent = agentFor(app);
-    await agent.post('/api/auth/sign-in').send({ email: people.technician.email, password: testPassword });
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: people.technician.email, password: testPassword });
     await people.technician.update({ active: false });
     expect((await agent.get('/api/me')).status).toBe(401);
   });
@@ -129,7 +165,9 @@ describe('sessions', () => {
     const shortLived = testApp({ sessionTtlHours: 1 / 3600 });
     const { people } = await createWorkshop();
     const agent = agentFor(shortLived);
-    await agent.post('/api/auth/sign-in').send({ email: people.lead.email, password: testPassword });
+    await agent
+      .post('/api/auth/sign-in')
+      .send({ email: people.lead.email, password: testPassword });
     await new Promise((r) => setTimeout(r, 2100));
     expect((await agent.get('/api/me')).status).toBe(401);
   });

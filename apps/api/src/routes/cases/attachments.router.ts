@@ -24,8 +24,17 @@ const receiveOneFile: RequestHandler = (req, res, next) => {
   upload.single('file')(req, res, (error: unknown) => {
     if (!error) return next();
     if (error instanceof multer.MulterError) {
-      if (error.code === 'LIMIT_FILE_SIZE') return next(new AppError('payload_too_large', `A file can be at most ${attachmentLimits.maxBytes / 1024 / 1024} MB.`));
-      if (error.code === 'LIMIT_FILE_COUNT' || error.code === 'LIMIT_UNEXPECTED_FILE') return next(new AppError('payload_too_large', 'Attach one file at a time, in the field "file".'));
+      if (error.code === 'LIMIT_FILE_SIZE')
+        return next(
+          new AppError(
+            'payload_too_large',
+            `A file can be at most ${attachmentLimits.maxBytes / 1024 / 1024} MB.`,
+          ),
+        );
+      if (error.code === 'LIMIT_FILE_COUNT' || error.code === 'LIMIT_UNEXPECTED_FILE')
+        return next(
+          new AppError('payload_too_large', 'Attach one file at a time, in the field "file".'),
+        );
       return next(new AppError('bad_request', 'The upload form was not understood.'));
     }
     next(new AppError('bad_request', 'The upload could not be read; try again.'));
@@ -35,20 +44,27 @@ const receiveOneFile: RequestHandler = (req, res, next) => {
 export function attachmentsRouter(deps: { store: FileStore }) {
   const router = Router({ mergeParams: true });
 
-  router.post('/', requirePermission('cases.walk'), receiveOneFile, validate('body', attachmentFieldsSchema), async (req, res) => {
-    const { caseId } = res.locals.params as { caseId: string };
-    if (!req.file) throw new AppError('bad_request', 'Choose a file to attach (form field "file").');
-    const fields = res.locals.body as { nodeId?: string; photoOnly?: 'true' | 'false' };
-    const attachment = await addAttachment({
-      actor: actorOf(res),
-      caseId,
-      nodeId: fields.nodeId ?? null,
-      photoOnly: fields.photoOnly === 'true',
-      file: { originalName: req.file.originalname, bytes: req.file.buffer },
-      store: deps.store,
-    });
-    res.status(201).json(presentAttachment(attachment, userOf(res)));
-  });
+  router.post(
+    '/',
+    requirePermission('cases.walk'),
+    receiveOneFile,
+    validate('body', attachmentFieldsSchema),
+    async (req, res) => {
+      const { caseId } = res.locals.params as { caseId: string };
+      if (!req.file)
+        throw new AppError('bad_request', 'Choose a file to attach (form field "file").');
+      const fields = res.locals.body as { nodeId?: string; photoOnly?: 'true' | 'false' };
+      const attachment = await addAttachment({
+        actor: actorOf(res),
+        caseId,
+        nodeId: fields.nodeId ?? null,
+        photoOnly: fields.photoOnly === 'true',
+        file: { originalName: req.file.originalname, bytes: req.file.buffer },
+        store: deps.store,
+      });
+      res.status(201).json(presentAttachment(attachment, userOf(res)));
+    },
+  );
 
   const sendStored = (which: 'file' | 'thumbnail'): RequestHandler[] => [
     requirePermission('cases.read'),
@@ -56,9 +72,15 @@ export function attachmentsRouter(deps: { store: FileStore }) {
     async (_req, res) => {
       const actor = actorOf(res);
       assertCan(actor, 'cases.read');
-      const { caseId, attachmentId } = res.locals.params as { caseId: string; attachmentId: string };
+      const { caseId, attachmentId } = res.locals.params as {
+        caseId: string;
+        attachmentId: string;
+      };
       const kase = await findCase({ actor, caseId });
-      const a = await Attachment.findOne({ where: { id: attachmentId, caseId: kase.id, workshopId: actor.workshopId }, include: [{ model: User, as: 'uploader' }] });
+      const a = await Attachment.findOne({
+        where: { id: attachmentId, caseId: kase.id, workshopId: actor.workshopId },
+        include: [{ model: User, as: 'uploader' }],
+      });
       if (!a) throw notFound('That attachment');
       const key = which === 'file' ? a.storageKey : a.thumbnailKey;
       if (!key) throw notFound('A thumbnail for that attachment');
@@ -68,7 +90,10 @@ export function attachmentsRouter(deps: { store: FileStore }) {
       res.set('Cache-Control', 'private, max-age=86400');
       if (which === 'file') {
         const disposition = a.kind === 'photo' ? 'inline' : 'attachment';
-        res.set('Content-Disposition', `${disposition}; filename="${a.originalName.replace(/[^\w.-]+/g, '_')}"`);
+        res.set(
+          'Content-Disposition',
+          `${disposition}; filename="${a.originalName.replace(/[^\w.-]+/g, '_')}"`,
+        );
       }
       stream.pipe(res);
     },

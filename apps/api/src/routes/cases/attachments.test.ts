@@ -17,9 +17,17 @@ import { overheatingTreeKey } from '../../test/walks';
 
 const uploadDir = mkdtempSync(join(tmpdir(), 'heatpath-uploads-'));
 const store = createDiskFileStore(uploadDir);
-const app = createApp({ config: testConfig(), sequelize: testSequelize(), logger: createLogger('silent'), store });
+const app = createApp({
+  config: testConfig(),
+  sequelize: testSequelize(),
+  logger: createLogger('silent'),
+  store,
+});
 
-const png = () => sharp({ create: { width: 640, height: 480, channels: 3, background: '#b03020' } }).png().toBuffer();
+const png = () =>
+  sharp({ create: { width: 640, height: 480, channels: 3, background: '#b03020' } })
+    .png()
+    .toBuffer();
 // The start of a Windows executable: "MZ" and a DOS stub.
 const exe = Buffer.concat([Buffer.from('MZ'), Buffer.alloc(200, 0x90)]);
 
@@ -27,20 +35,35 @@ async function openCase() {
   const w = await createWorkshopWithTrees();
   const vehicle = await createVehicle(w.workshop.id);
   const tech = await signedIn(app, w.people.technician.email, testPassword);
-  const res = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: w.trees[overheatingTreeKey] });
+  const res = await tech
+    .post('/api/cases')
+    .send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: w.trees[overheatingTreeKey] });
   return { ...w, tech, caseId: res.body.id as string };
 }
 
 async function filesOnDisk(): Promise<string[]> {
-  return (await readdir(uploadDir, { recursive: true, withFileTypes: true })).filter((d) => d.isFile()).map((d) => d.name);
+  return (await readdir(uploadDir, { recursive: true, withFileTypes: true }))
+    .filter((d) => d.isFile())
+    .map((d) => d.name);
 }
 
 describe('attachments', () => {
   it('stores a photo with a thumbnail and serves both back', async () => {
     const { tech, caseId } = await openCase();
-    const res = await tech.post(`/api/cases/${caseId}/attachments`).field('nodeId', 'locate-visible-leak').field('photoOnly', 'true').attach('file', await png(), 'leak.png');
+    const res = await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('nodeId', 'locate-visible-leak')
+      .field('photoOnly', 'true')
+      .attach('file', await png(), 'leak.png');
     expect(res.status, res.text).toBe(201);
-    expect(res.body).toMatchObject({ kind: 'photo', mediaType: 'image/png', width: 640, height: 480, nodeId: 'locate-visible-leak', name: 'leak.png' });
+    expect(res.body).toMatchObject({
+      kind: 'photo',
+      mediaType: 'image/png',
+      width: 640,
+      height: 480,
+      nodeId: 'locate-visible-leak',
+      name: 'leak.png',
+    });
     const file = await tech.get(res.body.url).buffer(true);
     expect(file.status).toBe(200);
     expect(file.headers['content-type']).toBe('image/png');
@@ -55,7 +78,9 @@ describe('attachments', () => {
   it('refuses an executable named like a photo (415) and stores nothing', async () => {
     const { tech, caseId } = await openCase();
     const before = await filesOnDisk();
-    const res = await tech.post(`/api/cases/${caseId}/attachments`).attach('file', exe, { filename: 'photo.jpg', contentType: 'image/jpeg' });
+    const res = await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .attach('file', exe, { filename: 'photo.jpg', contentType: 'image/jpeg' });
     expect(res.status).toBe(415);
     expect(res.body.error.message).toMatch(/whatever its name says|cannot be attached/);
     expect(await filesOnDisk()).toEqual(before);
@@ -65,11 +90,16 @@ describe('attachments', () => {
   it('refuses a PDF where the step asks for a photo, but accepts a CSV log on the case', async () => {
     const { tech, caseId } = await openCase();
     const pdf = Buffer.from('%PDF-1.4\n1 0 obj <<>> endobj\ntrailer <<>>\n%%EOF\n');
-    const refused = await tech.post(`/api/cases/${caseId}/attachments`).field('photoOnly', 'true').attach('file', pdf, 'report.pdf');
+    const refused = await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('photoOnly', 'true')
+      .attach('file', pdf, 'report.pdf');
     expect(refused.status).toBe(415);
     expect(refused.body.error.message).toMatch(/asks for a photo/);
     const csv = Buffer.from('time,coolant_c\n0,20\n60,45\n');
-    const log = await tech.post(`/api/cases/${caseId}/attachments`).attach('file', csv, 'road-test.csv');
+    const log = await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .attach('file', csv, 'road-test.csv');
     expect(log.status).toBe(201);
     expect(log.body.kind).toBe('log');
   });
@@ -90,14 +120,22 @@ describe('attachments', () => {
       // The original is written; the thumbnail write then fails, as a full disk would.
       put: async (key, bytes, type) => {
         puts += 1;
-        if (puts === 2) throw Object.assign(new Error('no space left on device'), { code: 'ENOSPC' });
+        if (puts === 2)
+          throw Object.assign(new Error('no space left on device'), { code: 'ENOSPC' });
         await store.put(key, bytes, type);
       },
     };
-    const broken = createApp({ config: testConfig(), sequelize: testSequelize(), logger: createLogger('silent'), store: failing });
+    const broken = createApp({
+      config: testConfig(),
+      sequelize: testSequelize(),
+      logger: createLogger('silent'),
+      store: failing,
+    });
     const agent = await signedIn(broken, people.technician.email, testPassword);
     const before = await filesOnDisk();
-    const res = await agent.post(`/api/cases/${caseId}/attachments`).attach('file', await png(), 'leak.png');
+    const res = await agent
+      .post(`/api/cases/${caseId}/attachments`)
+      .attach('file', await png(), 'leak.png');
     expect(res.status).toBe(500);
     expect(res.body.error.message).toMatch(/may not be saved/);
     expect(await filesOnDisk()).toEqual(before);
@@ -107,10 +145,20 @@ describe('attachments', () => {
   it('never serves another workshop’s file', async () => {
     const mine = await openCase();
     const theirs = await openCase();
-    const up = await theirs.tech.post(`/api/cases/${theirs.caseId}/attachments`).attach('file', await png(), 'theirs.png');
+    const up = await theirs.tech
+      .post(`/api/cases/${theirs.caseId}/attachments`)
+      .attach('file', await png(), 'theirs.png');
     expect((await mine.tech.get(up.body.url)).status).toBe(404);
-    expect((await mine.tech.get(`/api/cases/${mine.caseId}/attachments/${up.body.id}/file`)).status).toBe(404);
-    expect((await mine.tech.post(`/api/cases/${theirs.caseId}/attachments`).attach('file', await png(), 'x.png')).status).toBe(404);
+    expect(
+      (await mine.tech.get(`/api/cases/${mine.caseId}/attachments/${up.body.id}/file`)).status,
+    ).toBe(404);
+    expect(
+      (
+        await mine.tech
+          .post(`/api/cases/${theirs.caseId}/attachments`)
+          .attach('file', await png(), 'x.png')
+      ).status,
+    ).toBe(404);
   });
 
   it('needs a file', async () => {

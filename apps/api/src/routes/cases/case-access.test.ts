@@ -27,37 +27,86 @@ interface RouteCase {
 
 const readers: Role[] = ['lead', 'technician', 'advisor'];
 const walkers: Role[] = ['lead', 'technician'];
-const findingsEdit = { revision: 1, concern: 'c', cause: 'c', correction: 'c', parts: [], labour: [], followUps: [] };
+const findingsEdit = {
+  revision: 1,
+  concern: 'c',
+  cause: 'c',
+  correction: 'c',
+  parts: [],
+  labour: [],
+  followUps: [],
+};
 
 const routes: RouteCase[] = [
   { method: 'get', path: () => '/api/trees', allowed: readers, ok: 200 },
   { method: 'get', path: () => '/api/cases', allowed: readers, ok: 200 },
-  { method: 'post', path: () => '/api/cases', body: (f) => ({ vehicleId: f.vehicleId, complaint: 'Overheats', treeId: f.treeId }), allowed: readers, ok: 201 },
+  {
+    method: 'post',
+    path: () => '/api/cases',
+    body: (f) => ({ vehicleId: f.vehicleId, complaint: 'Overheats', treeId: f.treeId }),
+    allowed: readers,
+    ok: 201,
+  },
   { method: 'get', path: (f) => `/api/cases/${f.caseId}`, allowed: readers, ok: 200 },
   { method: 'get', path: (f) => `/api/cases/${f.caseId}/events`, allowed: readers, ok: 200 },
   {
     method: 'post',
     path: (f) => `/api/cases/${f.caseId}/walk`,
-    body: () => ({ idempotencyKey: randomUUID(), event: { type: 'answer.choice', nodeId: 'interview-pattern', position: 0, choiceId: 'no-pattern' } }),
+    body: () => ({
+      idempotencyKey: randomUUID(),
+      event: {
+        type: 'answer.choice',
+        nodeId: 'interview-pattern',
+        position: 0,
+        choiceId: 'no-pattern',
+      },
+    }),
     allowed: walkers,
     ok: 201,
   },
-  { method: 'post', path: (f) => `/api/cases/${f.caseId}/notes`, body: () => ({ idempotencyKey: randomUUID(), text: 'A note' }), allowed: walkers, ok: 201 },
+  {
+    method: 'post',
+    path: (f) => `/api/cases/${f.caseId}/notes`,
+    body: () => ({ idempotencyKey: randomUUID(), text: 'A note' }),
+    allowed: walkers,
+    ok: 201,
+  },
   // No findings exist before an outcome: allowed roles get the 409 that explains it.
-  { method: 'put', path: (f) => `/api/cases/${f.caseId}/findings`, body: () => findingsEdit, allowed: walkers, ok: 409 },
+  {
+    method: 'put',
+    path: (f) => `/api/cases/${f.caseId}/findings`,
+    body: () => findingsEdit,
+    allowed: walkers,
+    ok: 409,
+  },
   { method: 'post', path: (f) => `/api/cases/${f.caseId}/diagnosed`, allowed: walkers, ok: 409 },
-  { method: 'get', path: (f) => `/api/cases/${f.caseId}/attachments/${randomUUID()}/file`, allowed: readers, ok: 404 },
+  {
+    method: 'get',
+    path: (f) => `/api/cases/${f.caseId}/attachments/${randomUUID()}/file`,
+    allowed: readers,
+    ok: 404,
+  },
 ];
 
 async function fixture() {
   const w = await createWorkshopWithTrees();
   const vehicle = await createVehicle(w.workshop.id);
   const lead = await signedIn(app, w.people.lead.email, testPassword);
-  const kase = await lead.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: w.trees[overheatingTreeKey] });
-  return { w, f: { caseId: kase.body.id as string, vehicleId: vehicle.id, treeId: w.trees[overheatingTreeKey]! } };
+  const kase = await lead
+    .post('/api/cases')
+    .send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: w.trees[overheatingTreeKey] });
+  return {
+    w,
+    f: {
+      caseId: kase.body.id as string,
+      vehicleId: vehicle.id,
+      treeId: w.trees[overheatingTreeKey]!,
+    },
+  };
 }
 
-const label = (r: RouteCase) => `${r.method.toUpperCase()} ${r.path({ caseId: ':caseId', vehicleId: ':vehicleId', treeId: ':treeId' })}`;
+const label = (r: RouteCase) =>
+  `${r.method.toUpperCase()} ${r.path({ caseId: ':caseId', vehicleId: ':vehicleId', treeId: ':treeId' })}`;
 
 describe('case routes × roles', () => {
   for (const route of routes) {
@@ -72,7 +121,10 @@ describe('case routes × roles', () => {
     }
     it(`${label(route)} unauthenticated → 401`, async () => {
       const { f } = await fixture();
-      const res = await supertest(app)[route.method](route.path(f)).set(clientHeaders).send(route.body?.(f));
+      const res = await supertest(app)
+        [route.method](route.path(f))
+        .set(clientHeaders)
+        .send(route.body?.(f));
       expect(res.status).toBe(401);
     });
   }
@@ -81,7 +133,9 @@ describe('case routes × roles', () => {
     const mine = await fixture();
     const theirs = await fixture();
     const lead = await signedIn(app, mine.w.people.lead.email, testPassword);
-    for (const route of routes.filter((r) => r.path(theirs.f).includes(theirs.f.caseId) || r.method === 'post')) {
+    for (const route of routes.filter(
+      (r) => r.path(theirs.f).includes(theirs.f.caseId) || r.method === 'post',
+    )) {
       if (route.path(theirs.f) === '/api/cases' && route.method === 'get') continue;
       const res = await lead[route.method](route.path(theirs.f)).send(route.body?.(theirs.f));
       expect(res.status, `${label(route)}: ${res.text}`).toBe(404);

@@ -33,18 +33,32 @@ import { attachmentsRouter } from './attachments.router';
 
 export function casesRouter(deps: { store: FileStore }) {
   const router = Router();
-  const caseId = (res: { locals: Record<string, unknown> }) => (res.locals.params as { caseId: string }).caseId;
+  const caseId = (res: { locals: Record<string, unknown> }) =>
+    (res.locals.params as { caseId: string }).caseId;
 
-  router.get('/', requirePermission('cases.read'), validate('query', caseListQuerySchema), async (_req, res) => {
-    const page = await listCases({ actor: actorOf(res), query: res.locals.query as CaseListQuery });
-    res.json({ cases: page.cases.map(presentCaseSummary), nextCursor: page.nextCursor });
-  });
+  router.get(
+    '/',
+    requirePermission('cases.read'),
+    validate('query', caseListQuerySchema),
+    async (_req, res) => {
+      const page = await listCases({
+        actor: actorOf(res),
+        query: res.locals.query as CaseListQuery,
+      });
+      res.json({ cases: page.cases.map(presentCaseSummary), nextCursor: page.nextCursor });
+    },
+  );
 
-  router.post('/', requirePermission('cases.create'), validate('body', createCaseRequestSchema), async (_req, res) => {
-    const actor = actorOf(res);
-    const kase = await createCase({ actor, input: res.locals.body as CreateCaseRequest });
-    res.status(201).json(await getCaseDetail({ actor, caseId: kase.id }));
-  });
+  router.post(
+    '/',
+    requirePermission('cases.create'),
+    validate('body', createCaseRequestSchema),
+    async (_req, res) => {
+      const actor = actorOf(res);
+      const kase = await createCase({ actor, input: res.locals.body as CreateCaseRequest });
+      res.status(201).json(await getCaseDetail({ actor, caseId: kase.id }));
+    },
+  );
 
   router.use('/:caseId', validate('params', caseParamsSchema));
 
@@ -52,24 +66,52 @@ export function casesRouter(deps: { store: FileStore }) {
     res.json(await getCaseDetail({ actor: actorOf(res), caseId: caseId(res) }));
   });
 
-  router.post('/:caseId/walk', requirePermission('cases.walk'), validate('body', walkEventRequestSchema), async (_req, res) => {
-    const body = res.locals.body as WalkEventRequest;
-    const result = await submitWalkEvent({ actor: actorOf(res), caseId: caseId(res), event: body.event, idempotencyKey: body.idempotencyKey });
-    const response: WalkEventResponse = { walk: result.walk, repeated: result.repeated };
-    res.status(result.repeated ? 200 : 201).json(response);
-  });
+  router.post(
+    '/:caseId/walk',
+    requirePermission('cases.walk'),
+    validate('body', walkEventRequestSchema),
+    async (_req, res) => {
+      const body = res.locals.body as WalkEventRequest;
+      const result = await submitWalkEvent({
+        actor: actorOf(res),
+        caseId: caseId(res),
+        event: body.event,
+        idempotencyKey: body.idempotencyKey,
+      });
+      const response: WalkEventResponse = { walk: result.walk, repeated: result.repeated };
+      res.status(result.repeated ? 200 : 201).json(response);
+    },
+  );
 
-  router.post('/:caseId/notes', requirePermission('cases.walk'), validate('body', addNoteRequestSchema), async (_req, res) => {
-    const note = await addCaseNote({ actor: actorOf(res), caseId: caseId(res), input: res.locals.body as AddNoteRequest });
-    note.actor = res.locals.user as typeof note.actor;
-    res.status(201).json(presentNote(note));
-  });
+  router.post(
+    '/:caseId/notes',
+    requirePermission('cases.walk'),
+    validate('body', addNoteRequestSchema),
+    async (_req, res) => {
+      const note = await addCaseNote({
+        actor: actorOf(res),
+        caseId: caseId(res),
+        input: res.locals.body as AddNoteRequest,
+      });
+      note.actor = res.locals.user as typeof note.actor;
+      res.status(201).json(presentNote(note));
+    },
+  );
 
-  router.put('/:caseId/findings', requirePermission('findings.edit'), validate('body', updateFindingsRequestSchema), async (_req, res) => {
-    const actor = actorOf(res);
-    await updateFindings({ actor, caseId: caseId(res), input: res.locals.body as UpdateFindingsRequest });
-    res.json(await getCaseDetail({ actor, caseId: caseId(res) }));
-  });
+  router.put(
+    '/:caseId/findings',
+    requirePermission('findings.edit'),
+    validate('body', updateFindingsRequestSchema),
+    async (_req, res) => {
+      const actor = actorOf(res);
+      await updateFindings({
+        actor,
+        caseId: caseId(res),
+        input: res.locals.body as UpdateFindingsRequest,
+      });
+      res.json(await getCaseDetail({ actor, caseId: caseId(res) }));
+    },
+  );
 
   router.post('/:caseId/diagnosed', requirePermission('cases.walk'), async (_req, res) => {
     const actor = actorOf(res);

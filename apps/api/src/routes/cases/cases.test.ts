@@ -39,8 +39,21 @@ describe('opening a case', () => {
 
   it('numbers cases per workshop and can add a new customer at intake', async () => {
     const { tech, vehicle, trees } = await setup();
-    const first = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'First complaint', treeId: trees[overheatingTreeKey] });
-    const second = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Second complaint', treeId: trees[overheatingTreeKey], newCustomer: { name: 'Demelza Rowe', phone: '01632 960999' } });
+    const first = await tech
+      .post('/api/cases')
+      .send({
+        vehicleId: vehicle.id,
+        complaint: 'First complaint',
+        treeId: trees[overheatingTreeKey],
+      });
+    const second = await tech
+      .post('/api/cases')
+      .send({
+        vehicleId: vehicle.id,
+        complaint: 'Second complaint',
+        treeId: trees[overheatingTreeKey],
+        newCustomer: { name: 'Demelza Rowe', phone: '01632 960999' },
+      });
     expect(first.body.number).toBe(1);
     expect(second.body.number).toBe(2);
     expect(second.body.customer.name).toBe('Demelza Rowe');
@@ -48,8 +61,13 @@ describe('opening a case', () => {
 
   it('refuses a tree with no published version, with a sentence saying why', async () => {
     const { tech, vehicle, trees } = await setup();
-    await TreeVersion.update({ status: 'retired', retiredAt: new Date() }, { where: { treeId: trees[overheatingTreeKey] } });
-    const res = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: trees[overheatingTreeKey] });
+    await TreeVersion.update(
+      { status: 'retired', retiredAt: new Date() },
+      { where: { treeId: trees[overheatingTreeKey] } },
+    );
+    const res = await tech
+      .post('/api/cases')
+      .send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: trees[overheatingTreeKey] });
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/no published version/);
   });
@@ -58,15 +76,31 @@ describe('opening a case', () => {
     const { tech } = await setup();
     const res = await tech.post('/api/cases').send({ complaint: 'x' });
     expect(res.status).toBe(400);
-    expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['vehicleId', 'complaint', 'treeId']));
+    expect(Object.keys(res.body.error.fields)).toEqual(
+      expect.arrayContaining(['vehicleId', 'complaint', 'treeId']),
+    );
   });
 
   it('lets only a lead assign a case to someone else', async () => {
     const { tech, vehicle, trees, people } = await setup();
-    const res = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: trees[overheatingTreeKey], assignedTo: people.lead.id });
+    const res = await tech
+      .post('/api/cases')
+      .send({
+        vehicleId: vehicle.id,
+        complaint: 'Overheats',
+        treeId: trees[overheatingTreeKey],
+        assignedTo: people.lead.id,
+      });
     expect(res.status).toBe(403);
     const lead = await signedIn(app, people.lead.email, testPassword);
-    const ok = await lead.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: trees[overheatingTreeKey], assignedTo: people.technician.id });
+    const ok = await lead
+      .post('/api/cases')
+      .send({
+        vehicleId: vehicle.id,
+        complaint: 'Overheats',
+        treeId: trees[overheatingTreeKey],
+        assignedTo: people.technician.id,
+      });
     expect(ok.status).toBe(201);
     expect(ok.body.assignee.id).toBe(people.technician.id);
   });
@@ -77,7 +111,13 @@ describe('the case list', () => {
     const { tech, vehicle, trees, people } = await setup();
     const ids: string[] = [];
     for (let i = 0; i < 7; i += 1) {
-      const r = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: `Complaint ${i}`, treeId: trees[overheatingTreeKey] });
+      const r = await tech
+        .post('/api/cases')
+        .send({
+          vehicleId: vehicle.id,
+          complaint: `Complaint ${i}`,
+          treeId: trees[overheatingTreeKey],
+        });
       ids.push(r.body.id);
     }
     const seen: string[] = [];
@@ -94,9 +134,13 @@ describe('the case list', () => {
     const lead = await signedIn(app, people.lead.email, testPassword);
     const mine = await lead.get('/api/cases').query({ scope: 'mine' });
     expect(mine.body.cases).toEqual([]);
-    const byTech = await lead.get('/api/cases').query({ technicianId: people.technician.id, limit: 100 });
+    const byTech = await lead
+      .get('/api/cases')
+      .query({ technicianId: people.technician.id, limit: 100 });
     expect(byTech.body.cases).toHaveLength(7);
-    const byPlate = await lead.get('/api/cases').query({ q: vehicle.plate?.slice(1, 5).toLowerCase() });
+    const byPlate = await lead
+      .get('/api/cases')
+      .query({ q: vehicle.plate?.slice(1, 5).toLowerCase() });
     expect(byPlate.body.cases.length).toBe(7);
     const byStatus = await lead.get('/api/cases').query({ status: 'diagnosed' });
     expect(byStatus.body.cases).toEqual([]);
@@ -106,20 +150,40 @@ describe('the case list', () => {
   it('shows nothing of another workshop, and answers 404 for its case', async () => {
     const mine = await setup();
     const theirs = await setup();
-    const theirCase = await theirs.tech.post('/api/cases').send({ vehicleId: theirs.vehicle.id, complaint: 'Theirs', treeId: theirs.trees[overheatingTreeKey] });
+    const theirCase = await theirs.tech
+      .post('/api/cases')
+      .send({
+        vehicleId: theirs.vehicle.id,
+        complaint: 'Theirs',
+        treeId: theirs.trees[overheatingTreeKey],
+      });
     const list = await mine.tech.get('/api/cases').query({ q: theirs.vehicle.plate ?? '' });
     expect(list.body.cases).toEqual([]);
     expect((await mine.tech.get(`/api/cases/${theirCase.body.id}`)).status).toBe(404);
     // Nor can their vehicle or tree be used for a case here.
-    const crossVehicle = await mine.tech.post('/api/cases').send({ vehicleId: theirs.vehicle.id, complaint: 'x y z', treeId: mine.trees[overheatingTreeKey] });
+    const crossVehicle = await mine.tech
+      .post('/api/cases')
+      .send({
+        vehicleId: theirs.vehicle.id,
+        complaint: 'x y z',
+        treeId: mine.trees[overheatingTreeKey],
+      });
     expect(crossVehicle.status).toBe(404);
-    const crossTree = await mine.tech.post('/api/cases').send({ vehicleId: mine.vehicle.id, complaint: 'x y z', treeId: theirs.trees[overheatingTreeKey] });
+    const crossTree = await mine.tech
+      .post('/api/cases')
+      .send({
+        vehicleId: mine.vehicle.id,
+        complaint: 'x y z',
+        treeId: theirs.trees[overheatingTreeKey],
+      });
     expect(crossTree.status).toBe(404);
   });
 
   it('keeps apprentices out of live cases', async () => {
     const { vehicle, trees, people, tech } = await setup();
-    const kase = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Live case', treeId: trees[overheatingTreeKey] });
+    const kase = await tech
+      .post('/api/cases')
+      .send({ vehicleId: vehicle.id, complaint: 'Live case', treeId: trees[overheatingTreeKey] });
     const apprentice = await signedIn(app, people.apprentice.email, testPassword);
     expect((await apprentice.get('/api/cases')).status).toBe(403);
     expect((await apprentice.get(`/api/cases/${kase.body.id}`)).status).toBe(403);

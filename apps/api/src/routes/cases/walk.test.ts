@@ -15,15 +15,29 @@ async function openCase() {
   const w = await createWorkshopWithTrees();
   const vehicle = await createVehicle(w.workshop.id);
   const tech = await signedIn(app, w.people.technician.email, testPassword);
-  const res = await tech.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats now and then on long climbs.', treeId: w.trees[overheatingTreeKey] });
+  const res = await tech
+    .post('/api/cases')
+    .send({
+      vehicleId: vehicle.id,
+      complaint: 'Overheats now and then on long climbs.',
+      treeId: w.trees[overheatingTreeKey],
+    });
   expect(res.status).toBe(201);
   return { ...w, tech, caseId: res.body.id as string };
 }
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
 
-async function answer(agent: Agent, caseId: string, step: (typeof stuckShroudPath)[number], position: number, key = randomUUID()) {
-  return agent.post(`/api/cases/${caseId}/walk`).send({ idempotencyKey: key, event: { ...step.answer, nodeId: step.nodeId, position } });
+async function answer(
+  agent: Agent,
+  caseId: string,
+  step: (typeof stuckShroudPath)[number],
+  position: number,
+  key = randomUUID(),
+) {
+  return agent
+    .post(`/api/cases/${caseId}/walk`)
+    .send({ idempotencyKey: key, event: { ...step.answer, nodeId: step.nodeId, position } });
 }
 
 describe('walking a case', () => {
@@ -37,7 +51,10 @@ describe('walking a case', () => {
     }
     const kase = await tech.get(`/api/cases/${caseId}`);
     expect(kase.body.status).toBe('in_diagnosis');
-    expect(kase.body.walk).toMatchObject({ status: 'reached-outcome', currentNodeId: stuckShroudOutcome });
+    expect(kase.body.walk).toMatchObject({
+      status: 'reached-outcome',
+      currentNodeId: stuckShroudOutcome,
+    });
     expect(kase.body.walk.path).toHaveLength(stuckShroudPath.length);
     const drop = kase.body.walk.computed.find((c: { name: string }) => c.name === 'radiatorDrop');
     expect(drop.value).toBeCloseTo(7, 6); // 52 °C in, 45 °C out: worked by hand.
@@ -54,12 +71,21 @@ describe('walking a case', () => {
     const diagnosed = await tech.post(`/api/cases/${caseId}/diagnosed`);
     expect(diagnosed.status).toBe(200);
     expect(diagnosed.body.status).toBe('diagnosed');
-    const late = await answer(tech, caseId, { nodeId: stuckShroudOutcome, answer: { type: 'answer.choice', choiceId: 'x' } }, position);
+    const late = await answer(
+      tech,
+      caseId,
+      { nodeId: stuckShroudOutcome, answer: { type: 'answer.choice', choiceId: 'x' } },
+      position,
+    );
     expect(late.status).toBe(409);
 
     const audit = await tech.get(`/api/cases/${caseId}/events`);
     expect(audit.body.events.length).toBe(stuckShroudPath.length + 1);
-    expect(audit.body.events[0]).toMatchObject({ seq: 1, kind: 'answer', actor: { name: expect.any(String) } });
+    expect(audit.body.events[0]).toMatchObject({
+      seq: 1,
+      kind: 'answer',
+      actor: { name: expect.any(String) },
+    });
   });
 
   it('accepts a retried answer once (same idempotency key) and refuses a stale one with 409', async () => {
@@ -77,7 +103,12 @@ describe('walking a case', () => {
     expect(duplicate.body.error.message).toMatch(/reload/i);
     // A second device still showing the first step.
     const lead = await signedIn(app, people.lead.email, testPassword);
-    const stale = await answer(lead, caseId, { nodeId: 'interview-pattern', answer: { type: 'answer.choice', choiceId: 'no-pattern' } }, 0);
+    const stale = await answer(
+      lead,
+      caseId,
+      { nodeId: 'interview-pattern', answer: { type: 'answer.choice', choiceId: 'no-pattern' } },
+      0,
+    );
     expect(stale.status).toBe(409);
     const kase = await tech.get(`/api/cases/${caseId}`);
     expect(kase.body.walk.path).toHaveLength(1);
@@ -86,7 +117,10 @@ describe('walking a case', () => {
 
   it('answers two concurrent submits for the same step exactly once', async () => {
     const { tech, caseId } = await openCase();
-    const [a, b] = await Promise.all([answer(tech, caseId, stuckShroudPath[0]!, 0), answer(tech, caseId, stuckShroudPath[0]!, 0)]);
+    const [a, b] = await Promise.all([
+      answer(tech, caseId, stuckShroudPath[0]!, 0),
+      answer(tech, caseId, stuckShroudPath[0]!, 0),
+    ]);
     expect([a.status, b.status].sort()).toEqual([201, 409]);
   });
 
@@ -94,26 +128,68 @@ describe('walking a case', () => {
     const { tech, caseId } = await openCase();
     await answer(tech, caseId, stuckShroudPath[0]!, 0);
     await answer(tech, caseId, stuckShroudPath[1]!, 1);
-    const back = await tech.post(`/api/cases/${caseId}/walk`).send({ idempotencyKey: randomUUID(), event: { type: 'walk.back', nodeId: 'visual-leaks', position: 2 } });
+    const back = await tech
+      .post(`/api/cases/${caseId}/walk`)
+      .send({
+        idempotencyKey: randomUUID(),
+        event: { type: 'walk.back', nodeId: 'visual-leaks', position: 2 },
+      });
     expect(back.status).toBe(201);
     expect(back.body.walk.currentNodeId).toBe('level-cold');
     expect(back.body.walk.history).toHaveLength(3);
     expect(back.body.walk.path).toHaveLength(1);
     const audit = await tech.get(`/api/cases/${caseId}/events`);
-    expect(audit.body.events.map((e: { kind: string }) => e.kind)).toEqual(['answer', 'answer', 'back']);
+    expect(audit.body.events.map((e: { kind: string }) => e.kind)).toEqual([
+      'answer',
+      'answer',
+      'back',
+    ]);
   });
 
   it('takes readings in °F and psi, and names the allowed range when a reading is impossible', async () => {
     const { tech, caseId } = await openCase();
     let position = 0;
-    for (const step of stuckShroudPath.slice(0, 9)) position = (await answer(tech, caseId, step, position)).body.walk.position;
+    for (const step of stuckShroudPath.slice(0, 9))
+      position = (await answer(tech, caseId, step, position)).body.walk.position;
     // 230 °F is 110 °C and 222.8 °F is 106 °C (°C = (°F − 32) × 5/9, the defining relation).
-    const imperial = { nodeId: 'warm-up-live-data', answer: { type: 'answer.measurement' as const, readings: { liveDataTemp: { value: 230, unit: 'degF' }, sensorHousingIr: { value: 222.8, unit: 'degF' } } } };
-    const tooHot = { nodeId: 'warm-up-live-data', answer: { type: 'answer.measurement' as const, readings: { liveDataTemp: { value: 400, unit: 'degC' }, sensorHousingIr: { value: 100, unit: 'degC' } } } };
+    const imperial = {
+      nodeId: 'warm-up-live-data',
+      answer: {
+        type: 'answer.measurement' as const,
+        readings: {
+          liveDataTemp: { value: 230, unit: 'degF' },
+          sensorHousingIr: { value: 222.8, unit: 'degF' },
+        },
+      },
+    };
+    const tooHot = {
+      nodeId: 'warm-up-live-data',
+      answer: {
+        type: 'answer.measurement' as const,
+        readings: {
+          liveDataTemp: { value: 400, unit: 'degC' },
+          sensorHousingIr: { value: 100, unit: 'degC' },
+        },
+      },
+    };
     const refused = await answer(tech, caseId, tooHot, position);
     expect(refused.status).toBe(400);
     expect(refused.body.error.fields.liveDataTemp).toMatch(/150/);
-    const wrongUnit = await answer(tech, caseId, { nodeId: 'warm-up-live-data', answer: { type: 'answer.measurement', readings: { liveDataTemp: { value: 1, unit: 'bar' }, sensorHousingIr: { value: 100, unit: 'degC' } } } }, position);
+    const wrongUnit = await answer(
+      tech,
+      caseId,
+      {
+        nodeId: 'warm-up-live-data',
+        answer: {
+          type: 'answer.measurement',
+          readings: {
+            liveDataTemp: { value: 1, unit: 'bar' },
+            sensorHousingIr: { value: 100, unit: 'degC' },
+          },
+        },
+      },
+      position,
+    );
     expect(wrongUnit.status).toBe(400);
     const ok = await answer(tech, caseId, imperial, position);
     expect(ok.status).toBe(201);
@@ -125,17 +201,41 @@ describe('walking a case', () => {
   it('keeps a case on its pinned version when a new version is published mid-case', async () => {
     const { tech, caseId, trees, people, workshop } = await openCase();
     await answer(tech, caseId, stuckShroudPath[0]!, 0);
-    const v1 = await TreeVersion.findOne({ where: { treeId: trees[overheatingTreeKey], version: 1 } });
-    const definition = structuredClone(v1!.definition) as { nodes: Record<string, { kind: string; choices?: { id: string; label: string; to: string }[] }> };
+    const v1 = await TreeVersion.findOne({
+      where: { treeId: trees[overheatingTreeKey], version: 1 },
+    });
+    const definition = structuredClone(v1!.definition) as {
+      nodes: Record<
+        string,
+        { kind: string; choices?: { id: string; label: string; to: string }[] }
+      >;
+    };
     // Version 2 drops the level check: the interview goes straight to the visual check.
-    for (const choice of definition.nodes['interview-pattern']!.choices!) choice.to = 'visual-leaks';
+    for (const choice of definition.nodes['interview-pattern']!.choices!)
+      choice.to = 'visual-leaks';
     delete definition.nodes['level-cold'];
-    await TreeVersion.create({ treeId: trees[overheatingTreeKey]!, workshopId: workshop.id, version: 2, status: 'published', definition, changeNote: 'Skip the level check', createdBy: people.lead.id, publishedBy: people.lead.id, publishedAt: new Date() });
+    await TreeVersion.create({
+      treeId: trees[overheatingTreeKey]!,
+      workshopId: workshop.id,
+      version: 2,
+      status: 'published',
+      definition,
+      changeNote: 'Skip the level check',
+      createdBy: people.lead.id,
+      publishedBy: people.lead.id,
+      publishedAt: new Date(),
+    });
     const kase = await tech.get(`/api/cases/${caseId}`);
     expect(kase.body.tree.version).toBe(1);
     expect(kase.body.walk.currentNodeId).toBe('level-cold');
     expect((await answer(tech, caseId, stuckShroudPath[1]!, 1)).status).toBe(201);
-    const fresh = await tech.post('/api/cases').send({ vehicleId: kase.body.vehicle.id, complaint: 'Another visit', treeId: trees[overheatingTreeKey] });
+    const fresh = await tech
+      .post('/api/cases')
+      .send({
+        vehicleId: kase.body.vehicle.id,
+        complaint: 'Another visit',
+        treeId: trees[overheatingTreeKey],
+      });
     expect(fresh.body.tree.version).toBe(2);
   });
 
@@ -143,18 +243,31 @@ describe('walking a case', () => {
     const { trees } = await openCase();
     const sequelize: Sequelize = testSequelize();
     await expect(
-      sequelize.query(`UPDATE tree_versions SET definition = '{}'::jsonb WHERE tree_id = '${trees[overheatingTreeKey]}' AND version = 1`),
+      sequelize.query(
+        `UPDATE tree_versions SET definition = '{}'::jsonb WHERE tree_id = '${trees[overheatingTreeKey]}' AND version = 1`,
+      ),
     ).rejects.toThrow(/cannot be changed/);
-    await expect(sequelize.query(`DELETE FROM tree_versions WHERE tree_id = '${trees[overheatingTreeKey]}'`)).rejects.toThrow(/cannot be deleted/);
+    await expect(
+      sequelize.query(`DELETE FROM tree_versions WHERE tree_id = '${trees[overheatingTreeKey]}'`),
+    ).rejects.toThrow(/cannot be deleted/);
   });
 
   it('saves edited findings with revision checks, and refuses a stale save', async () => {
     const { tech, caseId } = await openCase();
     let position = 0;
-    for (const step of stuckShroudPath) position = (await answer(tech, caseId, step, position)).body.walk.position;
+    for (const step of stuckShroudPath)
+      position = (await answer(tech, caseId, step, position)).body.walk.position;
     const kase = await tech.get(`/api/cases/${caseId}`);
     const f = kase.body.findings;
-    const edit = { revision: f.revision, concern: f.concern, cause: f.cause, correction: `${f.correction} Customer approved by phone.`, parts: [...f.parts, { description: 'Coolant, 50 % pre-mix', quantity: 6, partNumber: null }], labour: f.labour, followUps: f.followUps };
+    const edit = {
+      revision: f.revision,
+      concern: f.concern,
+      cause: f.cause,
+      correction: `${f.correction} Customer approved by phone.`,
+      parts: [...f.parts, { description: 'Coolant, 50 % pre-mix', quantity: 6, partNumber: null }],
+      labour: f.labour,
+      followUps: f.followUps,
+    };
     const saved = await tech.put(`/api/cases/${caseId}/findings`).send(edit);
     expect(saved.status).toBe(200);
     expect(saved.body.findings.revision).toBe(f.revision + 1);
@@ -162,7 +275,9 @@ describe('walking a case', () => {
     const stale = await tech.put(`/api/cases/${caseId}/findings`).send(edit);
     expect(stale.status).toBe(409);
     expect(stale.body.error.message).toMatch(/reload/);
-    const bad = await tech.put(`/api/cases/${caseId}/findings`).send({ ...edit, revision: f.revision + 1, parts: [{ description: '', quantity: -1 }] });
+    const bad = await tech
+      .put(`/api/cases/${caseId}/findings`)
+      .send({ ...edit, revision: f.revision + 1, parts: [{ description: '', quantity: -1 }] });
     expect(bad.status).toBe(400);
   });
 
@@ -174,18 +289,39 @@ describe('walking a case', () => {
     expect(kase.status).toBe(200);
     expect(kase.body.can).toEqual({ walk: false, editFindings: false, markDiagnosed: false });
     expect((await answer(advisor, caseId, stuckShroudPath[1]!, 1)).status).toBe(403);
-    expect((await advisor.post(`/api/cases/${caseId}/notes`).send({ idempotencyKey: randomUUID(), text: 'Hi' })).status).toBe(403);
+    expect(
+      (
+        await advisor
+          .post(`/api/cases/${caseId}/notes`)
+          .send({ idempotencyKey: randomUUID(), text: 'Hi' })
+      ).status,
+    ).toBe(403);
   });
 
   it('stores notes once per idempotency key, with who and when', async () => {
     const { tech, caseId } = await openCase();
     const key = randomUUID();
-    const a = await tech.post(`/api/cases/${caseId}/notes`).send({ idempotencyKey: key, nodeId: 'interview-pattern', text: 'Customer tows a caravan in summer.' });
-    const b = await tech.post(`/api/cases/${caseId}/notes`).send({ idempotencyKey: key, nodeId: 'interview-pattern', text: 'Customer tows a caravan in summer.' });
+    const a = await tech
+      .post(`/api/cases/${caseId}/notes`)
+      .send({
+        idempotencyKey: key,
+        nodeId: 'interview-pattern',
+        text: 'Customer tows a caravan in summer.',
+      });
+    const b = await tech
+      .post(`/api/cases/${caseId}/notes`)
+      .send({
+        idempotencyKey: key,
+        nodeId: 'interview-pattern',
+        text: 'Customer tows a caravan in summer.',
+      });
     expect(a.status).toBe(201);
     expect(b.body.id).toBe(a.body.id);
     const kase = await tech.get(`/api/cases/${caseId}`);
     expect(kase.body.notes).toHaveLength(1);
-    expect(kase.body.notes[0]).toMatchObject({ nodeId: 'interview-pattern', author: { name: expect.any(String) } });
+    expect(kase.body.notes[0]).toMatchObject({
+      nodeId: 'interview-pattern',
+      author: { name: expect.any(String) },
+    });
   });
 });

@@ -17,16 +17,29 @@ const customerQuerySchema = z.object({
 export function customersRouter() {
   const router = Router();
 
-  router.get('/', requirePermission('vehicles.read'), validate('query', customerQuerySchema), async (_req, res) => {
-    const { q } = res.locals.query as { q: string };
-    const customers = await searchCustomers({ actor: actorOf(res), q });
-    res.json({ customers: customers.map(presentCustomer) });
-  });
+  router.get(
+    '/',
+    requirePermission('vehicles.read'),
+    validate('query', customerQuerySchema),
+    async (_req, res) => {
+      const { q } = res.locals.query as { q: string };
+      const customers = await searchCustomers({ actor: actorOf(res), q });
+      res.json({ customers: customers.map(presentCustomer) });
+    },
+  );
 
-  router.post('/', requirePermission('vehicles.write'), validate('body', customerInputSchema), async (_req, res) => {
-    const customer = await createCustomer({ actor: actorOf(res), input: res.locals.body as CustomerInput });
-    res.status(201).json(presentCustomer(customer));
-  });
+  router.post(
+    '/',
+    requirePermission('vehicles.write'),
+    validate('body', customerInputSchema),
+    async (_req, res) => {
+      const customer = await createCustomer({
+        actor: actorOf(res),
+        input: res.locals.body as CustomerInput,
+      });
+      res.status(201).json(presentCustomer(customer));
+    },
+  );
 
   return router;
 }

@@ -13,7 +13,9 @@ describe('GET /api/health', () => {
 
   it('reports the database down with 503', async () => {
     // A real connection attempt to a port where nothing listens.
-    const unreachable = createSequelize('postgres://postgres:x@127.0.0.1:1/heatpath_test', { poolMax: 1 });
+    const unreachable = createSequelize('postgres://postgres:x@127.0.0.1:1/heatpath_test', {
+      poolMax: 1,
+    });
     const res = await supertest(testApp({}, unreachable)).get('/api/health');
     expect(res.status).toBe(503);
     expect(res.body).toEqual({ status: 'degraded', db: 'down' });

@@ -14,14 +14,18 @@ export function meRouter() {
     res.json(presentMe(userOf(res)));
   });
 
-  router.patch('/preferences', validate('body', updatePreferencesRequestSchema), async (_req, res) => {
-    const updated = await updatePreferences({
-      actor: actorOf(res),
-      input: res.locals.body as UpdatePreferencesRequest,
-    });
-    updated.workshop = userOf(res).workshop;
-    res.json(presentMe(updated));
-  });
+  router.patch(
+    '/preferences',
+    validate('body', updatePreferencesRequestSchema),
+    async (_req, res) => {
+      const updated = await updatePreferences({
+        actor: actorOf(res),
+        input: res.locals.body as UpdatePreferencesRequest,
+      });
+      updated.workshop = userOf(res).workshop;
+      res.json(presentMe(updated));
+    },
+  );
 
   return router;
 }

@@ -9,8 +9,14 @@ describe('/api/me', () => {
   it('starts with metric units and remembers a change across sessions', async () => {
     const { people } = await createWorkshop();
     const first = await signedIn(app, people.technician.email, testPassword);
-    expect((await first.get('/api/me')).body.preferences.units).toEqual({ temperature: 'C', pressure: 'bar', volume: 'L' });
-    const res = await first.patch('/api/me/preferences').send({ units: { temperature: 'F', pressure: 'psi' } });
+    expect((await first.get('/api/me')).body.preferences.units).toEqual({
+      temperature: 'C',
+      pressure: 'bar',
+      volume: 'L',
+    });
+    const res = await first
+      .patch('/api/me/preferences')
+      .send({ units: { temperature: 'F', pressure: 'psi' } });
     expect(res.status).toBe(200);
     expect(res.body.preferences.units).toEqual({ temperature: 'F', pressure: 'psi', volume: 'L' });
     const second = await signedIn(app, people.technician.email, testPassword);

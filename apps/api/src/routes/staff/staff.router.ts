@@ -8,7 +8,11 @@ import { presentStaffMember } from '../../presenters/staff-member.presenter';
 import { createStaffMember } from '../../services/staff/create-staff-member';
 import { listStaff } from '../../services/staff/list-staff';
 import { updateStaffMember } from '../../services/staff/update-staff-member';
-import { createStaffRequestSchema, staffParamsSchema, updateStaffRequestSchema } from './staff.schema';
+import {
+  createStaffRequestSchema,
+  staffParamsSchema,
+  updateStaffRequestSchema,
+} from './staff.schema';
 
 export function staffRouter() {
   const router = Router();

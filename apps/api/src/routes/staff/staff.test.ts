@@ -14,7 +14,11 @@ describe('staff management', () => {
     const res = await lead.get('/api/staff');
     expect(res.status).toBe(200);
     const emails = res.body.staff.map((s: { email: string }) => s.email).sort();
-    expect(emails).toEqual(Object.values(mine.people).map((p) => p.email).sort());
+    expect(emails).toEqual(
+      Object.values(mine.people)
+        .map((p) => p.email)
+        .sort(),
+    );
     expect(JSON.stringify(res.body)).not.toMatch(/passwordHash|password_hash|\$2[aby]\$/);
   });
 
@@ -22,7 +26,9 @@ describe('staff management', () => {
     const { people, workshop } = await createWorkshop();
     const lead = await signedIn(app, people.lead.email, testPassword);
     const email = `new-${randomUUID().slice(0, 8)}@factory.test`;
-    const res = await lead.post('/api/staff').send({ email, name: 'Sam Ferrow', role: 'technician', password: 'a-first-password' });
+    const res = await lead
+      .post('/api/staff')
+      .send({ email, name: 'Sam Ferrow', role: 'technician', password: 'a-first-password' });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ email, name: 'Sam Ferrow', role: 'technician', active: true });
     const newcomer = await signedIn(app, email, 'a-first-password');
@@ -33,13 +39,24 @@ describe('staff management', () => {
   it('refuses a duplicate address with 409 and a short password with 400', async () => {
     const { people } = await createWorkshop();
     const lead = await signedIn(app, people.lead.email, testPassword);
-    const dup = await lead.post('/api/staff').send({ email: people.advisor.email, name: 'Dup', role: 'advisor', password: 'long-enough-pass' });
+    const dup = await lead
+      .post('/api/staff')
+      .send({
+        email: people.advisor.email,
+        name: 'Dup',
+        role: 'advisor',
+        password: 'long-enough-pass',
+      });
     expect(dup.status).toBe(409);
     expect(dup.body.error.message).toMatch(/already/);
-    const short = await lead.post('/api/staff').send({ email: 'short@factory.test', name: 'Short', role: 'advisor', password: 'short' });
+    const short = await lead
+      .post('/api/staff')
+      .send({ email: 'short@factory.test', name: 'Short', role: 'advisor', password: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.fields.password).toMatch(/at least 10/);
-    const badRole = await lead.post('/api/staff').send({ email: 'r@factory.test', name: 'R', role: 'owner', password: 'long-enough-pass' });
+    const badRole = await lead
+      .post('/api/staff')
+      .send({ email: 'r@factory.test', name: 'R', role: 'owner', password: 'long-enough-pass' });
     expect(badRole.status).toBe(400);
     expect(badRole.body.error.fields).toHaveProperty('role');
   });
@@ -61,10 +78,14 @@ describe('staff management', () => {
     const res = await lead.patch(`/api/staff/${people.advisor.id}`).send({ active: false });
     expect(res.status).toBe(200);
     expect(res.body.active).toBe(false);
-    const attempt = await agentFor(app).post('/api/auth/sign-in').send({ email: people.advisor.email, password: testPassword });
+    const attempt = await agentFor(app)
+      .post('/api/auth/sign-in')
+      .send({ email: people.advisor.email, password: testPassword });
     expect(attempt.status).toBe(401);
     const list = await lead.get('/api/staff');
-    expect(list.body.staff.find((s: { id: string }) => s.id === people.advisor.id)).toMatchObject({ active: false });
+    expect(list.body.staff.find((s: { id: string }) => s.id === people.advisor.id)).toMatchObject({
+      active: false,
+    });
     const back = await lead.patch(`/api/staff/${people.advisor.id}`).send({ active: true });
     expect(back.body.active).toBe(true);
   });
@@ -83,7 +104,9 @@ describe('staff management', () => {
     const mine = await createWorkshop();
     const theirs = await createWorkshop();
     const lead = await signedIn(app, mine.people.lead.email, testPassword);
-    const res = await lead.patch(`/api/staff/${theirs.people.technician.id}`).send({ active: false });
+    const res = await lead
+      .patch(`/api/staff/${theirs.people.technician.id}`)
+      .send({ active: false });
     expect(res.status).toBe(404);
     await theirs.people.technician.reload();
     expect(theirs.people.technician.active).toBe(true);

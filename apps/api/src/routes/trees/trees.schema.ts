@@ -9,7 +9,9 @@ export {
   saveDraftRequestSchema,
 } from '@heatpath/contracts';
 
-export const treeParamsSchema = z.object({ treeId: z.uuid({ error: 'That is not a valid tree id.' }) });
+export const treeParamsSchema = z.object({
+  treeId: z.uuid({ error: 'That is not a valid tree id.' }),
+});
 export const versionParamsSchema = treeParamsSchema.extend({
   versionId: z.uuid({ error: 'That is not a valid version id.' }),
 });

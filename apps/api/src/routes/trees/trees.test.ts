@@ -20,10 +20,17 @@ async function setup() {
 /** A case walked to the stuck-shroud outcome and marked diagnosed. */
 async function finishedCase(agent: Agent, workshopId: string, treeId: string) {
   const vehicle = await createVehicle(workshopId);
-  const kase = await agent.post('/api/cases').send({ vehicleId: vehicle.id, complaint: 'Overheats on climbs', treeId });
+  const kase = await agent
+    .post('/api/cases')
+    .send({ vehicleId: vehicle.id, complaint: 'Overheats on climbs', treeId });
   let position = 0;
   for (const step of stuckShroudPath) {
-    const r = await agent.post(`/api/cases/${kase.body.id}/walk`).send({ idempotencyKey: randomUUID(), event: { ...step.answer, nodeId: step.nodeId, position } });
+    const r = await agent
+      .post(`/api/cases/${kase.body.id}/walk`)
+      .send({
+        idempotencyKey: randomUUID(),
+        event: { ...step.answer, nodeId: step.nodeId, position },
+      });
     position = r.body.walk.position;
   }
   expect((await agent.post(`/api/cases/${kase.body.id}/diagnosed`)).status).toBe(200);
@@ -37,15 +44,22 @@ describe('tree library and drafts', () => {
     expect(res.status).toBe(200);
     expect(res.body.trees).toHaveLength(3);
     const t = res.body.trees.find((x: { key: string }) => x.key === overheatingTreeKey);
-    expect(t).toMatchObject({ latestPublished: { version: 1, status: 'published', caseCount: 0 }, draft: null });
+    expect(t).toMatchObject({
+      latestPublished: { version: 1, status: 'published', caseCount: 0 },
+      draft: null,
+    });
   });
 
   it('creates a blank tree that validates clean, and copies one', async () => {
     const { lead, treeId } = await setup();
-    const blank = await lead.post('/api/trees').send({ mode: 'blank', title: 'Fan runs all the time', symptom: 'Radiator fan never stops' });
+    const blank = await lead
+      .post('/api/trees')
+      .send({ mode: 'blank', title: 'Fan runs all the time', symptom: 'Radiator fan never stops' });
     expect(blank.status).toBe(201);
     expect(blank.body.draft).toMatchObject({ version: 1, status: 'draft', problems: [] });
-    const copy = await lead.post('/api/trees').send({ mode: 'copy', fromTreeId: treeId, title: 'Overheats (towing edition)' });
+    const copy = await lead
+      .post('/api/trees')
+      .send({ mode: 'copy', fromTreeId: treeId, title: 'Overheats (towing edition)' });
     expect(copy.status).toBe(201);
     expect((copy.body.draft.definition as Definition).title).toBe('Overheats (towing edition)');
     expect(copy.body.draft.problems).toEqual([]);
@@ -54,9 +68,19 @@ describe('tree library and drafts', () => {
   it('imports a definition with problems as a draft, listing every problem, and refuses a file that is no tree', async () => {
     const { lead } = await setup();
     const broken = {
-      format: 'heatpath.tree', formatVersion: 1, id: 'imported', title: 'Imported tree', symptom: 'Something odd', start: 'ask',
+      format: 'heatpath.tree',
+      formatVersion: 1,
+      id: 'imported',
+      title: 'Imported tree',
+      symptom: 'Something odd',
+      start: 'ask',
       nodes: {
-        ask: { kind: 'question', title: 'Ask', prompt: 'Which?', choices: [{ id: 'a', label: 'A', to: 'nowhere' }] },
+        ask: {
+          kind: 'question',
+          title: 'Ask',
+          prompt: 'Which?',
+          choices: [{ id: 'a', label: 'A', to: 'nowhere' }],
+        },
         lonely: { kind: 'outcome', title: 'Lonely', rootCause: 'x', correction: 'y' },
       },
     };
@@ -64,7 +88,9 @@ describe('tree library and drafts', () => {
     expect(res.status).toBe(201);
     const codes = res.body.draft.problems.map((p: { code: string }) => p.code);
     expect(codes).toEqual(expect.arrayContaining(['unknown-target', 'unreachable']));
-    const notATree = await lead.post('/api/trees').send({ mode: 'import', definition: { hello: 'world' } });
+    const notATree = await lead
+      .post('/api/trees')
+      .send({ mode: 'import', definition: { hello: 'world' } });
     expect(notATree.status).toBe(400);
     expect(notATree.body.error.message).toMatch(/not a Heatpath tree/);
   });
@@ -73,14 +99,24 @@ describe('tree library and drafts', () => {
     const { lead, treeId, people } = await setup();
     const draft = await lead.post(`/api/trees/${treeId}/draft`).send({});
     expect(draft.status).toBe(201);
-    expect(draft.body).toMatchObject({ version: 2, status: 'draft', revision: 1, basedOnVersion: 1 });
+    expect(draft.body).toMatchObject({
+      version: 2,
+      status: 'draft',
+      revision: 1,
+      basedOnVersion: 1,
+    });
     const mine = structuredClone(draft.body.definition) as Definition;
     mine.nodes['visual-leaks']!.prompt = 'Mine';
     const other = await signedIn(app, people.lead.email, testPassword);
     const theirs = structuredClone(draft.body.definition) as Definition;
     theirs.nodes['visual-leaks']!.prompt = 'Theirs';
-    expect((await other.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: theirs })).status).toBe(200);
-    const stale = await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: mine });
+    expect(
+      (await other.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: theirs }))
+        .status,
+    ).toBe(200);
+    const stale = await lead
+      .put(`/api/trees/${treeId}/draft`)
+      .send({ revision: 1, definition: mine });
     expect(stale.status).toBe(409);
     expect(stale.body.error.message).toMatch(/Someone else saved/);
     const now = await lead.get(`/api/trees/${treeId}/draft`);
@@ -95,10 +131,18 @@ describe('tree library and drafts', () => {
     const draft = await lead.post(`/api/trees/${treeId}/draft`).send({});
     const def = structuredClone(draft.body.definition) as Definition;
     (def.nodes['visual-leaks']!.choices as { to: string }[])[0]!.to = 'no-such-step';
-    const saved = await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: def });
+    const saved = await lead
+      .put(`/api/trees/${treeId}/draft`)
+      .send({ revision: 1, definition: def });
     expect(saved.status).toBe(200);
-    expect(saved.body.problems).toEqual(expect.arrayContaining([expect.objectContaining({ code: 'unknown-target', nodeId: 'visual-leaks' })]));
-    const publish = await lead.post(`/api/trees/${treeId}/draft/publish`).send({ revision: 2, changeNote: 'Broken on purpose' });
+    expect(saved.body.problems).toEqual(
+      expect.arrayContaining([
+        expect.objectContaining({ code: 'unknown-target', nodeId: 'visual-leaks' }),
+      ]),
+    );
+    const publish = await lead
+      .post(`/api/trees/${treeId}/draft/publish`)
+      .send({ revision: 2, changeNote: 'Broken on purpose' });
     expect(publish.status).toBe(409);
     expect(publish.body.error.message).toMatch(/problem\(s\) to fix/);
   });
@@ -109,22 +153,43 @@ describe('tree library and drafts', () => {
     const def = structuredClone(draft.body.definition) as Definition;
     def.nodes['visual-leaks']!.prompt = 'Look under the car and around the engine bay for coolant.';
     await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: def });
-    const published = await lead.post(`/api/trees/${treeId}/draft/publish`).send({ revision: 2, changeNote: 'Clearer leak prompt' });
+    const published = await lead
+      .post(`/api/trees/${treeId}/draft/publish`)
+      .send({ revision: 2, changeNote: 'Clearer leak prompt' });
     expect(published.status).toBe(200);
-    expect(published.body).toMatchObject({ version: 2, status: 'published', changeNote: 'Clearer leak prompt', publishedBy: { id: people.lead.id } });
+    expect(published.body).toMatchObject({
+      version: 2,
+      status: 'published',
+      changeNote: 'Clearer leak prompt',
+      publishedBy: { id: people.lead.id },
+    });
     // No draft any more: nothing to save into; the published version stays as it was.
-    expect((await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 2, definition: def })).status).toBe(404);
+    expect(
+      (await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 2, definition: def })).status,
+    ).toBe(404);
     const library = await lead.get(`/api/trees/${treeId}`);
     const v1 = library.body.versions.find((v: { version: number }) => v.version === 1);
-    const diff = await lead.get(`/api/trees/${treeId}/diff`).query({ from: v1.id, to: published.body.id });
+    const diff = await lead
+      .get(`/api/trees/${treeId}/diff`)
+      .query({ from: v1.id, to: published.body.id });
     expect(diff.status).toBe(200);
     expect(diff.body.diff.changed).toEqual([
-      expect.objectContaining({ nodeId: 'visual-leaks', changes: [expect.objectContaining({ field: 'Question', after: 'Look under the car and around the engine bay for coolant.' })] }),
+      expect.objectContaining({
+        nodeId: 'visual-leaks',
+        changes: [
+          expect.objectContaining({
+            field: 'Question',
+            after: 'Look under the car and around the engine bay for coolant.',
+          }),
+        ],
+      }),
     ]);
     const retired = await lead.post(`/api/trees/${treeId}/versions/${v1.id}/retire`);
     expect(retired.body.status).toBe('retired');
     const exported = await lead.get(`/api/trees/${treeId}/versions/${published.body.id}/export`);
-    expect(exported.headers['content-disposition']).toMatch(/attachment; filename=".*-v2\.heatpath-tree\.json"/);
+    expect(exported.headers['content-disposition']).toMatch(
+      /attachment; filename=".*-v2\.heatpath-tree\.json"/,
+    );
     expect(JSON.parse(exported.text).nodes['visual-leaks'].prompt).toMatch(/Look under the car/);
   });
 
@@ -132,33 +197,56 @@ describe('tree library and drafts', () => {
     const { lead, treeId, workshop } = await setup();
     const kase = await finishedCase(lead, workshop.id, treeId);
     const other = await finishedCase(lead, workshop.id, treeId);
-    expect((await lead.put(`/api/trees/${treeId}/regression-set`).send({ caseIds: [kase.id] })).status).toBe(200);
+    expect(
+      (await lead.put(`/api/trees/${treeId}/regression-set`).send({ caseIds: [kase.id] })).status,
+    ).toBe(200);
 
     const draft = await lead.post(`/api/trees/${treeId}/draft`).send({});
     const def = structuredClone(draft.body.definition) as Definition;
     // The shroud answer now leads to the impeller check instead of the stuck-shroud finding.
-    (def.nodes['shroud-inspection']!.choices as { id: string; to: string }[]).find((c) => c.id === 'stuck-out')!.to = 'impeller-inspection';
-    delete def.nodes[stuckShroudOutcome];
+    (def.nodes['shroud-inspection']!.choices as { id: string; to: string }[]).find(
+      (c) => c.id === 'stuck-out',
+    )!.to = 'impeller-inspection';
+    delete def.nodes['pump-shroud-stuck'];
     await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: def });
 
     const report = await lead.post(`/api/trees/${treeId}/draft/regression`);
     expect(report.status, report.text).toBe(200);
     const mine = report.body.results.find((r: { caseId: string }) => r.caseId === kase.id);
-    expect(mine).toMatchObject({ verdict: 'no-outcome', inRegressionSet: true, expectedOutcome: stuckShroudOutcome, fromVersion: 1 });
-    expect(report.body.results.find((r: { caseId: string }) => r.caseId === other.id).inRegressionSet).toBe(false);
+    expect(mine).toMatchObject({
+      verdict: 'no-outcome',
+      inRegressionSet: true,
+      expectedOutcome: stuckShroudOutcome,
+      fromVersion: 1,
+    });
+    expect(
+      report.body.results.find((r: { caseId: string }) => r.caseId === other.id).inRegressionSet,
+    ).toBe(false);
 
     // Make the answer lead to a different finding outright.
-    (def.nodes['shroud-inspection']!.choices as { id: string; to: string }[]).find((c) => c.id === 'stuck-out')!.to = 'pump-impeller-not-circulating';
+    (def.nodes['shroud-inspection']!.choices as { id: string; to: string }[]).find(
+      (c) => c.id === 'stuck-out',
+    )!.to = 'pump-impeller-not-circulating';
     await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 2, definition: def });
     const second = await lead.post(`/api/trees/${treeId}/draft/regression`);
-    expect(second.body.results.find((r: { caseId: string }) => r.caseId === kase.id)).toMatchObject({ verdict: 'different-outcome', newOutcome: 'pump-impeller-not-circulating' });
+    expect(second.body.results.find((r: { caseId: string }) => r.caseId === kase.id)).toMatchObject(
+      { verdict: 'different-outcome', newOutcome: 'pump-impeller-not-circulating' },
+    );
 
-    const refused = await lead.post(`/api/trees/${treeId}/draft/publish`).send({ revision: 3, changeNote: 'Shroud path rethought' });
+    const refused = await lead
+      .post(`/api/trees/${treeId}/draft/publish`)
+      .send({ revision: 3, changeNote: 'Shroud path rethought' });
     expect(refused.status).toBe(409);
     expect(refused.body.error.message).toContain(kase.reference);
-    const confirmed = await lead.post(`/api/trees/${treeId}/draft/publish`).send({ revision: 3, changeNote: 'Shroud path rethought', confirmChangedOutcomes: true });
+    const confirmed = await lead
+      .post(`/api/trees/${treeId}/draft/publish`)
+      .send({ revision: 3, changeNote: 'Shroud path rethought', confirmChangedOutcomes: true });
     expect(confirmed.status).toBe(200);
-    expect(confirmed.body.publishConfirmation).toMatchObject({ changedCases: [{ caseId: kase.id, from: stuckShroudOutcome, to: 'pump-impeller-not-circulating' }] });
+    expect(confirmed.body.publishConfirmation).toMatchObject({
+      changedCases: [
+        { caseId: kase.id, from: stuckShroudOutcome, to: 'pump-impeller-not-circulating' },
+      ],
+    });
   });
 
   it('reports where a recorded walk diverges from a draft that removed its step', async () => {
@@ -166,10 +254,15 @@ describe('tree library and drafts', () => {
     const kase = await finishedCase(lead, workshop.id, treeId);
     const draft = await lead.post(`/api/trees/${treeId}/draft`).send({});
     const def = structuredClone(draft.body.definition) as Definition;
-    (def.nodes['glycol-type']!.choices as { id: string; to: string }[]).find((c) => c.id === 'ethylene')!.to = 'cap-test';
+    (def.nodes['glycol-type']!.choices as { id: string; to: string }[]).find(
+      (c) => c.id === 'ethylene',
+    )!.to = 'cap-test';
     delete def.nodes['concentration-eg'];
     const computed = (def as unknown as { computed: { name: string }[] }).computed;
-    computed.splice(computed.findIndex((c) => c.name === 'egProtection'), 1);
+    computed.splice(
+      computed.findIndex((c) => c.name === 'egProtection'),
+      1,
+    );
     await lead.put(`/api/trees/${treeId}/draft`).send({ revision: 1, definition: def });
     const report = await lead.post(`/api/trees/${treeId}/draft/regression`);
     expect(report.status, report.text).toBe(200);
@@ -190,7 +283,13 @@ describe('tree roles', () => {
       expect(list.status).toBe(200);
       expect(list.body.trees.every((t: { draft: unknown }) => t.draft === null)).toBe(true);
       expect((await agent.get(`/api/trees/${treeId}/draft`)).status).toBe(403);
-      expect((await agent.post('/api/trees').send({ mode: 'blank', title: 'Nope nope', symptom: 'Nope nope' })).status).toBe(403);
+      expect(
+        (
+          await agent
+            .post('/api/trees')
+            .send({ mode: 'blank', title: 'Nope nope', symptom: 'Nope nope' })
+        ).status,
+      ).toBe(403);
     }
     const apprentice = await signedIn(app, people.apprentice.email, testPassword);
     expect((await apprentice.get('/api/trees')).status).toBe(403);
@@ -201,6 +300,12 @@ describe('tree roles', () => {
     const theirs = await setup();
     expect((await mine.lead.get(`/api/trees/${theirs.treeId}`)).status).toBe(404);
     expect((await mine.lead.post(`/api/trees/${theirs.treeId}/draft`).send({})).status).toBe(404);
-    expect((await mine.lead.post('/api/trees').send({ mode: 'copy', fromTreeId: theirs.treeId, title: 'Stolen tree' })).status).toBe(404);
+    expect(
+      (
+        await mine.lead
+          .post('/api/trees')
+          .send({ mode: 'copy', fromTreeId: theirs.treeId, title: 'Stolen tree' })
+      ).status,
+    ).toBe(404);
   });
 });

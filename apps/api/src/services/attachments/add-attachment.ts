@@ -40,13 +40,19 @@ async function sniff(file: UploadedFile): Promise<{ mediaType: string; isImage: 
   if (detected) {
     if (imageTypes.has(detected.mime)) return { mediaType: detected.mime, isImage: true };
     if (documentTypes.has(detected.mime)) return { mediaType: detected.mime, isImage: false };
-    throw new AppError('unsupported_media_type', `Files of type ${detected.mime} cannot be attached. Attach a photo (JPEG, PNG, WebP, HEIC), a PDF, or a CSV or text log.`);
+    throw new AppError(
+      'unsupported_media_type',
+      `Files of type ${detected.mime} cannot be attached. Attach a photo (JPEG, PNG, WebP, HEIC), a PDF, or a CSV or text log.`,
+    );
   }
   // No magic number: accept only genuine text (a data-logger export), judged by its content.
   const sample = file.bytes.subarray(0, 64 * 1024);
   const looksText = textExtensions.test(file.originalName) && !sample.includes(0) && isUtf8(sample);
   if (looksText) return { mediaType: 'text/plain', isImage: false };
-  throw new AppError('unsupported_media_type', 'That file’s content is not a photo, PDF or text log, whatever its name says.');
+  throw new AppError(
+    'unsupported_media_type',
+    'That file’s content is not a photo, PDF or text log, whatever its name says.',
+  );
 }
 
 export async function addAttachment(options: {
@@ -62,11 +68,17 @@ export async function addAttachment(options: {
   const kase = await findCase({ actor, caseId });
   if (file.bytes.length === 0) throw new AppError('bad_request', 'The file is empty.');
   if (file.bytes.length > attachmentLimits.maxBytes) {
-    throw new AppError('payload_too_large', `A file can be at most ${attachmentLimits.maxBytes / 1024 / 1024} MB.`);
+    throw new AppError(
+      'payload_too_large',
+      `A file can be at most ${attachmentLimits.maxBytes / 1024 / 1024} MB.`,
+    );
   }
   const { mediaType, isImage } = await sniff(file);
   if (options.photoOnly && !isImage) {
-    throw new AppError('unsupported_media_type', 'This step asks for a photo: attach a JPEG, PNG, WebP or HEIC image.');
+    throw new AppError(
+      'unsupported_media_type',
+      'This step asks for a photo: attach a JPEG, PNG, WebP or HEIC image.',
+    );
   }
 
   const id = randomUUID();
@@ -83,7 +95,10 @@ export async function addAttachment(options: {
       const meta = await image.metadata();
       width = meta.autoOrient?.width ?? meta.width ?? null;
       height = meta.autoOrient?.height ?? meta.height ?? null;
-      const thumb = await image.resize(360, 360, { fit: 'inside', withoutEnlargement: true }).webp({ quality: 72 }).toBuffer();
+      const thumb = await image
+        .resize(360, 360, { fit: 'inside', withoutEnlargement: true })
+        .webp({ quality: 72 })
+        .toBuffer();
       thumbnailKey = `${storageKey}.thumb.webp`;
       await store.put(thumbnailKey, thumb, 'image/webp');
       stored.push(thumbnailKey);
@@ -94,7 +109,10 @@ export async function addAttachment(options: {
       const locked = await findCase({ actor, caseId, transaction, lock: true });
       const count = await Attachment.count({ where: { caseId: locked.id }, transaction });
       if (count >= attachmentLimits.maxPerCase) {
-        throw new AppError('payload_too_large', `A case can hold at most ${attachmentLimits.maxPerCase} files.`);
+        throw new AppError(
+          'payload_too_large',
+          `A case can hold at most ${attachmentLimits.maxPerCase} files.`,
+        );
       }
       const attachment = await Attachment.create(
         {
@@ -127,13 +145,19 @@ export async function addAttachment(options: {
         },
         { transaction },
       );
-      await DiagnosticCase.update({ eventCount: locked.eventCount + 1 }, { where: { id: locked.id }, transaction });
+      await DiagnosticCase.update(
+        { eventCount: locked.eventCount + 1 },
+        { where: { id: locked.id }, transaction },
+      );
       return attachment;
     });
   } catch (error) {
     await Promise.all(stored.map((key) => store.remove(key).catch(() => undefined)));
     if (error instanceof Error && /unsupported image format|Input buffer/i.test(error.message)) {
-      throw new AppError('unsupported_media_type', 'That image could not be read; it may be damaged.');
+      throw new AppError(
+        'unsupported_media_type',
+        'That image could not be read; it may be damaged.',
+      );
     }
     throw error;
   }

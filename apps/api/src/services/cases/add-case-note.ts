@@ -5,14 +5,21 @@ import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findCase } from './find-case';
 
-export async function addCaseNote(options: { actor: Actor; caseId: string; input: AddNoteRequest }) {
+export async function addCaseNote(options: {
+  actor: Actor;
+  caseId: string;
+  input: AddNoteRequest;
+}) {
   const { actor, caseId, input } = options;
   assertCan(actor, 'cases.walk');
   const sequelize = CaseEvent.sequelize;
   if (!sequelize) throw new Error('Models are not initialised.');
   return sequelize.transaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true });
-    const earlier = await CaseEvent.findOne({ where: { caseId: kase.id, idempotencyKey: input.idempotencyKey }, transaction });
+    const earlier = await CaseEvent.findOne({
+      where: { caseId: kase.id, idempotencyKey: input.idempotencyKey },
+      transaction,
+    });
     if (earlier) return earlier;
     const note = await CaseEvent.create(
       {

@@ -11,7 +11,15 @@ export function caseSearchText(parts: {
   make: string;
   model: string;
 }): string {
-  return [caseReference(parts.number), parts.plate, parts.plate ? plateKey(parts.plate) : null, parts.vin, parts.customerName, parts.make, parts.model]
+  return [
+    caseReference(parts.number),
+    parts.plate,
+    parts.plate ? plateKey(parts.plate) : null,
+    parts.vin,
+    parts.customerName,
+    parts.make,
+    parts.model,
+  ]
     .filter(Boolean)
     .join(' ')
     .toLowerCase();

@@ -25,9 +25,12 @@ export async function createCase(options: { actor: Actor; input: CreateCaseReque
     if (input.assignedTo !== actor.userId && !can(actor, 'cases.assign')) {
       throw new AppError('forbidden', 'Only a lead can assign a case to someone else.');
     }
-    const assignee = await User.findOne({ where: { id: input.assignedTo, workshopId: actor.workshopId, active: true } });
+    const assignee = await User.findOne({
+      where: { id: input.assignedTo, workshopId: actor.workshopId, active: true },
+    });
     if (!assignee) throw notFound('That technician');
-    if (!['technician', 'lead'].includes(assignee.role)) throw new AppError('bad_request', 'Cases are assigned to a technician or a lead.');
+    if (!['technician', 'lead'].includes(assignee.role))
+      throw new AppError('bad_request', 'Cases are assigned to a technician or a lead.');
     assignedTo = assignee.id;
   } else if (actor.role === 'technician') {
     assignedTo = actor.userId;
@@ -37,7 +40,9 @@ export async function createCase(options: { actor: Actor; input: CreateCaseReque
     const version = await latestPublishedVersion({ actor, treeId: input.treeId, transaction });
     let customerId = input.customerId ?? vehicle.customerId ?? null;
     let customerName = vehicle.customer?.name ?? null;
-    if (input.customerId) customerName = (await findCustomer({ actor, customerId: input.customerId, transaction })).name;
+    if (input.customerId)
+      customerName = (await findCustomer({ actor, customerId: input.customerId, transaction }))
+        .name;
     if (input.newCustomer) {
       const customer = await createCustomer({ actor, input: input.newCustomer, transaction });
       customerId = customer.id;
@@ -63,7 +68,14 @@ export async function createCase(options: { actor: Actor; input: CreateCaseReque
         assignedTo,
         createdBy: actor.userId,
         currentNodeId: startNodeOf(version.definition),
-        searchText: caseSearchText({ number, plate: vehicle.plate, vin: vehicle.vin, customerName, make: vehicle.make, model: vehicle.model }),
+        searchText: caseSearchText({
+          number,
+          plate: vehicle.plate,
+          vin: vehicle.vin,
+          customerName,
+          make: vehicle.make,
+          model: vehicle.model,
+        }),
       },
       { transaction },
     );

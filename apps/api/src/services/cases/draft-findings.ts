@@ -9,7 +9,9 @@ import type { DiagnosticCase } from '../../db/models/index';
 export function causeText(walk: WalkSummary): string {
   if (!walk.outcome) return '';
   const readings = walk.readings.map((r) => `${r.label}: ${r.display}`);
-  const computed = walk.computed.filter((c) => c.display !== null).map((c) => `${c.label}: ${c.display}`);
+  const computed = walk.computed
+    .filter((c) => c.display !== null)
+    .map((c) => `${c.label}: ${c.display}`);
   const evidence = [...readings, ...computed];
   return evidence.length
     ? `${walk.outcome.rootCause}\n\nKey readings: ${evidence.join('; ')}.`
@@ -30,18 +32,37 @@ export async function draftFindings(options: {
     concern: kase.complaint,
     cause: causeText(walk),
     correction: outcome.correction,
-    parts: outcome.parts.map((p) => ({ description: p.description, quantity: p.quantity, partNumber: null })),
+    parts: outcome.parts.map((p) => ({
+      description: p.description,
+      quantity: p.quantity,
+      partNumber: null,
+    })),
     labour: outcome.labour.map((l) => ({ operation: l.operation, hours: l.hours })),
     followUps: [...outcome.followUps],
-    readings: walk.readings.map((r) => ({ nodeId: r.nodeId, label: r.label, value: r.canonical.value, unit: r.canonical.unit })),
+    readings: walk.readings.map((r) => ({
+      nodeId: r.nodeId,
+      label: r.label,
+      value: r.canonical.value,
+      unit: r.canonical.unit,
+    })),
   };
-  const existing = await Finding.findOne({ where: { caseId: kase.id }, transaction, lock: transaction.LOCK.UPDATE });
+  const existing = await Finding.findOne({
+    where: { caseId: kase.id },
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
   if (!existing) {
-    return Finding.create({ ...draft, caseId: kase.id, workshopId: kase.workshopId, updatedBy: actorId }, { transaction });
+    return Finding.create(
+      { ...draft, caseId: kase.id, workshopId: kase.workshopId, updatedBy: actorId },
+      { transaction },
+    );
   }
   if (existing.outcomeNodeId === outcome.id) {
     // Same outcome reached again (after a step back): keep the technician's edits, refresh readings.
     return existing.update({ readings: draft.readings }, { transaction });
   }
-  return existing.update({ ...draft, revision: existing.revision + 1, updatedBy: actorId }, { transaction });
+  return existing.update(
+    { ...draft, revision: existing.revision + 1, updatedBy: actorId },
+    { transaction },
+  );
 }

@@ -32,7 +32,9 @@ export async function getCaseDetail(options: { actor: Actor; caseId: string }) {
       attachment,
       uploader: (attachment as Attachment & { uploader?: User }).uploader,
     })),
-    findings: finding ? { finding, editor: (finding as Finding & { editor?: User }).editor ?? null } : null,
+    findings: finding
+      ? { finding, editor: (finding as Finding & { editor?: User }).editor ?? null }
+      : null,
     actor,
   });
 }

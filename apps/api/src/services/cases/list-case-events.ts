@@ -11,7 +11,8 @@ function summaryOf(e: CaseEvent): string {
     case 'answer': {
       const event = p.event as { type?: string; choiceId?: string; result?: string } | undefined;
       if (event?.type === 'answer.choice') return `Answered "${event.choiceId}"`;
-      if (event?.type === 'answer.procedure') return event.result === 'done' ? 'Marked done' : 'Could not do';
+      if (event?.type === 'answer.procedure')
+        return event.result === 'done' ? 'Marked done' : 'Could not do';
       return 'Entered readings';
     }
     case 'back':
@@ -29,7 +30,10 @@ function summaryOf(e: CaseEvent): string {
   }
 }
 
-export async function listCaseEvents(options: { actor: Actor; caseId: string }): Promise<CaseAuditEntry[]> {
+export async function listCaseEvents(options: {
+  actor: Actor;
+  caseId: string;
+}): Promise<CaseAuditEntry[]> {
   assertCan(options.actor, 'cases.read');
   const kase = await findCase(options);
   const events = await CaseEvent.findAll({

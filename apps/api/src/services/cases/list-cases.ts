@@ -18,7 +18,10 @@ function decodeCursor(cursor: string) {
   try {
     return cursorSchema.parse(JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8')));
   } catch {
-    throw new AppError('bad_request', 'That page link is not valid; start again from the first page.');
+    throw new AppError(
+      'bad_request',
+      'That page link is not valid; start again from the first page.',
+    );
   }
 }
 

@@ -18,11 +18,17 @@ export async function markDiagnosed(options: { actor: Actor; caseId: string }) {
     }
     const walk = await walkOf(kase, transaction);
     if (walk.status !== 'reached-outcome') {
-      throw new AppError('conflict', 'The walk has not reached a finding yet; finish the checks first.');
+      throw new AppError(
+        'conflict',
+        'The walk has not reached a finding yet; finish the checks first.',
+      );
     }
     const finding = await Finding.findOne({ where: { caseId: kase.id }, transaction });
     if (!finding || finding.outcomeNodeId !== walk.currentNodeId) {
-      throw new AppError('conflict', 'The findings do not match the outcome reached; reload the case.');
+      throw new AppError(
+        'conflict',
+        'The findings do not match the outcome reached; reload the case.',
+      );
     }
     await CaseEvent.create(
       {
@@ -37,6 +43,9 @@ export async function markDiagnosed(options: { actor: Actor; caseId: string }) {
       },
       { transaction },
     );
-    await kase.update({ status: 'diagnosed', diagnosedAt: new Date(), eventCount: kase.eventCount + 1 }, { transaction });
+    await kase.update(
+      { status: 'diagnosed', diagnosedAt: new Date(), eventCount: kase.eventCount + 1 },
+      { transaction },
+    );
   });
 }

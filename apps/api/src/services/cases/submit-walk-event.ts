@@ -32,7 +32,9 @@ export async function submitWalkEvent(options: {
 
   return sequelize.transaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true, bare: true });
-    const tree = await compiledPublishedTree(kase.treeVersionId, (id) => TreeVersion.findByPk(id, { transaction }));
+    const tree = await compiledPublishedTree(kase.treeVersionId, (id) =>
+      TreeVersion.findByPk(id, { transaction }),
+    );
     const { events, keySeen } = await walkEventsAndKey(kase.id, idempotencyKey, transaction);
 
     const replay = replayWalk(tree, events);
@@ -45,18 +47,33 @@ export async function submitWalkEvent(options: {
     if (keySeen) return { walk: summary(), repeated: true };
 
     if (kase.status === 'diagnosed' || kase.status === 'closed') {
-      throw new AppError('conflict', `This case is already ${kase.status === 'closed' ? 'closed' : 'diagnosed'}; reopen it before changing the walk.`);
+      throw new AppError(
+        'conflict',
+        `This case is already ${kase.status === 'closed' ? 'closed' : 'diagnosed'}; reopen it before changing the walk.`,
+      );
     }
     if (replay.divergence) {
-      throw new AppError('conflict', `This case's record no longer fits its tree (${replay.divergence.reason}); ask a lead to look at it.`);
+      throw new AppError(
+        'conflict',
+        `This case's record no longer fits its tree (${replay.divergence.reason}); ask a lead to look at it.`,
+      );
     }
     const result = applyWalkEvent(tree, replay.snapshot, options.event);
     if (!result.ok) {
       const r = result.rejection;
       if (r.stale) {
-        throw new AppError('conflict', /reload/i.test(r.message) ? r.message : `${r.message} The case has moved on, perhaps on another device: reload to see where it stands.`);
+        throw new AppError(
+          'conflict',
+          /reload/i.test(r.message)
+            ? r.message
+            : `${r.message} The case has moved on, perhaps on another device: reload to see where it stands.`,
+        );
       }
-      throw new AppError(r.code === 'malformed-event' ? 'bad_request' : 'validation_failed', r.message, r.fields ? { ...r.fields } : undefined);
+      throw new AppError(
+        r.code === 'malformed-event' ? 'bad_request' : 'validation_failed',
+        r.message,
+        r.fields ? { ...r.fields } : undefined,
+      );
     }
     const stored: WalkEvent = result.event;
     await CaseEvent.create(

@@ -42,12 +42,17 @@ export async function walkEventsAndKey(
     transaction,
   })) as unknown as { kind: string; payload: { event?: unknown }; idempotencyKey: string | null }[];
   return {
-    events: rows.filter((r) => r.kind === 'answer' || r.kind === 'back').map((r) => r.payload.event),
+    events: rows
+      .filter((r) => r.kind === 'answer' || r.kind === 'back')
+      .map((r) => r.payload.event),
     keySeen: rows.some((r) => r.idempotencyKey === idempotencyKey),
   };
 }
 
-export async function walkOf(kase: DiagnosticCase, transaction?: Transaction): Promise<WalkSummary> {
+export async function walkOf(
+  kase: DiagnosticCase,
+  transaction?: Transaction,
+): Promise<WalkSummary> {
   if (!kase.treeVersion) throw new Error('walkOf needs the tree version loaded.');
   const tree = compiledTreeOf(kase.treeVersion);
   return summariseWalk(tree, await walkEventsOf(kase.id, transaction));

@@ -5,7 +5,11 @@ import { Customer } from '../../db/models/index';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 
-export async function createCustomer(options: { actor: Actor; input: CustomerInput; transaction?: Transaction }) {
+export async function createCustomer(options: {
+  actor: Actor;
+  input: CustomerInput;
+  transaction?: Transaction;
+}) {
   assertCan(options.actor, 'vehicles.write');
   const { name, phone, email } = options.input;
   return Customer.create(

@@ -7,7 +7,10 @@ import type { Actor } from '../../policies/permissions';
 export async function searchCustomers(options: { actor: Actor; q: string }) {
   assertCan(options.actor, 'vehicles.read');
   return Customer.findAll({
-    where: { workshopId: options.actor.workshopId, name: { [Op.iLike]: `%${options.q.replace(/[%_\\]/g, '\\$&')}%` } },
+    where: {
+      workshopId: options.actor.workshopId,
+      name: { [Op.iLike]: `%${options.q.replace(/[%_\\]/g, '\\$&')}%` },
+    },
     order: [['name', 'ASC']],
     limit: 10,
   });

@@ -34,6 +34,11 @@ export function blankTree(options: { key: string; title: string; symptom: string
 
 /** A tree key from a title: lower-case words joined by hyphens, as node ids are. */
 export function keyFromTitle(title: string): string {
-  const key = title.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60);
+  const key = title
+    .toLowerCase()
+    .normalize('NFKD')
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 60);
   return /^[a-z]/.test(key) ? key : `tree-${key || 'new'}`;
 }

@@ -21,14 +21,35 @@ interface Envelope {
 function envelopeOf(definition: unknown): Envelope | null {
   if (!definition || typeof definition !== 'object') return null;
   const d = definition as Record<string, unknown>;
-  const ok = typeof d.id === 'string' && typeof d.title === 'string' && typeof d.symptom === 'string' && d.title.trim() && d.symptom.trim();
-  return ok ? { id: d.id as string, title: (d.title as string).slice(0, 200), symptom: (d.symptom as string).slice(0, 300) } : null;
+  const ok =
+    typeof d.id === 'string' &&
+    typeof d.title === 'string' &&
+    typeof d.symptom === 'string' &&
+    d.title.trim() &&
+    d.symptom.trim();
+  return ok
+    ? {
+        id: d.id as string,
+        title: (d.title as string).slice(0, 200),
+        symptom: (d.symptom as string).slice(0, 300),
+      }
+    : null;
 }
 
-async function freeKey(workshopId: string, wanted: string, transaction: Transaction): Promise<string> {
+async function freeKey(
+  workshopId: string,
+  wanted: string,
+  transaction: Transaction,
+): Promise<string> {
   const base = wanted.slice(0, 70);
   const taken = new Set(
-    (await Tree.findAll({ where: { workshopId, key: { [Op.like]: `${base}%` } }, attributes: ['key'], transaction })).map((t) => t.key),
+    (
+      await Tree.findAll({
+        where: { workshopId, key: { [Op.like]: `${base}%` } },
+        attributes: ['key'],
+        transaction,
+      })
+    ).map((t) => t.key),
   );
   if (!taken.has(base)) return base;
   for (let n = 2; ; n += 1) if (!taken.has(`${base}-${n}`)) return `${base}-${n}`;
@@ -46,10 +67,18 @@ export async function createTree(options: { actor: Actor; input: CreateTreeReque
       definition = blankTree({ key, title: input.title, symptom: input.symptom });
     } else if (input.mode === 'copy') {
       const source = await findTree({ actor, treeId: input.fromTreeId, transaction });
-      const latest = await TreeVersion.findOne({ where: { treeId: source.id }, order: [['version', 'DESC']], transaction });
+      const latest = await TreeVersion.findOne({
+        where: { treeId: source.id },
+        order: [['version', 'DESC']],
+        transaction,
+      });
       if (!latest) throw new AppError('conflict', 'That tree has no version to copy.');
       const key = await freeKey(actor.workshopId, keyFromTitle(input.title), transaction);
-      definition = { ...(structuredClone(latest.definition) as Record<string, unknown>), id: key, title: input.title };
+      definition = {
+        ...(structuredClone(latest.definition) as Record<string, unknown>),
+        id: key,
+        title: input.title,
+      };
     } else {
       const envelope = envelopeOf(input.definition);
       if (!envelope) {
@@ -65,9 +94,27 @@ export async function createTree(options: { actor: Actor; input: CreateTreeReque
     }
     const envelope = envelopeOf(definition);
     if (!envelope) throw new Error('created definition lacks its envelope');
-    const tree = await Tree.create({ workshopId: actor.workshopId, key: envelope.id, title: envelope.title, symptom: envelope.symptom }, { transaction });
+    const tree = await Tree.create(
+      {
+        workshopId: actor.workshopId,
+        key: envelope.id,
+        title: envelope.title,
+        symptom: envelope.symptom,
+      },
+      { transaction },
+    );
     const draft = await TreeVersion.create(
-      { treeId: tree.id, workshopId: actor.workshopId, version: 1, status: 'draft', definition, createdBy: actor.userId, publishedBy: null, publishedAt: null, changeNote: null },
+      {
+        treeId: tree.id,
+        workshopId: actor.workshopId,
+        version: 1,
+        status: 'draft',
+        definition,
+        createdBy: actor.userId,
+        publishedBy: null,
+        publishedAt: null,
+        changeNote: null,
+      },
       { transaction },
     );
     return { tree, draft };

@@ -13,18 +13,35 @@ function sequelizeOf() {
   return sequelize;
 }
 
-export async function startDraft(options: { actor: Actor; treeId: string; fromVersionId?: string }) {
+export async function startDraft(options: {
+  actor: Actor;
+  treeId: string;
+  fromVersionId?: string;
+}) {
   const { actor, treeId } = options;
   assertCan(actor, 'trees.edit');
   return sequelizeOf().transaction(async (transaction) => {
     const tree = await findTree({ actor, treeId, transaction, lock: true });
-    const existing = await TreeVersion.findOne({ where: { treeId: tree.id, status: 'draft' }, transaction });
-    if (existing) throw conflict(`There is already a draft of “${tree.title}”; open it instead of starting another.`);
+    const existing = await TreeVersion.findOne({
+      where: { treeId: tree.id, status: 'draft' },
+      transaction,
+    });
+    if (existing)
+      throw conflict(
+        `There is already a draft of “${tree.title}”; open it instead of starting another.`,
+      );
     const source = options.fromVersionId
       ? await findTreeVersion({ actor, treeId, versionId: options.fromVersionId, transaction })
-      : await TreeVersion.findOne({ where: { treeId: tree.id }, order: [['version', 'DESC']], transaction });
+      : await TreeVersion.findOne({
+          where: { treeId: tree.id },
+          order: [['version', 'DESC']],
+          transaction,
+        });
     if (!source) throw new AppError('conflict', 'That tree has no version to start a draft from.');
-    const last = (await TreeVersion.max('version', { where: { treeId: tree.id }, transaction })) as number;
+    const last = (await TreeVersion.max('version', {
+      where: { treeId: tree.id },
+      transaction,
+    })) as number;
     return TreeVersion.create(
       {
         treeId: tree.id,
@@ -43,24 +60,43 @@ export async function startDraft(options: { actor: Actor; treeId: string; fromVe
   });
 }
 
-export async function saveDraft(options: { actor: Actor; treeId: string; input: SaveDraftRequest }) {
+export async function saveDraft(options: {
+  actor: Actor;
+  treeId: string;
+  input: SaveDraftRequest;
+}) {
   const { actor, treeId, input } = options;
   assertCan(actor, 'trees.edit');
-  if (input.definition === null || typeof input.definition !== 'object' || Array.isArray(input.definition)) {
+  if (
+    input.definition === null ||
+    typeof input.definition !== 'object' ||
+    Array.isArray(input.definition)
+  ) {
     throw new AppError('validation_failed', 'The draft must be a tree definition object.');
   }
   return sequelizeOf().transaction(async (transaction) => {
     const draft = await findDraft({ actor, treeId, transaction, lock: true });
     if (draft.revision !== input.revision) {
-      throw conflict(`Someone else saved this draft after you opened it (now revision ${draft.revision}). Reload it, or compare your changes first.`);
+      throw conflict(
+        `Someone else saved this draft after you opened it (now revision ${draft.revision}). Reload it, or compare your changes first.`,
+      );
     }
     const d = input.definition as Record<string, unknown>;
     const tree = await Tree.findByPk(treeId, { transaction });
     // The tree's identity stays: a draft may rename its title, never its key.
     const definition = { ...d, id: tree?.key ?? d.id };
     await draft.update({ definition, revision: draft.revision + 1 }, { transaction });
-    if (tree && typeof d.title === 'string' && typeof d.symptom === 'string' && d.title.trim() && d.symptom.trim()) {
-      await tree.update({ title: d.title.slice(0, 200), symptom: d.symptom.slice(0, 300) }, { transaction });
+    if (
+      tree &&
+      typeof d.title === 'string' &&
+      typeof d.symptom === 'string' &&
+      d.title.trim() &&
+      d.symptom.trim()
+    ) {
+      await tree.update(
+        { title: d.title.slice(0, 200), symptom: d.symptom.slice(0, 300) },
+        { transaction },
+      );
     }
     return draft;
   });
@@ -71,7 +107,11 @@ export async function discardDraft(options: { actor: Actor; treeId: string }) {
   return sequelizeOf().transaction(async (transaction) => {
     const draft = await findDraft({ ...options, transaction, lock: true });
     const versions = await TreeVersion.count({ where: { treeId: options.treeId }, transaction });
-    if (versions === 1) throw new AppError('conflict', 'This draft is the tree’s only version; it cannot be discarded.');
+    if (versions === 1)
+      throw new AppError(
+        'conflict',
+        'This draft is the tree’s only version; it cannot be discarded.',
+      );
     await draft.destroy({ transaction });
   });
 }
@@ -79,6 +119,10 @@ export async function discardDraft(options: { actor: Actor; treeId: string }) {
 export async function retireVersion(options: { actor: Actor; treeId: string; versionId: string }) {
   assertCan(options.actor, 'trees.edit');
   const version = await findTreeVersion(options);
-  if (version.status !== 'published') throw new AppError('conflict', `Only a published version can be retired; this one is ${version.status}.`);
+  if (version.status !== 'published')
+    throw new AppError(
+      'conflict',
+      `Only a published version can be retired; this one is ${version.status}.`,
+    );
   return version.update({ status: 'retired', retiredAt: new Date() });
 }

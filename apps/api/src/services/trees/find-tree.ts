@@ -4,7 +4,12 @@ import { Tree, TreeVersion } from '../../db/models/index';
 import { notFound } from '../../errors';
 import type { Actor } from '../../policies/permissions';
 
-export async function findTree(options: { actor: Actor; treeId: string; transaction?: Transaction; lock?: boolean }) {
+export async function findTree(options: {
+  actor: Actor;
+  treeId: string;
+  transaction?: Transaction;
+  lock?: boolean;
+}) {
   const tree = await Tree.findOne({
     where: { id: options.treeId, workshopId: options.actor.workshopId },
     transaction: options.transaction,
@@ -14,7 +19,12 @@ export async function findTree(options: { actor: Actor; treeId: string; transact
   return tree;
 }
 
-export async function findTreeVersion(options: { actor: Actor; treeId: string; versionId: string; transaction?: Transaction }) {
+export async function findTreeVersion(options: {
+  actor: Actor;
+  treeId: string;
+  versionId: string;
+  transaction?: Transaction;
+}) {
   const version = await TreeVersion.findOne({
     where: { id: options.versionId, treeId: options.treeId, workshopId: options.actor.workshopId },
     transaction: options.transaction,
@@ -23,7 +33,12 @@ export async function findTreeVersion(options: { actor: Actor; treeId: string; v
   return version;
 }
 
-export async function findDraft(options: { actor: Actor; treeId: string; transaction?: Transaction; lock?: boolean }) {
+export async function findDraft(options: {
+  actor: Actor;
+  treeId: string;
+  transaction?: Transaction;
+  lock?: boolean;
+}) {
   const draft = await TreeVersion.findOne({
     where: { treeId: options.treeId, workshopId: options.actor.workshopId, status: 'draft' },
     transaction: options.transaction,

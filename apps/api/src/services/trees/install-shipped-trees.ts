@@ -4,13 +4,22 @@ import type { Transaction } from 'sequelize';
 import { shippedTrees } from '@heatpath/fault-tree/trees';
 import { Tree, TreeVersion } from '../../db/models/index';
 
-export async function installShippedTrees(options: { workshopId: string; userId: string | null; transaction?: Transaction }) {
+export async function installShippedTrees(options: {
+  workshopId: string;
+  userId: string | null;
+  transaction?: Transaction;
+}) {
   const { workshopId, userId, transaction } = options;
   const installed: TreeVersion[] = [];
   for (const definition of shippedTrees) {
     const [tree] = await Tree.findOrCreate({
       where: { workshopId, key: definition.id },
-      defaults: { workshopId, key: definition.id, title: definition.title, symptom: definition.symptom },
+      defaults: {
+        workshopId,
+        key: definition.id,
+        title: definition.title,
+        symptom: definition.symptom,
+      },
       transaction,
     });
     const existing = await TreeVersion.findOne({ where: { treeId: tree.id }, transaction });

@@ -4,7 +4,11 @@ import { Tree, TreeVersion } from '../../db/models/index';
 import { AppError, notFound } from '../../errors';
 import type { Actor } from '../../policies/permissions';
 
-export async function latestPublishedVersion(options: { actor: Actor; treeId: string; transaction?: Transaction }) {
+export async function latestPublishedVersion(options: {
+  actor: Actor;
+  treeId: string;
+  transaction?: Transaction;
+}) {
   const tree = await Tree.findOne({
     where: { id: options.treeId, workshopId: options.actor.workshopId },
     transaction: options.transaction,
@@ -15,7 +19,11 @@ export async function latestPublishedVersion(options: { actor: Actor; treeId: st
     order: [['version', 'DESC']],
     transaction: options.transaction,
   });
-  if (!version) throw new AppError('conflict', `“${tree.title}” has no published version yet; a lead must publish it before cases can use it.`);
+  if (!version)
+    throw new AppError(
+      'conflict',
+      `“${tree.title}” has no published version yet; a lead must publish it before cases can use it.`,
+    );
   version.tree = tree;
   return version;
 }

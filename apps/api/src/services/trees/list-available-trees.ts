@@ -9,7 +9,14 @@ export async function listAvailableTrees(options: { actor: Actor }): Promise<Ava
   assertCan(options.actor, 'trees.read');
   const sequelize = Tree.sequelize;
   if (!sequelize) throw new Error('Models are not initialised.');
-  const rows = await sequelize.query<{ id: string; key: string; title: string; symptom: string; version_id: string | null; version: number | null }>(
+  const rows = await sequelize.query<{
+    id: string;
+    key: string;
+    title: string;
+    symptom: string;
+    version_id: string | null;
+    version: number | null;
+  }>(
     `SELECT t.id, t.key, t.title, t.symptom, v.id AS version_id, v.version
        FROM trees t
        LEFT JOIN LATERAL (
@@ -26,6 +33,7 @@ export async function listAvailableTrees(options: { actor: Actor }): Promise<Ava
     key: r.key,
     title: r.title,
     symptom: r.symptom,
-    latestPublished: r.version_id && r.version !== null ? { id: r.version_id, version: r.version } : null,
+    latestPublished:
+      r.version_id && r.version !== null ? { id: r.version_id, version: r.version } : null,
   }));
 }

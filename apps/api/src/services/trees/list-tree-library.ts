@@ -7,7 +7,10 @@ import { presentVersionInfo } from '../../presenters/tree.presenter';
 import { assertCan, can } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 
-export async function caseCountsByVersion(workshopId: string, treeIds: string[]): Promise<Map<string, number>> {
+export async function caseCountsByVersion(
+  workshopId: string,
+  treeIds: string[],
+): Promise<Map<string, number>> {
   const sequelize = Tree.sequelize;
   if (!sequelize || treeIds.length === 0) return new Map();
   const rows = await sequelize.query<{ tree_version_id: string; n: string }>(
@@ -18,7 +21,10 @@ export async function caseCountsByVersion(workshopId: string, treeIds: string[])
   return new Map(rows.map((r) => [r.tree_version_id, Number(r.n)]));
 }
 
-export async function listTreeLibrary(options: { actor: Actor; treeId?: string }): Promise<TreeLibraryEntry[]> {
+export async function listTreeLibrary(options: {
+  actor: Actor;
+  treeId?: string;
+}): Promise<TreeLibraryEntry[]> {
   const { actor } = options;
   assertCan(actor, 'trees.read');
   const trees = await Tree.findAll({
@@ -31,12 +37,20 @@ export async function listTreeLibrary(options: { actor: Actor; treeId?: string }
     include: [{ model: User, as: 'publisher' }],
     order: [['version', 'DESC']],
   });
-  const counts = await caseCountsByVersion(actor.workshopId, trees.map((t) => t.id));
+  const counts = await caseCountsByVersion(
+    actor.workshopId,
+    trees.map((t) => t.id),
+  );
   const seesDrafts = can(actor, 'trees.edit');
   return trees.map((tree) => {
-    const mine = versions.filter((v) => v.treeId === tree.id && (seesDrafts || v.status !== 'draft'));
+    const mine = versions.filter(
+      (v) => v.treeId === tree.id && (seesDrafts || v.status !== 'draft'),
+    );
     const info = (v: TreeVersion) =>
-      presentVersionInfo(v, { caseCount: counts.get(v.id) ?? 0, publisher: (v as TreeVersion & { publisher?: User }).publisher });
+      presentVersionInfo(v, {
+        caseCount: counts.get(v.id) ?? 0,
+        publisher: (v as TreeVersion & { publisher?: User }).publisher,
+      });
     const published = mine.find((v) => v.status === 'published');
     const draft = mine.find((v) => v.status === 'draft');
     return {

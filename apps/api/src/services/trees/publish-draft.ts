@@ -11,7 +11,11 @@ import type { Actor } from '../../policies/permissions';
 import { findDraft, findTree } from './find-tree';
 import { replayRegression } from './replay-regression';
 
-export async function publishDraft(options: { actor: Actor; treeId: string; input: PublishDraftRequest }) {
+export async function publishDraft(options: {
+  actor: Actor;
+  treeId: string;
+  input: PublishDraftRequest;
+}) {
   const { actor, treeId, input } = options;
   assertCan(actor, 'trees.edit');
   const sequelize = TreeVersion.sequelize;
@@ -20,17 +24,30 @@ export async function publishDraft(options: { actor: Actor; treeId: string; inpu
     await findTree({ actor, treeId, transaction, lock: true });
     const draft = await findDraft({ actor, treeId, transaction, lock: true });
     if (draft.revision !== input.revision) {
-      throw conflict(`The draft changed after you reviewed it (now revision ${draft.revision}); review it again before publishing.`);
+      throw conflict(
+        `The draft changed after you reviewed it (now revision ${draft.revision}); review it again before publishing.`,
+      );
     }
     const compiled = compileTree(draft.definition);
     if (!compiled.ok) {
       throw new AppError(
         'conflict',
         `The draft has ${compiled.problems.length} problem(s) to fix before it can be published: ${compiled.problems[0]?.message ?? ''}`,
-        Object.fromEntries(compiled.problems.slice(0, 50).map((p, i) => [p.nodeId ? `${p.nodeId}.${i}` : `tree.${i}`, p.message])),
+        Object.fromEntries(
+          compiled.problems
+            .slice(0, 50)
+            .map((p, i) => [p.nodeId ? `${p.nodeId}.${i}` : `tree.${i}`, p.message]),
+        ),
       );
     }
-    const report = await replayRegression({ actor, treeId, draft, compiled: compiled.tree, onlyRegressionSet: true, transaction });
+    const report = await replayRegression({
+      actor,
+      treeId,
+      draft,
+      compiled: compiled.tree,
+      onlyRegressionSet: true,
+      transaction,
+    });
     const changed = report.results.filter((r) => r.verdict !== 'same-outcome');
     let confirmation: PublishConfirmation | null = null;
     if (changed.length > 0) {
@@ -44,11 +61,22 @@ export async function publishDraft(options: { actor: Actor; treeId: string; inpu
       confirmation = {
         confirmedBy: actor.userId,
         confirmedAt: new Date().toISOString(),
-        changedCases: changed.map((c) => ({ caseId: c.caseId, reference: c.reference, from: c.expectedOutcome, to: c.newOutcome })),
+        changedCases: changed.map((c) => ({
+          caseId: c.caseId,
+          reference: c.reference,
+          from: c.expectedOutcome,
+          to: c.newOutcome,
+        })),
       };
     }
     return draft.update(
-      { status: 'published', publishedAt: new Date(), publishedBy: actor.userId, changeNote: input.changeNote, publishConfirmation: confirmation },
+      {
+        status: 'published',
+        publishedAt: new Date(),
+        publishedBy: actor.userId,
+        changeNote: input.changeNote,
+        publishConfirmation: confirmation,
+      },
       { transaction },
     );
   });

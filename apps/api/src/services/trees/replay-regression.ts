@@ -13,7 +13,9 @@ import { walkEventsOf } from '../cases/walk-state';
 
 function titleIn(definition: unknown, nodeId: string | null): string | null {
   if (!nodeId) return null;
-  const node = (definition as { nodes?: Record<string, { title?: unknown }> } | null)?.nodes?.[nodeId];
+  const node = (definition as { nodes?: Record<string, { title?: unknown }> } | null)?.nodes?.[
+    nodeId
+  ];
   return typeof node?.title === 'string' ? node.title : null;
 }
 
@@ -33,13 +35,17 @@ export async function replayRegression(options: {
   });
   const byId = new Map(versions.map((v) => [v.id, v]));
   const set = new Set(
-    (await RegressionCase.findAll({ where: { treeId, workshopId: actor.workshopId }, transaction })).map((r) => r.caseId),
+    (
+      await RegressionCase.findAll({ where: { treeId, workshopId: actor.workshopId }, transaction })
+    ).map((r) => r.caseId),
   );
   const cases = await DiagnosticCase.findAll({
     where: {
       workshopId: actor.workshopId,
       treeVersionId: { [Op.in]: [...byId.keys()] },
-      ...(options.onlyRegressionSet ? { id: { [Op.in]: [...set] } } : { status: { [Op.in]: ['diagnosed', 'closed'] } }),
+      ...(options.onlyRegressionSet
+        ? { id: { [Op.in]: [...set] } }
+        : { status: { [Op.in]: ['diagnosed', 'closed'] } }),
     },
     order: [['number', 'ASC']],
     transaction,
@@ -75,7 +81,12 @@ export async function replayRegression(options: {
         : null,
     });
   }
-  const summary: Record<RegressionVerdict, number> = { 'same-outcome': 0, 'different-outcome': 0, diverged: 0, 'no-outcome': 0 };
+  const summary: Record<RegressionVerdict, number> = {
+    'same-outcome': 0,
+    'different-outcome': 0,
+    diverged: 0,
+    'no-outcome': 0,
+  };
   for (const r of results) summary[r.verdict] += 1;
   return { draftRevision: draft.revision, results, summary };
 }

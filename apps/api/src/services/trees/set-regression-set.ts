@@ -6,7 +6,11 @@ import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findTree } from './find-tree';
 
-export async function setRegressionSet(options: { actor: Actor; treeId: string; caseIds: string[] }) {
+export async function setRegressionSet(options: {
+  actor: Actor;
+  treeId: string;
+  caseIds: string[];
+}) {
   const { actor, treeId } = options;
   assertCan(actor, 'trees.edit');
   const sequelize = RegressionCase.sequelize;
@@ -14,17 +18,33 @@ export async function setRegressionSet(options: { actor: Actor; treeId: string; 
   return sequelize.transaction(async (transaction) => {
     const tree = await findTree({ actor, treeId, transaction, lock: true });
     const caseIds = [...new Set(options.caseIds)];
-    const versionIds = (await TreeVersion.findAll({ where: { treeId: tree.id }, attributes: ['id'], transaction })).map((v) => v.id);
+    const versionIds = (
+      await TreeVersion.findAll({ where: { treeId: tree.id }, attributes: ['id'], transaction })
+    ).map((v) => v.id);
     const cases = await DiagnosticCase.findAll({
-      where: { id: { [Op.in]: caseIds }, workshopId: actor.workshopId, treeVersionId: { [Op.in]: versionIds } },
+      where: {
+        id: { [Op.in]: caseIds },
+        workshopId: actor.workshopId,
+        treeVersionId: { [Op.in]: versionIds },
+      },
       transaction,
     });
-    if (cases.length !== caseIds.length) throw new AppError('bad_request', 'Some of those cases are not cases of this tree in your workshop.');
+    if (cases.length !== caseIds.length)
+      throw new AppError(
+        'bad_request',
+        'Some of those cases are not cases of this tree in your workshop.',
+      );
     const unfinished = cases.filter((c) => c.status !== 'diagnosed' && c.status !== 'closed');
-    if (unfinished.length) throw new AppError('bad_request', 'Only diagnosed or closed cases can guard a tree.');
+    if (unfinished.length)
+      throw new AppError('bad_request', 'Only diagnosed or closed cases can guard a tree.');
     await RegressionCase.destroy({ where: { treeId: tree.id }, transaction });
     await RegressionCase.bulkCreate(
-      caseIds.map((caseId) => ({ treeId: tree.id, caseId, workshopId: actor.workshopId, addedBy: actor.userId })),
+      caseIds.map((caseId) => ({
+        treeId: tree.id,
+        caseId,
+        workshopId: actor.workshopId,
+        addedBy: actor.userId,
+      })),
       { transaction },
     );
     return caseIds;

@@ -20,7 +20,9 @@ export async function createVehicle(options: { actor: Actor; input: VehicleInput
   });
   if (clash) {
     const by = input.vin && clash.vin === input.vin ? 'VIN' : 'plate';
-    throw conflict(`A vehicle with this ${by} is already on file (${clash.make} ${clash.model}); use that one.`);
+    throw conflict(
+      `A vehicle with this ${by} is already on file (${clash.make} ${clash.model}); use that one.`,
+    );
   }
   if (input.customerId) await findCustomer({ actor, customerId: input.customerId });
   try {
@@ -40,7 +42,8 @@ export async function createVehicle(options: { actor: Actor; input: VehicleInput
     });
   } catch (error) {
     // Two intakes of the same car at once: the unique index decides.
-    if (error instanceof UniqueConstraintError) throw conflict('A vehicle with this VIN or plate is already on file; use that one.');
+    if (error instanceof UniqueConstraintError)
+      throw conflict('A vehicle with this VIN or plate is already on file; use that one.');
     throw error;
   }
 }

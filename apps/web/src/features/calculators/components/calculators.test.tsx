@@ -34,7 +34,11 @@ describe('calculators', () => {
   it('lists every calculator on its own lazily loaded screen', async () => {
     signedInAs();
     renderApp('/calculators');
-    expect(await screen.findByRole('heading', { level: 1, name: 'Calculators' })).toBeTruthy();
+    // The first test loads the lazy chunk (mathjs) for the whole file; on a busy machine that
+    // alone can take more than the default second.
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Calculators' }, { timeout: 5000 }),
+    ).toBeTruthy();
     for (const name of [
       'Coolant protection',
       'Mix adjustment',
