@@ -61,6 +61,8 @@ export const staffMemberSchema = z.object({
   name: z.string(),
   role: roleSchema,
   active: z.boolean(),
+  /** Invited by e-mail and has not set a password yet. */
+  invitationPending: z.boolean(),
   createdAt: z.string(),
 });
 export type StaffMember = z.infer<typeof staffMemberSchema>;

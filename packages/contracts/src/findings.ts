@@ -1,6 +1,9 @@
 // Findings of a diagnosed case: what goes into the repair order.
 import { z } from 'zod';
 
+/** How many photos a repair order carries at most. */
+export const findingsPhotoLimit = 6;
+
 export const partLineSchema = z.object({
   description: z.string().trim().min(1, 'Describe the part.').max(200),
   quantity: z
@@ -47,5 +50,10 @@ export const updateFindingsRequestSchema = z.object({
   parts: z.array(partLineSchema).max(100),
   labour: z.array(labourLineSchema).max(100),
   followUps: z.array(z.string().trim().min(1).max(500)).max(50),
+  /** Photos of the case chosen for the repair order; left out, the choice stays as it was. */
+  photoIds: z
+    .array(z.uuid({ error: 'That is not a photo of this case.' }))
+    .max(findingsPhotoLimit, `Choose at most ${findingsPhotoLimit} photos for the repair order.`)
+    .optional(),
 });
 export type UpdateFindingsRequest = z.infer<typeof updateFindingsRequestSchema>;

@@ -6,3 +6,5 @@ export * from './cases';
 export * from './findings';
 export * from './case-detail';
 export * from './trees';
+export * from './mail';
+export * from './repair-order';

@@ -13,7 +13,15 @@ export const permissions = {
   'cases.create': ['lead', 'technician', 'advisor'],
   'cases.walk': ['lead', 'technician'],
   'cases.assign': ['lead'],
+  // Findings: the technician (or lead) edits them until the case is diagnosed; then the advisor
+  // (or lead) reviews, edits, approves, exports and sends them. 'findings.save' lets the request
+  // in; the service decides by the case's status which of the two applies.
   'findings.edit': ['lead', 'technician'],
+  'findings.review': ['lead', 'advisor'],
+  'findings.save': ['lead', 'technician', 'advisor'],
+  // The outbox holds every e-mail Heatpath writes; the lead sees it and can retry a failed one.
+  'outbox.read': ['lead'],
+  'outbox.manage': ['lead'],
   'trees.read': ['lead', 'technician', 'advisor'],
   'trees.edit': ['lead'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -51,7 +51,6 @@ export const areas: readonly Area[] = [
     summary: {
       lead: 'Write the order of checks once, test a change against solved cases, then publish it.',
     },
-    comingWith: 'decision trees',
   },
   {
     id: 'cases',

@@ -18,8 +18,11 @@ import { AppErrorPage, NotFoundPage, RouteErrorPage, StartingUp } from './shell/
 // One module for every calculator route, so they share one lazily loaded chunk.
 const calculatorsModule = () => import('./routes/calculators');
 const caseModule = () => import('./routes/case');
+// The tree screens share two lazy chunks: the library and versions, and the editor with the graph.
+const treesModule = () => import('./routes/trees');
+const treeDraftModule = () => import('./routes/tree-draft');
 
-const comingLaterAreas: readonly AreaId[] = ['trees', 'training', 'casebook'];
+const comingLaterAreas: readonly AreaId[] = ['training', 'casebook'];
 
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
@@ -59,6 +62,41 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   loader: findingsLoader(queryClient),
                   shouldRevalidate: findingsShouldRevalidate,
                   Component: FindingsRoute,
+                },
+                {
+                  path: 'trees',
+                  lazy: async () => {
+                    const route = await treesModule();
+                    return { loader: route.treesLoader(queryClient), Component: route.TreesRoute };
+                  },
+                },
+                {
+                  path: 'trees/:treeId',
+                  lazy: async () => {
+                    const route = await treesModule();
+                    return { loader: route.treeLoader(queryClient), Component: route.TreeRoute };
+                  },
+                },
+                {
+                  path: 'trees/:treeId/compare',
+                  lazy: async () => {
+                    const route = await treesModule();
+                    return { loader: route.compareLoader(queryClient), Component: route.CompareRoute };
+                  },
+                },
+                {
+                  path: 'trees/:treeId/draft',
+                  lazy: async () => {
+                    const route = await treeDraftModule();
+                    return { loader: route.draftLoader(queryClient), Component: route.DraftRoute };
+                  },
+                },
+                {
+                  path: 'trees/:treeId/draft/publish',
+                  lazy: async () => {
+                    const route = await treeDraftModule();
+                    return { loader: route.publishLoader(queryClient), Component: route.PublishRoute };
+                  },
                 },
                 ...comingLaterAreas.map((areaId) => ({
                   path: areaId,

@@ -17,7 +17,7 @@ function tree(): CompiledTree {
 export const caseId = '00000000-0000-4000-8000-0000000000c1';
 const versionId = '00000000-0000-4000-8000-0000000000d1';
 
-type Answer = string | Record<string, { value: number; unit: string }> | 'done' | 'could-not-do';
+export type Answer = string | Record<string, { value: number; unit: string }> | 'done' | 'could-not-do';
 
 /** The events that answer the walk from its start with the given answers, in order. */
 export function eventsFor(answers: readonly Answer[]): WalkEvent[] {
@@ -45,20 +45,18 @@ export function eventsFor(answers: readonly Answer[]): WalkEvent[] {
 
 const r = (value: number, unit: string) => ({ value, unit });
 
-export const answersTo = {
-  blockTest: [
-    'idle-or-traffic',
-    { topUpLitres: r(0.3, 'L') },
-    'none-seen',
-    'ethylene',
-    { egPercent: r(50, '%') },
-    { capRating: r(1.2, 'bar'), capOpening: r(1.2, 'bar'), capHeldAfterMinute: r(1.15, 'bar') },
-    { testPressure: r(1.2, 'bar'), pressureAfterHold: r(1.18, 'bar'), holdMinutes: r(15, 'min') },
-  ],
-} satisfies Record<string, Answer[]>;
+const blockTest: Answer[] = [
+  'idle-or-traffic',
+  { topUpLitres: r(0.3, 'L') },
+  'none-seen',
+  'ethylene',
+  { egPercent: r(50, '%') },
+  { capRating: r(1.2, 'bar'), capOpening: r(1.2, 'bar'), capHeldAfterMinute: r(1.15, 'bar') },
+  { testPressure: r(1.2, 'bar'), pressureAfterHold: r(1.18, 'bar'), holdMinutes: r(15, 'min') },
+];
 
 const hoseTemps: Answer[] = [
-  ...answersTo.blockTest,
+  ...blockTest,
   'done',
   'no-gas',
   { liveDataTemp: r(105, 'degC'), sensorHousingIr: r(103, 'degC') },
@@ -70,7 +68,7 @@ const outcome: Answer[] = [
   { thermostatRated: r(87, 'degC'), thermostatOpenedAt: r(99, 'degC') },
 ];
 
-export const paths = { start: [] as Answer[], blockTest: answersTo.blockTest, hoseTemps, outcome };
+export const paths = { start: [] as Answer[], blockTest, hoseTemps, outcome };
 
 export function makeFindings(overrides: Partial<Findings> = {}): Findings {
   return {
@@ -138,7 +136,12 @@ export function makeCaseDetail(
   };
 }
 
-/** The walk after one more event, as the API's reply to it. */
+/** The walk after the given answers, as the API's reply to the last of them. */
 export function walkAfter(answers: readonly Answer[]) {
   return summariseWalk(tree(), eventsFor(answers));
+}
+
+/** The walk after exactly these events (steps back included). */
+export function walkOf(events: readonly WalkEvent[]) {
+  return summariseWalk(tree(), events);
 }

@@ -20,6 +20,8 @@ export const caseEventKinds = [
   'status',
   'attachment',
   'findings',
+  'approval',
+  'mail',
 ] as const;
 export type CaseEventKind = (typeof caseEventKinds)[number];
 

@@ -1,5 +1,6 @@
 // The findings of a diagnosed case: concern, cause, correction, lines and readings, drafted from
-// the reached outcome and edited by the technician.
+// the reached outcome, edited by the technician and reviewed by the advisor. Every save is also
+// kept as a FindingsRevision.
 import { DataTypes, Model } from 'sequelize';
 import type {
   CreationOptional,
@@ -25,6 +26,8 @@ export class Finding extends Model<InferAttributes<Finding>, InferCreationAttrib
   declare labour: FindingsLines['labour'];
   declare followUps: FindingsLines['followUps'];
   declare readings: FindingsLines['readings'];
+  /** Photos of the case chosen for the repair order, in the order they print. */
+  declare photoIds: CreationOptional<string[]>;
   declare revision: CreationOptional<number>;
   declare updatedBy: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
@@ -42,6 +45,7 @@ export class Finding extends Model<InferAttributes<Finding>, InferCreationAttrib
         labour: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         followUps: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         readings: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+        photoIds: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         revision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -1,10 +1,14 @@
 // Attaches every model to a Sequelize instance and declares their associations.
 import type { Sequelize } from 'sequelize';
+import { AccountToken } from './account-token';
 import { Attachment } from './attachment';
 import { CaseEvent } from './case-event';
 import { Customer } from './customer';
 import { DiagnosticCase } from './diagnostic-case';
 import { Finding } from './finding';
+import { FindingsRevision } from './findings-revision';
+import { OutboxAttachment } from './outbox-attachment';
+import { OutboxMessage } from './outbox-message';
 import { RegressionCase } from './regression-case';
 import { Tree } from './tree';
 import { TreeVersion } from './tree-version';
@@ -13,11 +17,15 @@ import { Vehicle } from './vehicle';
 import { Workshop } from './workshop';
 
 export {
+  AccountToken,
   Attachment,
   CaseEvent,
   Customer,
   DiagnosticCase,
   Finding,
+  FindingsRevision,
+  OutboxAttachment,
+  OutboxMessage,
   RegressionCase,
   Tree,
   TreeVersion,
@@ -39,6 +47,10 @@ export function initModels(sequelize: Sequelize): void {
     Attachment,
     Finding,
     RegressionCase,
+    FindingsRevision,
+    OutboxMessage,
+    OutboxAttachment,
+    AccountToken,
   ]) {
     model.initModel(sequelize);
   }
@@ -73,4 +85,19 @@ export function initModels(sequelize: Sequelize): void {
   RegressionCase.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
   RegressionCase.belongsTo(Workshop, fk('workshopId'));
   RegressionCase.belongsTo(User, { foreignKey: 'addedBy', as: 'adder' });
+  Finding.hasMany(FindingsRevision, { foreignKey: 'findingId', as: 'revisions' });
+  FindingsRevision.belongsTo(Finding, { foreignKey: 'findingId', as: 'finding' });
+  FindingsRevision.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  FindingsRevision.belongsTo(Workshop, fk('workshopId'));
+  FindingsRevision.belongsTo(User, { foreignKey: 'savedBy', as: 'saver' });
+  FindingsRevision.belongsTo(User, { foreignKey: 'approvedBy', as: 'approver' });
+  OutboxMessage.belongsTo(Workshop, fk('workshopId'));
+  OutboxMessage.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  OutboxMessage.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  OutboxMessage.hasMany(OutboxAttachment, { foreignKey: 'messageId', as: 'attachments' });
+  OutboxAttachment.belongsTo(OutboxMessage, { foreignKey: 'messageId', as: 'message' });
+  OutboxAttachment.belongsTo(Workshop, fk('workshopId'));
+  AccountToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  AccountToken.belongsTo(Workshop, fk('workshopId'));
+  AccountToken.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
 }

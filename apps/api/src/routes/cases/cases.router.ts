@@ -100,7 +100,7 @@ export function casesRouter(deps: { store: FileStore }) {
 
   router.put(
     '/:caseId/findings',
-    requirePermission('findings.edit'),
+    requirePermission('findings.save'),
     validate('body', updateFindingsRequestSchema),
     async (_req, res) => {
       const actor = actorOf(res);

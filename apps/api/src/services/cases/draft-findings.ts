@@ -5,6 +5,7 @@ import type { Transaction } from 'sequelize';
 import type { WalkSummary } from '@heatpath/fault-tree';
 import { Finding } from '../../db/models/index';
 import type { DiagnosticCase } from '../../db/models/index';
+import { recordFindingsRevision, sameReadings } from './record-findings-revision';
 
 export function causeText(walk: WalkSummary): string {
   if (!walk.outcome) return '';
@@ -51,18 +52,33 @@ export async function draftFindings(options: {
     transaction,
     lock: transaction.LOCK.UPDATE,
   });
+  // Every change is also kept as a revision (see record-findings-revision.ts).
+  const keep = async (finding: Finding) => {
+    await recordFindingsRevision({ finding, savedBy: actorId, transaction });
+    return finding;
+  };
   if (!existing) {
-    return Finding.create(
-      { ...draft, caseId: kase.id, workshopId: kase.workshopId, updatedBy: actorId },
-      { transaction },
+    return keep(
+      await Finding.create(
+        { ...draft, caseId: kase.id, workshopId: kase.workshopId, updatedBy: actorId },
+        { transaction },
+      ),
     );
   }
   if (existing.outcomeNodeId === outcome.id) {
     // Same outcome reached again (after a step back): keep the technician's edits, refresh readings.
-    return existing.update({ readings: draft.readings }, { transaction });
+    if (sameReadings(existing.readings, draft.readings)) return existing;
+    return keep(
+      await existing.update(
+        { readings: draft.readings, revision: existing.revision + 1, updatedBy: actorId },
+        { transaction },
+      ),
+    );
   }
-  return existing.update(
-    { ...draft, revision: existing.revision + 1, updatedBy: actorId },
-    { transaction },
+  return keep(
+    await existing.update(
+      { ...draft, photoIds: [], revision: existing.revision + 1, updatedBy: actorId },
+      { transaction },
+    ),
   );
 }

@@ -1,11 +1,15 @@
-// The technician edits the drafted findings. A save names the revision it edited; a stale one
-// gets 409 so two people cannot overwrite each other without knowing.
+// Saves edited findings: the technician (or lead) until the case is diagnosed, then the advisor
+// (or lead) reviewing them for the repair order. A save names the revision it edited; a stale
+// one gets 409 so two people cannot overwrite each other without knowing. Every save is kept as
+// a revision, and may choose the case's photos that go into the repair order.
 import type { UpdateFindingsRequest } from '@heatpath/contracts';
-import { CaseEvent, Finding } from '../../db/models/index';
+import { Op } from 'sequelize';
+import { Attachment, CaseEvent, Finding } from '../../db/models/index';
 import { AppError, conflict } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findCase } from './find-case';
+import { recordFindingsRevision } from './record-findings-revision';
 
 export async function updateFindings(options: {
   actor: Actor;
@@ -13,13 +17,15 @@ export async function updateFindings(options: {
   input: UpdateFindingsRequest;
 }) {
   const { actor, caseId, input } = options;
-  assertCan(actor, 'findings.edit');
+  assertCan(actor, 'findings.save');
   const sequelize = Finding.sequelize;
   if (!sequelize) throw new Error('Models are not initialised.');
   return sequelize.transaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true });
     if (kase.status === 'closed')
       throw new AppError('conflict', 'This case is closed; its findings can no longer change.');
+    // Before diagnosis the findings are the technician's; after it, the advisor's to review.
+    assertCan(actor, kase.status === 'diagnosed' ? 'findings.review' : 'findings.edit');
     const finding = await Finding.findOne({
       where: { caseId: kase.id },
       transaction,
@@ -35,11 +41,30 @@ export async function updateFindings(options: {
         `Someone saved these findings after you opened them (now revision ${finding.revision}); reload to see their changes.`,
       );
     }
-    const { revision: _revision, ...changes } = input;
+    const { revision: _revision, photoIds, ...changes } = input;
+    const chosen = photoIds ? [...new Set(photoIds)] : finding.photoIds;
+    if (photoIds && chosen.length > 0) {
+      const photos = await Attachment.count({
+        where: {
+          id: { [Op.in]: chosen },
+          caseId: kase.id,
+          workshopId: actor.workshopId,
+          kind: 'photo',
+        },
+        transaction,
+      });
+      if (photos !== chosen.length)
+        throw new AppError(
+          'validation_failed',
+          'Choose only photos attached to this case.',
+          { photoIds: 'Choose only photos attached to this case.' },
+        );
+    }
     await finding.update(
-      { ...changes, revision: finding.revision + 1, updatedBy: actor.userId },
+      { ...changes, photoIds: chosen, revision: finding.revision + 1, updatedBy: actor.userId },
       { transaction },
     );
+    await recordFindingsRevision({ finding, savedBy: actor.userId, transaction });
     await CaseEvent.create(
       {
         caseId: kase.id,

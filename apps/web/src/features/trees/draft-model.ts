@@ -141,8 +141,7 @@ export function addNode(tree: EditableTree, kind: NodeKind): { tree: EditableTre
 }
 
 export function deleteNode(tree: EditableTree, id: string): EditableTree {
-  const nodes = { ...tree.nodes };
-  delete nodes[id];
+  const { [id]: _deleted, ...nodes } = tree.nodes;
   return { ...tree, nodes };
 }
 
@@ -156,7 +155,7 @@ export function valueNameFrom(label: string, taken: ReadonlySet<string>): string
     .filter(Boolean);
   let name = words
     .map((word, index) =>
-      index === 0 ? word.toLowerCase() : word[0]!.toUpperCase() + word.slice(1).toLowerCase(),
+      index === 0 ? word.toLowerCase() : word.charAt(0).toUpperCase() + word.slice(1).toLowerCase(),
     )
     .join('')
     .slice(0, 40);

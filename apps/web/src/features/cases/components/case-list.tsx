@@ -2,6 +2,7 @@
 // keyset page. Filters are owned by the caller (the route keeps them in the address), so a
 // reload or a shared link shows the same list.
 import { caseStatuses, type CaseStatus, type CaseSummary } from '@heatpath/contracts';
+import { useEffect, useState } from 'react';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -18,7 +19,6 @@ export interface PersonOption {
 }
 
 interface CaseListProps {
-  /** The search text comes as typed; the list waits for a pause in typing before asking. */
   filters: CaseListFilters;
   onFiltersChange: (filters: CaseListFilters) => void;
   /** Offer "My cases" / "Whole workshop". */
@@ -41,12 +41,26 @@ export function CaseList({
   technicians,
   emptyText,
 }: CaseListProps) {
-  // The box follows every key; the server is asked once the typing pauses.
-  const settledQ = useDebouncedValue((filters.q ?? '').trim(), 350);
+  // The box keeps its own text, so no key is lost while the address catches up; the server is
+  // asked, and the address updated, once the typing pauses.
+  const addressQ = filters.q ?? '';
+  const [text, setText] = useState(addressQ);
+  const settledQ = useDebouncedValue(text.trim(), 350);
+  const [seenAddressQ, setSeenAddressQ] = useState(addressQ);
+  if (addressQ !== seenAddressQ) {
+    setSeenAddressQ(addressQ);
+    // Changed from outside (back button, a link), not by this box: show it.
+    if (addressQ !== settledQ) setText(addressQ);
+  }
+  useEffect(() => {
+    if (settledQ === text.trim() && settledQ !== addressQ) {
+      onFiltersChange({ ...filters, q: settledQ || undefined });
+    }
+  }, [settledQ, text, addressQ, filters, onFiltersChange]);
   const cases = useCases({ ...filters, q: settledQ || undefined });
 
   const rows = cases.data?.pages.flatMap((page) => page.cases) ?? [];
-  const narrowed = Boolean(filters.q || filters.status || filters.technicianId);
+  const narrowed = Boolean(settledQ || filters.status || filters.technicianId);
 
   return (
     <div className="flex flex-col gap-5">
@@ -55,10 +69,8 @@ export function CaseList({
           <TextField
             label="Search cases"
             type="search"
-            value={filters.q ?? ''}
-            onChange={(event) =>
-              onFiltersChange({ ...filters, q: event.target.value || undefined })
-            }
+            value={text}
+            onChange={(event) => setText(event.target.value)}
             placeholder="Plate, VIN, customer or case number"
             className="placeholder:text-ink-muted"
             autoComplete="off"

@@ -160,6 +160,7 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
       <TextAreaField
         label="Cause"
         rows={4}
+        className="field-sizing-content min-h-32"
         error={errors.cause?.message}
         {...form.register('cause')}
       />

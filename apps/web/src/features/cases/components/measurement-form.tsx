@@ -249,8 +249,10 @@ export function MeasurementForm({
         nextLine
       )}
 
-      <div>
-        <Button type="submit" size="large" disabled={disabled}>
+      {/* On a narrow screen long cautions can push the button below the edge; it then rides along
+          at the bottom (above the phone's menu bar) while the boxes are in view. */}
+      <div className="sticky bottom-20 z-10 -mx-1 rounded-control bg-surface p-1 md:bottom-2 lg:static lg:m-0 lg:p-0">
+        <Button type="submit" size="large" disabled={disabled} className="w-full sm:w-auto">
           {buttonLabel}
         </Button>
       </div>

@@ -1,0 +1,41 @@
+// Sets a password from an invitation or reset link. The token is spent by one conditional
+// UPDATE (unused and unexpired), so two tabs racing with the same link cannot both succeed;
+// every other open link of the person stops working too.
+import { Op, QueryTypes } from 'sequelize';
+import { AccountToken, User, Workshop } from '../../db/models/index';
+import { AppError } from '../../errors';
+import { hashPassword } from '../../lib/passwords';
+import { hashToken, tokenNoLongerValid } from './account-tokens';
+
+export async function setPasswordWithToken(options: {
+  token: string;
+  password: string;
+}): Promise<User> {
+  const sequelize = User.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised.');
+  const passwordHash = await hashPassword(options.password);
+  return sequelize.transaction(async (transaction) => {
+    const spent = await sequelize.query<{ user_id: string }>(
+      `UPDATE account_tokens SET used_at = now()
+        WHERE token_hash = $1 AND used_at IS NULL AND expires_at > now()
+      RETURNING user_id`,
+      { bind: [hashToken(options.token)], type: QueryTypes.SELECT, transaction },
+    );
+    const userId = spent[0]?.user_id;
+    const user = userId
+      ? await User.findOne({
+          where: { id: userId, active: true },
+          include: [{ model: Workshop, as: 'workshop' }],
+          transaction,
+          lock: { level: transaction.LOCK.UPDATE, of: User },
+        })
+      : null;
+    if (!user) throw new AppError('not_found', tokenNoLongerValid);
+    await user.update({ passwordHash }, { transaction });
+    await AccountToken.update(
+      { usedAt: new Date() },
+      { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction },
+    );
+    return user;
+  });
+}

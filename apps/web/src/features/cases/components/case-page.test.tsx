@@ -1,0 +1,386 @@
+import type { CaseDetail, Me } from '@heatpath/contracts';
+import { cleanup, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { errorResponse, json, makeMe, mockApi, type RecordedRequest } from '../../../test/api-mock';
+import {
+  caseId,
+  eventsFor,
+  makeCaseDetail,
+  makeFindings,
+  paths,
+  walkAfter,
+  walkOf,
+} from '../../../test/case-fixtures';
+import { renderApp } from '../../../test/render-app';
+
+afterEach(() => {
+  cleanup();
+  vi.unstubAllGlobals();
+  window.localStorage.clear();
+});
+
+const technician = makeMe({ role: 'technician' });
+
+// The case page is a lazy chunk with the fault-tree package (XState, mathjs); the first render of
+// a test file may wait for it.
+const slow = { timeout: 8000 };
+
+interface Setup {
+  me?: Me;
+  detail: CaseDetail;
+  walk?: (request: RecordedRequest, attempt: number) => Response | Promise<Response>;
+}
+
+function setup({ me = technician, detail, walk }: Setup) {
+  let current = detail;
+  let attempts = 0;
+  const api = mockApi({
+    'GET /api/me': () => json(me),
+    [`GET /api/cases/${caseId}`]: () => json(current),
+    [`GET /api/cases/${caseId}/events`]: () => json({ events: [] }),
+    [`POST /api/cases/${caseId}/walk`]: async (request) => {
+      attempts += 1;
+      const response = walk
+        ? await walk(request, attempts)
+        : errorResponse(500, 'internal', 'No handler.');
+      // Like the API, a stored answer changes what the case reads as from then on.
+      if (response.ok) {
+        const body = (await response.clone().json()) as { walk: CaseDetail['walk'] };
+        current = { ...current, walk: body.walk };
+      }
+      return response;
+    },
+  });
+  renderApp(`/cases/${caseId}`);
+  return {
+    ...api,
+    walkRequests: () => api.requests.filter((r) => r.method === 'POST' && r.path.endsWith('/walk')),
+    caseReads: () =>
+      api.requests.filter((r) => r.method === 'GET' && r.path === `/api/cases/${caseId}`),
+    setCase: (next: CaseDetail) => {
+      current = next;
+    },
+  };
+}
+
+describe('the case page', { timeout: 15_000 }, () => {
+  it('shows a step’s cautions before its instruction', async () => {
+    setup({ detail: makeCaseDetail(paths.blockTest) });
+    await screen.findByRole('heading', { level: 2, name: 'Block test for combustion gas' }, slow);
+    const cautions = screen.getByTestId('step-cautions');
+    const instruction = screen.getByTestId('step-instruction');
+    expect(
+      cautions.compareDocumentPosition(instruction) & Node.DOCUMENT_POSITION_FOLLOWING,
+    ).toBeTruthy();
+    expect(within(cautions).getByText('Caution')).toBeTruthy();
+    expect(within(cautions).getByText(/only on a cold system/)).toBeTruthy();
+    expect(within(cautions).getByText(/fan can start without warning/)).toBeTruthy();
+    expect(within(cautions).getByText(/Coolant is poisonous and tastes sweet/)).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Done' })).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Could not do' })).toBeTruthy();
+  });
+
+  it('converts readings typed in °F, works them out live and sends them as entered', async () => {
+    const { walkRequests } = setup({
+      detail: makeCaseDetail(paths.hoseTemps),
+      walk: () =>
+        json(
+          {
+            walk: walkAfter([
+              ...paths.hoseTemps,
+              {
+                radiatorInletTemp: { value: 167, unit: 'degF' },
+                radiatorOutletTemp: { value: 158, unit: 'degF' },
+              },
+            ]),
+            repeated: false,
+          },
+          201,
+        ),
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Radiator hose temperatures' }, slow);
+    await user.selectOptions(screen.getByLabelText('Unit for Radiator inlet hose'), 'degF');
+    await user.selectOptions(screen.getByLabelText('Unit for Radiator outlet hose'), 'degF');
+    await user.type(screen.getByLabelText('Radiator inlet hose'), '167');
+    await user.type(screen.getByLabelText('Radiator outlet hose'), '158');
+
+    const live = screen.getByRole('region', { name: 'Worked out as you type' });
+    // 167 °F is 75 °C and 158 °F is 70 °C: a 5 K drop, shown as 9 °F because °F was typed.
+    expect(within(live).getByText('9 °F (5 K)')).toBeTruthy();
+    // The engine read 105 °C at the last step: the inlet hose is 30 K cooler, so the thermostat is next.
+    expect(within(live).getByText('30 K', { exact: false })).toBeTruthy();
+    expect(within(live).getByText('Take the thermostat out and test it')).toBeTruthy();
+    // The range is shown in the unit being typed.
+    expect(screen.getAllByText('Allowed −40 to 302 °F')).toHaveLength(2);
+
+    await user.click(screen.getByRole('button', { name: 'Save readings' }));
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Take the thermostat out and test it' }),
+    ).toBeTruthy();
+    const sent = walkRequests()[0]?.body as { event: Record<string, unknown> };
+    expect(sent.event).toMatchObject({
+      type: 'answer.measurement',
+      nodeId: 'hose-temps',
+      readings: {
+        radiatorInletTemp: { value: 167, unit: 'degF' },
+        radiatorOutletTemp: { value: 158, unit: 'degF' },
+      },
+    });
+  });
+
+  it('flags a reading outside its range under the box, before anything is sent', async () => {
+    const { walkRequests } = setup({ detail: makeCaseDetail(paths.hoseTemps) });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Radiator hose temperatures' }, slow);
+    const inlet = screen.getByLabelText('Radiator inlet hose');
+    await user.type(inlet, '180');
+    expect(inlet.getAttribute('aria-invalid')).toBe('true');
+    expect(
+      screen.getByText(/must be between −?-?40 and 150 °C; 180 °C is outside it/),
+    ).toBeTruthy();
+    await user.type(screen.getByLabelText('Radiator outlet hose'), '70');
+    await user.click(screen.getByRole('button', { name: 'Save readings' }));
+    expect(walkRequests()).toHaveLength(0);
+  });
+
+  it('keeps an answer lost to the network and retries it with the same idempotency key', async () => {
+    const { walkRequests } = setup({
+      detail: makeCaseDetail(paths.start),
+      walk: (_request, attempt) => {
+        if (attempt === 1) throw new TypeError('Failed to fetch');
+        return json({ walk: walkAfter(['idle-or-traffic']), repeated: true }, 200);
+      },
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }, slow);
+    await user.click(
+      screen.getByRole('button', { name: 'At idle or in slow traffic; fine at speed' }),
+    );
+
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('Not saved yet');
+    expect(alert.textContent).toContain('“At idle or in slow traffic; fine at speed”');
+    // The step does not move on, and it cannot be answered twice meanwhile.
+    expect(screen.getByRole('heading', { level: 2, name: 'When does it run hot?' })).toBeTruthy();
+    expect(
+      (screen.getByRole('button', { name: 'At speed, uphill or towing' }) as HTMLButtonElement)
+        .disabled,
+    ).toBe(true);
+    expect(window.localStorage.getItem(`heatpath.pending-answer.${caseId}`)).toContain(
+      'idle-or-traffic',
+    );
+
+    await user.click(within(alert).getByRole('button', { name: 'Retry' }));
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+    ).toBeTruthy();
+    const [first, second] = walkRequests().map((r) => r.body as { idempotencyKey: string });
+    expect(first?.idempotencyKey).toMatch(/^[0-9a-f-]{36}$/);
+    expect(second?.idempotencyKey).toBe(first?.idempotencyKey);
+    expect(window.localStorage.getItem(`heatpath.pending-answer.${caseId}`)).toBeNull();
+  });
+
+  it('sends an answer kept from before a reload again, by itself', async () => {
+    const kept = {
+      key: '11111111-2222-4333-8444-555555555555',
+      event: {
+        type: 'answer.choice',
+        nodeId: 'interview-pattern',
+        position: 0,
+        choiceId: 'no-pattern',
+      },
+      label: 'No clear pattern',
+      note: null,
+      status: 'sending',
+      problem: null,
+      attempts: 1,
+    };
+    window.localStorage.setItem(`heatpath.pending-answer.${caseId}`, JSON.stringify(kept));
+    const { walkRequests } = setup({
+      detail: makeCaseDetail(paths.start),
+      walk: () => json({ walk: walkAfter(['no-pattern']), repeated: false }, 201),
+    });
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }, slow),
+    ).toBeTruthy();
+    expect((walkRequests()[0]?.body as { idempotencyKey: string }).idempotencyKey).toBe(kept.key);
+  });
+
+  it('says the case moved on when the answer is stale (409), and shows where it stands', async () => {
+    const moved = makeCaseDetail(['speed-or-load']);
+    const { caseReads, setCase } = setup({
+      detail: makeCaseDetail(paths.start),
+      walk: () => {
+        setCase(moved);
+        return errorResponse(409, 'conflict', 'The walk is no longer at this step.');
+      },
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }, slow);
+    const readsBefore = caseReads().length;
+    await user.click(screen.getByRole('button', { name: 'No clear pattern' }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('The case has moved on');
+    expect(alert.textContent).toContain('“No clear pattern” was not saved');
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+    ).toBeTruthy();
+    expect(caseReads().length).toBeGreaterThan(readsBefore);
+  });
+
+  it('steps back with an event, not by forgetting the answer', async () => {
+    const { walkRequests } = setup({
+      detail: makeCaseDetail(['idle-or-traffic']),
+      // Back at the start, with both events in the history.
+      walk: () =>
+        json(
+          {
+            walk: walkOf([
+              ...eventsFor(['idle-or-traffic']),
+              { type: 'walk.back', nodeId: 'level-cold', position: 1 },
+            ]),
+            repeated: false,
+          },
+          201,
+        ),
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }, slow);
+    await user.click(screen.getByRole('button', { name: 'Step back' }));
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }),
+    ).toBeTruthy();
+    expect(walkRequests()[0]?.body).toMatchObject({
+      event: { type: 'walk.back', nodeId: 'level-cold', position: 1 },
+    });
+  });
+
+  it('stores a procedure’s note on its step before the answer', async () => {
+    const { requests } = setup({
+      detail: makeCaseDetail(paths.blockTest),
+      walk: () => json({ walk: walkAfter([...paths.blockTest, 'done']), repeated: false }, 201),
+    });
+    mockNotes(requests);
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Block test for combustion gas' }, slow);
+    await user.click(screen.getByRole('button', { name: 'Add a note' }));
+    await user.type(screen.getByLabelText('Note on this step (optional)'), 'Fluid stayed blue.');
+    await user.click(screen.getByRole('button', { name: 'Done' }));
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Block test result' }),
+    ).toBeTruthy();
+    const posted = requests.filter((r) => r.method === 'POST').map((r) => r.path.split('/').pop());
+    expect(posted).toEqual(['notes', 'walk']);
+    expect(requests.find((r) => r.path.endsWith('/notes'))?.body).toMatchObject({
+      nodeId: 'block-test',
+      text: 'Fluid stayed blue.',
+    });
+  });
+
+  it('saves edited findings against their revision and offers a reload on a conflict', async () => {
+    const detail = makeCaseDetail(paths.outcome, {
+      findings: makeFindings(),
+      can: { walk: true, editFindings: true, markDiagnosed: true },
+    });
+    setup({ detail });
+    const saves: unknown[] = [];
+    const fetchMock = vi.mocked(fetch);
+    const original = fetchMock.getMockImplementation();
+    fetchMock.mockImplementation(async (input, init) => {
+      if (init?.method === 'PUT') {
+        saves.push(JSON.parse(String(init.body)));
+        return errorResponse(
+          409,
+          'conflict',
+          'Someone saved these findings after you opened them.',
+        );
+      }
+      return original ? original(input, init) : errorResponse(500, 'internal', 'x');
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Thermostat sticking closed' }, slow);
+    const correction = screen.getByLabelText('Correction');
+    await user.clear(correction);
+    await user.type(correction, 'Fit a new thermostat.');
+    await user.type(screen.getByLabelText('Part number of part 1'), 'TH-4471');
+    // Unsaved edits must be saved before the case is marked diagnosed.
+    expect(
+      (screen.getByRole('button', { name: 'Mark diagnosed' }) as HTMLButtonElement).disabled,
+    ).toBe(true);
+    await user.click(screen.getByRole('button', { name: 'Save findings' }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('Someone else saved these findings');
+    expect(within(alert).getByRole('button', { name: 'Reload findings' })).toBeTruthy();
+    expect(saves[0]).toMatchObject({
+      revision: 1,
+      correction: 'Fit a new thermostat.',
+      parts: [{ description: 'Thermostat with seal', quantity: 1, partNumber: 'TH-4471' }],
+      followUps: ['Recheck the level after the first drive.'],
+    });
+  });
+
+  it('shows the advisor the findings and no controls that change the case', async () => {
+    setup({
+      me: makeMe({ role: 'advisor' }),
+      detail: makeCaseDetail(paths.outcome, {
+        status: 'diagnosed',
+        diagnosedAt: '2025-03-01T10:00:00.000Z',
+        findings: makeFindings({ correction: 'Fit a new thermostat and seal.' }),
+        can: { walk: false, editFindings: false, markDiagnosed: false },
+      }),
+    });
+    const findings = await screen.findByRole('region', { name: /^Findings/ }, slow);
+    expect(within(findings).getByText('Fit a new thermostat and seal.')).toBeTruthy();
+    expect(within(findings).getByText(/Diagnosed/)).toBeTruthy();
+    for (const name of [
+      'Step back',
+      'Save findings',
+      'Mark diagnosed',
+      'Add note',
+      'Attach file',
+    ]) {
+      expect(screen.queryByRole('button', { name })).toBeNull();
+    }
+  });
+
+  it('turns an apprentice away from a live case', async () => {
+    mockApi({ 'GET /api/me': () => json(makeMe({ role: 'apprentice' })) });
+    renderApp(`/cases/${caseId}`);
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Not open to your role' }, slow),
+    ).toBeTruthy();
+  });
+});
+
+function mockNotes(requests: RecordedRequest[]) {
+  const fetchMock = vi.mocked(fetch);
+  const original = fetchMock.getMockImplementation();
+  fetchMock.mockImplementation(async (input, init) => {
+    const url = String(input);
+    if (init?.method === 'POST' && url.endsWith('/notes')) {
+      const body: unknown = JSON.parse(String(init.body));
+      requests.push({
+        method: 'POST',
+        path: new URL(url, 'http://heatpath.test').pathname,
+        headers: {},
+        body,
+        credentials: init.credentials,
+      });
+      return json(
+        {
+          id: '00000000-0000-4000-8000-0000000000b1',
+          nodeId: 'block-test',
+          text: 'Fluid stayed blue.',
+          author: { id: technician.id, name: technician.name },
+          createdAt: '2025-03-01T09:00:00.000Z',
+        },
+        201,
+      );
+    }
+    return original ? original(input, init) : errorResponse(500, 'internal', 'x');
+  });
+}

@@ -1,0 +1,122 @@
+// Words for the tree screens: hazards, quantities, units, version statuses and verdicts, and
+// how dates and readings are written.
+import type { RegressionVerdict, TreeVersionInfo, TreeVersionStatus } from '@heatpath/contracts';
+import {
+  quantityInfo,
+  unitSymbol,
+  type HazardKind,
+  type Quantity,
+  type UnitCode,
+} from '@heatpath/fault-tree';
+import type { BadgeTone } from '../../components/ui/badge';
+
+export const hazardLabels: Record<HazardKind, string> = {
+  'hot-pressurised-coolant': 'Hot coolant under pressure',
+  'hot-surface': 'Hot surfaces',
+  fan: 'Fan and belt can start',
+  glycol: 'Coolant is poisonous',
+  lifting: 'Raised vehicle',
+  'belt-drive': 'Timing-belt work',
+  'road-test': 'Road test',
+};
+
+export const quantityLabels: Record<Quantity, string> = {
+  temperature: 'Temperature',
+  temperatureDelta: 'Temperature difference',
+  pressure: 'Pressure (gauge)',
+  time: 'Time',
+  volume: 'Volume',
+  percentage: 'Percentage',
+  number: 'Plain number',
+};
+
+/** "°C", "bar"; a plain number has no unit and says so. */
+export function unitLabel(unit: UnitCode): string {
+  return (unitSymbol(unit) as string | undefined) || (unit === 'none' ? 'no unit' : String(unit));
+}
+
+// Tolerant of an imported file's unknown quantity: validation names that problem itself.
+function infoOf(quantity: Quantity) {
+  return (quantityInfo as Partial<typeof quantityInfo>)[quantity] ?? quantityInfo.number;
+}
+
+export function canonicalUnit(quantity: Quantity): UnitCode {
+  return infoOf(quantity).canonical;
+}
+
+/** "°C or °F": the units a reading of this quantity may be typed in. */
+export function entryUnitsWords(quantity: Quantity): string {
+  const units = infoOf(quantity).entryUnits.map(unitLabel);
+  return units.length > 1 ? `${units.slice(0, -1).join(', ')} or ${units.at(-1)}` : (units[0] ?? '');
+}
+
+export function entryUnitOptions(quantity: Quantity): { value: UnitCode; label: string }[] {
+  return infoOf(quantity).entryUnits.map((unit) => ({ value: unit, label: unitLabel(unit) }));
+}
+
+export const statusWords: Record<TreeVersionStatus, string> = {
+  draft: 'Draft',
+  published: 'Published',
+  retired: 'Retired',
+};
+
+export const statusTones: Record<TreeVersionStatus, BadgeTone> = {
+  draft: 'caution',
+  published: 'ok',
+  retired: 'neutral',
+};
+
+export const verdictWords: Record<RegressionVerdict, string> = {
+  'same-outcome': 'Same finding',
+  'different-outcome': 'Different finding',
+  'no-outcome': 'Stops before a finding',
+  diverged: 'Answers no longer fit',
+};
+
+export const verdictIcons: Record<RegressionVerdict, string> = {
+  'same-outcome': '✓',
+  'different-outcome': '✕',
+  'no-outcome': '!',
+  diverged: '!',
+};
+
+export const verdictTones: Record<RegressionVerdict, BadgeTone> = {
+  'same-outcome': 'ok',
+  'different-outcome': 'danger',
+  'no-outcome': 'caution',
+  diverged: 'caution',
+};
+
+export function isVerdict(value: string): value is RegressionVerdict {
+  return Object.hasOwn(verdictWords, value);
+}
+
+const dateFormat = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+});
+
+export function formatWhen(iso: string | null): string {
+  if (!iso) return '';
+  const date = new Date(iso);
+  return Number.isNaN(date.getTime()) ? '' : dateFormat.format(date);
+}
+
+export function versionName(version: Pick<TreeVersionInfo, 'version' | 'status'>): string {
+  return version.status === 'draft' ? `Draft v${version.version}` : `v${version.version}`;
+}
+
+/** A number as typed at the car: a decimal comma is accepted; null when the box is empty. */
+export function readNumber(text: string): number | null {
+  const trimmed = text.trim().replace(/^−/, '-').replace(',', '.');
+  if (trimmed === '') return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : Number.NaN;
+}
+
+export function problemCount(count: number): string {
+  return count === 1 ? '1 problem' : `${count} problems`;
+}

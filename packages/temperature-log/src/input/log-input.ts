@@ -1,0 +1,53 @@
+// What a temperature log may be handed to the reader as, and one way to walk all of them. The
+// package reads only what it is given: the API passes the upload stream, tests pass strings.
+
+/** A whole file as text, any async iterable of text or byte chunks (Node streams are), or a WHATWG ReadableStream. */
+export type TemperatureLogInput =
+  string | AsyncIterable<string | Uint8Array> | ReadableStream<string | Uint8Array>;
+
+function isReadableStream(input: unknown): input is ReadableStream<string | Uint8Array> {
+  return (
+    typeof input === 'object' &&
+    input !== null &&
+    typeof (input as { getReader?: unknown }).getReader === 'function'
+  );
+}
+
+// Safari's ReadableStream is not async-iterable, so streams are read through their reader. Leaving
+// early (a mapping is needed, or the file is bad) cancels the stream rather than leaving it locked.
+async function* readStream(
+  stream: ReadableStream<string | Uint8Array>,
+): AsyncGenerator<string | Uint8Array> {
+  const reader = stream.getReader();
+  let finished = false;
+  try {
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) {
+        finished = true;
+        return;
+      }
+      yield value;
+    }
+  } finally {
+    if (!finished) {
+      await reader.cancel().catch(() => undefined);
+    }
+    reader.releaseLock();
+  }
+}
+
+async function* once(text: string): AsyncGenerator<string> {
+  yield text;
+}
+
+/** The input as a sequence of raw chunks, whatever form it came in. */
+export function rawChunks(input: TemperatureLogInput): AsyncIterable<string | Uint8Array> {
+  if (typeof input === 'string') {
+    return once(input);
+  }
+  if (isReadableStream(input)) {
+    return readStream(input);
+  }
+  return input;
+}
