@@ -21,7 +21,10 @@ import { customersRouter } from './routes/customers/customers.router';
 import { vehiclesRouter } from './routes/vehicles/vehicles.router';
 import { casesRouter } from './routes/cases/cases.router';
 import { treesRouter } from './routes/trees/trees.router';
+import { outboxRouter } from './routes/outbox/outbox.router';
 import { createDiskFileStore } from './lib/storage/disk-file-store';
+import { createMailContext } from './lib/mail/mail-context';
+import type { MailContext } from './lib/mail/mail-context';
 import type { FileStore } from './lib/storage/file-store';
 
 export interface AppDeps {
@@ -29,12 +32,16 @@ export interface AppDeps {
   sequelize: Sequelize;
   logger: Logger;
   store?: FileStore;
+  mail?: MailContext;
 }
 
 export function createApp(deps: AppDeps): express.Express {
   const { config, sequelize, logger } = deps;
   const store = deps.store ?? createDiskFileStore(config.uploadDir);
   const signer = createSessionSigner(config.sessionSecret, config.sessionTtlHours);
+  const mail =
+    deps.mail ??
+    createMailContext({ publicUrl: config.mail.publicUrl, secret: config.sessionSecret });
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
@@ -62,14 +69,15 @@ export function createApp(deps: AppDeps): express.Express {
     next();
   });
   api.use('/health', healthRouter({ sequelize }));
-  api.use('/auth', authRouter({ config, sequelize, signer }));
+  api.use('/auth', authRouter({ config, sequelize, signer, mail }));
   api.use(authenticate(signer));
   api.use('/me', meRouter());
-  api.use('/staff', staffRouter());
+  api.use('/staff', staffRouter({ config, mail }));
   api.use('/vehicles', vehiclesRouter());
   api.use('/customers', customersRouter());
   api.use('/trees', treesRouter());
-  api.use('/cases', casesRouter({ store }));
+  api.use('/cases', casesRouter({ store, mail }));
+  api.use('/outbox', outboxRouter());
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

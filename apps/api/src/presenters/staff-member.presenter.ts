@@ -9,6 +9,7 @@ export function presentStaffMember(user: User): StaffMember {
     name: user.name,
     role: user.role,
     active: user.active,
+    invitationPending: user.passwordHash === null,
     createdAt: user.createdAt.toISOString(),
   };
 }

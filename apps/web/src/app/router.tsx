@@ -81,7 +81,10 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   path: 'trees/:treeId/compare',
                   lazy: async () => {
                     const route = await treesModule();
-                    return { loader: route.compareLoader(queryClient), Component: route.CompareRoute };
+                    return {
+                      loader: route.compareLoader(queryClient),
+                      Component: route.CompareRoute,
+                    };
                   },
                 },
                 {
@@ -95,7 +98,10 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   path: 'trees/:treeId/draft/publish',
                   lazy: async () => {
                     const route = await treeDraftModule();
-                    return { loader: route.publishLoader(queryClient), Component: route.PublishRoute };
+                    return {
+                      loader: route.publishLoader(queryClient),
+                      Component: route.PublishRoute,
+                    };
                   },
                 },
                 ...comingLaterAreas.map((areaId) => ({

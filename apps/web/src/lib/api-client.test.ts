@@ -1,7 +1,7 @@
 import { meSchema } from '@heatpath/contracts';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { errorResponse, json, makeMe, mockApi } from '../test/api-mock';
-import { ApiError, apiRequest, apiRequestNoContent } from './api-client';
+import { ApiError, apiRequest, apiRequestForm, apiRequestNoContent } from './api-client';
 
 afterEach(() => vi.unstubAllGlobals());
 
@@ -42,6 +42,19 @@ describe('apiRequest', () => {
     await apiRequestNoContent('/api/auth/sign-out', { method: 'POST' });
     expect(requests[0]?.headers['x-heatpath-client']).toBe('web');
     expect(requests[0]?.headers['content-type']).toBeUndefined();
+  });
+
+  it('sends an upload as multipart form data, leaving its content type to the browser', async () => {
+    const { fetchMock } = mockApi({ 'POST /api/me': () => json(makeMe(), 201) });
+    const form = new FormData();
+    form.append('file', new File(['x'], 'leak.jpg', { type: 'image/jpeg' }));
+    await apiRequestForm('/api/me', meSchema, form);
+    const init = fetchMock.mock.calls[0]?.[1];
+    const headers = new Headers(init?.headers);
+    expect(init?.method).toBe('POST');
+    expect(init?.body).toBe(form);
+    expect(headers.get('x-heatpath-client')).toBe('web');
+    expect(headers.get('content-type')).toBeNull();
   });
 
   it('turns the API error body into an ApiError with its code, message and fields', async () => {

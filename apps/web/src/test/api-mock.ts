@@ -79,6 +79,7 @@ export function makeStaffMember(overrides: Partial<StaffMember> = {}): StaffMemb
     name: 'Tomas Brand',
     role: 'technician',
     active: true,
+    invitationPending: false,
     createdAt: '2025-01-01T08:00:00.000Z',
     ...overrides,
   };

@@ -1,7 +1,12 @@
 // Cases for component tests, built from a shipped tree by the fault-tree package itself, so the
 // walk a test shows is exactly what the API would send for the same answers.
 import type { CaseDetail, Findings } from '@heatpath/contracts';
-import { compileTree, summariseWalk, type CompiledTree, type WalkEvent } from '@heatpath/fault-tree';
+import {
+  compileTree,
+  summariseWalk,
+  type CompiledTree,
+  type WalkEvent,
+} from '@heatpath/fault-tree';
 import { overheatsIntermittentTree } from '@heatpath/fault-tree/trees';
 
 let compiled: CompiledTree | undefined;
@@ -17,7 +22,8 @@ function tree(): CompiledTree {
 export const caseId = '00000000-0000-4000-8000-0000000000c1';
 const versionId = '00000000-0000-4000-8000-0000000000d1';
 
-export type Answer = string | Record<string, { value: number; unit: string }> | 'done' | 'could-not-do';
+export type Answer =
+  string | Record<string, { value: number; unit: string }> | 'done' | 'could-not-do';
 
 /** The events that answer the walk from its start with the given answers, in order. */
 export function eventsFor(answers: readonly Answer[]): WalkEvent[] {
@@ -115,7 +121,12 @@ export function makeCaseDetail(
       mileageUnit: 'km',
       customer: null,
     },
-    customer: { id: '00000000-0000-4000-8000-0000000000f1', name: 'Morwenna Tregarth', phone: null, email: null },
+    customer: {
+      id: '00000000-0000-4000-8000-0000000000f1',
+      name: 'Morwenna Tregarth',
+      phone: null,
+      email: null,
+    },
     assignee: { id: '00000000-0000-4000-8000-000000000002', name: 'Tomas Brand' },
     createdAt: '2025-03-01T08:00:00.000Z',
     updatedAt: '2025-03-01T08:00:00.000Z',

@@ -37,14 +37,19 @@ async function* readStream(
   }
 }
 
-async function* once(text: string): AsyncGenerator<string> {
-  yield text;
+// A long string is handed on in slices, so decoding checks and line cutting also take turns.
+const STRING_SLICE = 1 << 16;
+
+async function* slices(text: string): AsyncGenerator<string> {
+  for (let at = 0; at < text.length; at += STRING_SLICE) {
+    yield text.slice(at, at + STRING_SLICE);
+  }
 }
 
 /** The input as a sequence of raw chunks, whatever form it came in. */
 export function rawChunks(input: TemperatureLogInput): AsyncIterable<string | Uint8Array> {
   if (typeof input === 'string') {
-    return once(input);
+    return slices(input);
   }
   if (isReadableStream(input)) {
     return readStream(input);

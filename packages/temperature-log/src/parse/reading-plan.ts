@@ -222,7 +222,7 @@ export function planReading(
   const temperatureMap = temperatureToCelsius(temperatureUnit);
   const temperatureShown = temperatureUnit === 'degC' ? '°C' : '°F';
 
-  const plan = (role: Exclude<keyof typeof VALUE_BOUNDS, never>, index: number): ColumnPlan => {
+  const plan = (role: keyof typeof VALUE_BOUNDS, index: number): ColumnPlan => {
     const isTemperature = role === 'coolant' || role === 'intakeAir' || role === 'ambient';
     const isSpeed = role === 'vehicleSpeed';
     return {

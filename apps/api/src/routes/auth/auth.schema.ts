@@ -1,2 +1,7 @@
 // Request shapes for /api/auth.
-export { signInRequestSchema } from '@heatpath/contracts';
+export {
+  accountTokenCheckRequestSchema,
+  passwordResetRequestSchema,
+  setPasswordRequestSchema,
+  signInRequestSchema,
+} from '@heatpath/contracts';

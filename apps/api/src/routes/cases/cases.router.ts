@@ -1,4 +1,5 @@
-// /api/cases: intake, the list, the case, its walk, notes, findings and audit trail.
+// /api/cases: intake, the list, the case, its walk, notes, findings and audit trail; the
+// repair order of a diagnosed case is in repair-order.router.ts.
 import { Router } from 'express';
 import type {
   AddNoteRequest,
@@ -30,8 +31,10 @@ import {
   walkEventRequestSchema,
 } from './cases.schema';
 import { attachmentsRouter } from './attachments.router';
+import { repairOrderRouter } from './repair-order.router';
+import type { MailContext } from '../../lib/mail/mail-context';
 
-export function casesRouter(deps: { store: FileStore }) {
+export function casesRouter(deps: { store: FileStore; mail: MailContext }) {
   const router = Router();
   const caseId = (res: { locals: Record<string, unknown> }) =>
     (res.locals.params as { caseId: string }).caseId;
@@ -124,5 +127,6 @@ export function casesRouter(deps: { store: FileStore }) {
   });
 
   router.use('/:caseId/attachments', attachmentsRouter(deps));
+  router.use('/:caseId/findings', repairOrderRouter(deps));
   return router;
 }

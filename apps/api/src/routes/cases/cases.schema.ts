@@ -1,8 +1,12 @@
 // Request shapes for /api/cases.
 import { z } from 'zod';
+import { repairOrderFormats } from '@heatpath/contracts';
 
 export {
   addNoteRequestSchema,
+  approveFindingsRequestSchema,
+  exportQuerySchema,
+  sendRepairOrderRequestSchema,
   caseListQuerySchema,
   createCaseRequestSchema,
   updateFindingsRequestSchema,
@@ -20,4 +24,8 @@ export const attachmentParamsSchema = caseParamsSchema.extend({
 export const attachmentFieldsSchema = z.object({
   nodeId: z.string().max(80).optional(),
   photoOnly: z.enum(['true', 'false']).optional(),
+});
+
+export const exportParamsSchema = caseParamsSchema.extend({
+  format: z.enum(repairOrderFormats, { error: 'Export as pdf, csv or json.' }),
 });

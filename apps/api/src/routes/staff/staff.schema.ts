@@ -1,7 +1,11 @@
 // Request shapes for /api/staff.
 import { z } from 'zod';
 
-export { createStaffRequestSchema, updateStaffRequestSchema } from '@heatpath/contracts';
+export {
+  createStaffRequestSchema,
+  inviteStaffRequestSchema,
+  updateStaffRequestSchema,
+} from '@heatpath/contracts';
 
 export const staffParamsSchema = z.object({
   userId: z.uuid({ error: 'That is not a valid staff member id.' }),

@@ -122,10 +122,16 @@ export async function renderRepairOrderPdf(
   };
   const text = (
     value: string,
-    options: { font?: 'regular' | 'semibold' | 'bold'; size?: number; color?: string } & PDFKit.Mixins.TextOptions = {},
+    options: {
+      font?: 'regular' | 'semibold' | 'bold';
+      size?: number;
+      color?: string;
+      x?: number;
+      y?: number;
+    } & PDFKit.Mixins.TextOptions = {},
   ) => {
-    const { font = 'regular', size = 10, color = colour.ink, ...rest } = options;
-    return doc.font(font).fontSize(size).fillColor(color).text(printable(value), rest);
+    const { font = 'regular', size = 10, color = colour.ink, x, y, ...rest } = options;
+    return doc.font(font).fontSize(size).fillColor(color).text(printable(value), x, y, rest);
   };
   const heightOf = (value: string, font: string, size: number, w: number) =>
     doc.font(font).fontSize(size).heightOfString(printable(value), { width: w });
@@ -362,7 +368,7 @@ export async function renderRepairOrderPdf(
       row.forEach((img, j) => {
         const x = left + j * (cell + gap);
         if (img.jpeg) {
-          doc.image(img.jpeg, x, y, { fit: [cell, maxHeight], align: 'left', valign: 'top' });
+          doc.image(img.jpeg, x, y, { fit: [cell, maxHeight] });
         } else {
           doc.y = y;
           text('This photo could not be converted for print.', { size: 9, color: colour.muted, x, width: cell });

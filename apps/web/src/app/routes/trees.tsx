@@ -105,10 +105,7 @@ export function CompareRoute() {
           <span aria-hidden="true">←</span> Versions of {tree.data?.title ?? 'the tree'}
         </ButtonLink>
       </div>
-      <PageHeader
-        title="Compare versions"
-        lead={tree.data ? tree.data.title : undefined}
-      />
+      <PageHeader title="Compare versions" lead={tree.data ? tree.data.title : undefined} />
       {tree.isPending ? (
         <LoadingState label="Loading the tree…" />
       ) : tree.isError ? (

@@ -59,7 +59,6 @@ export function AnswerStatus({
           “{notice.label}” was not saved: the case changed elsewhere, perhaps on another device. It
           now shows where the case stands.
         </p>
-        <p className="text-sm">{notice.message}</p>
         <div>
           <Button variant="secondary" onClick={onDismiss}>
             Got it

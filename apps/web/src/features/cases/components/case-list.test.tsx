@@ -75,8 +75,9 @@ describe('the case list', () => {
       'GET /api/staff': () =>
         json({
           staff: [
-            makeStaffMember(),
+            makeStaffMember({ invitationPending: false }),
             makeStaffMember({
+              invitationPending: false,
               id: '00000000-0000-4000-8000-000000000009',
               name: 'Ada Advisor',
               role: 'advisor',

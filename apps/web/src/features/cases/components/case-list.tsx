@@ -65,13 +65,13 @@ export function CaseList({
   return (
     <div className="flex flex-col gap-5">
       <div className="flex flex-wrap items-end gap-4">
-        <div className="min-w-64 flex-[2_1_20rem]">
+        <div className="min-w-56 flex-[2_1_14rem]">
           <TextField
             label="Search cases"
             type="search"
             value={text}
             onChange={(event) => setText(event.target.value)}
-            placeholder="Plate, VIN, customer or case number"
+            placeholder="Plate, VIN or customer"
             className="placeholder:text-ink-muted"
             autoComplete="off"
             spellCheck={false}
@@ -92,7 +92,7 @@ export function CaseList({
           </div>
         ) : null}
         {showStatus ? (
-          <div className="min-w-48 flex-[1_1_12rem]">
+          <div className="min-w-44 flex-[1_1_10rem]">
             <SelectField
               label="Status"
               value={filters.status ?? anyValue}
@@ -110,7 +110,7 @@ export function CaseList({
           </div>
         ) : null}
         {technicians ? (
-          <div className="min-w-48 flex-[1_1_12rem]">
+          <div className="min-w-44 flex-[1_1_10rem]">
             <SelectField
               label="Technician"
               value={filters.technicianId ?? anyValue}

@@ -280,6 +280,68 @@ describe('the case page', { timeout: 15_000 }, () => {
     });
   });
 
+  it('uploads a photo the step asks for, from the camera, as a photo of that step', async () => {
+    const atResult = [...paths.blockTest, 'done'];
+    const { setCase } = setup({ detail: makeCaseDetail(atResult) });
+    const fetchMock = vi.mocked(fetch);
+    const original = fetchMock.getMockImplementation();
+    let sent: { form: FormData; headers: Headers } | null = null;
+    fetchMock.mockImplementation(async (input, init) => {
+      if (init?.body instanceof FormData) {
+        sent = { form: init.body, headers: new Headers(init.headers) };
+        setCase(
+          makeCaseDetail(atResult, {
+            attachments: [
+              {
+                id: '00000000-0000-4000-8000-0000000000b7',
+                nodeId: 'block-test-result',
+                kind: 'photo',
+                name: 'fluid.jpg',
+                mediaType: 'image/jpeg',
+                byteSize: 3,
+                width: 10,
+                height: 10,
+                url: '/api/cases/x/attachments/y/file',
+                thumbnailUrl: '/api/cases/x/attachments/y/thumbnail',
+                uploadedBy: { id: technician.id, name: technician.name },
+                createdAt: '2025-03-01T09:00:00.000Z',
+              },
+            ],
+          }),
+        );
+        return json(
+          {
+            id: '00000000-0000-4000-8000-0000000000b7',
+            url: '/api/cases/x/attachments/y/file',
+            thumbnailUrl: '/api/cases/x/attachments/y/thumbnail',
+            name: 'fluid.jpg',
+          },
+          201,
+        );
+      }
+      return original ? original(input, init) : errorResponse(500, 'internal', 'x');
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Block test result' }, slow);
+    expect(screen.getByText('Photo of the test fluid')).toBeTruthy();
+    expect(screen.getByText('Required')).toBeTruthy();
+    const picker = screen.getByLabelText('Attach photo: choose the file') as HTMLInputElement;
+    expect(picker.accept).toBe('image/*');
+    expect(picker.getAttribute('capture')).toBe('environment');
+    expect(screen.getByRole('button', { name: 'Attach photo' })).toBeTruthy();
+
+    await user.upload(picker, new File(['jpg'], 'fluid.jpg', { type: 'image/jpeg' }));
+    expect(await screen.findByText('Attached fluid.jpg')).toBeTruthy();
+    const upload = sent as { form: FormData; headers: Headers } | null;
+    expect(upload?.form.get('nodeId')).toBe('block-test-result');
+    expect(upload?.form.get('photoOnly')).toBe('true');
+    expect((upload?.form.get('file') as File | null)?.name).toBe('fluid.jpg');
+    expect(upload?.headers.get('x-heatpath-client')).toBe('web');
+    expect(upload?.headers.get('content-type')).toBeNull();
+    // The thumbnail shows at the step once the case is read again.
+    expect(await screen.findAllByRole('img', { name: 'fluid.jpg' })).not.toHaveLength(0);
+  });
+
   it('saves edited findings against their revision and offers a reload on a conflict', async () => {
     const detail = makeCaseDetail(paths.outcome, {
       findings: makeFindings(),
