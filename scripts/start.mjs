@@ -1,6 +1,7 @@
 // `npm start`: install, start the private PostgreSQL, migrate, seed the demo on an empty
-// database, build the web app and serve Heatpath from one Node process. Plain Node, no
-// dependencies: it runs before node_modules exists.
+// database, build the web app, start a local SMTP fake (unless SMTP_HOST names a real server)
+// and serve Heatpath from one Node process. Plain Node, no dependencies: it runs before
+// node_modules exists.
 import { spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { ensureSecret, portIsFree, startCluster } from './lib/postgres.mjs';
@@ -63,6 +64,25 @@ async function main() {
     'Building the web app failed; see the message above.',
   );
 
+  // Mail: without SMTP_HOST, a local fake on loopback keeps every message in .data/mail.
+  let mailFake = null;
+  if (!process.env.SMTP_HOST) {
+    const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
+    if (!(await portIsFree(smtpPort)))
+      throw new BootstrapError(
+        `Port ${smtpPort} for the local mail fake is in use: free it or run with SMTP_PORT=${smtpPort + 1} npm start.`,
+      );
+    step('Starting the local mail fake…');
+    mailFake = spawn(process.execPath, ['--import', 'tsx', 'src/dev/smtp-fake.ts'], {
+      cwd: api,
+      env: { ...env, SMTP_FAKE_PORT: String(smtpPort), SMTP_FAKE_DIR: join(dataRoot, 'mail') },
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
+    process.once('exit', () => mailFake?.kill('SIGTERM'));
+    Object.assign(env, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(smtpPort), SMTP_SECURE: 'false' });
+  }
+  env.PUBLIC_URL = process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`;
+
   step('Starting Heatpath…');
   const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
     cwd: api,
@@ -89,7 +109,14 @@ async function main() {
         console.log('                         advisor@harbourlane.test     service advisor');
         console.log('    Millbrook Autos      lead@millbrook.test          workshop lead\n');
       }
-      console.log('  Press Ctrl-C to stop the server and the database.\n');
+      console.log(
+        mailFake
+          ? `  Mail goes to a local fake on 127.0.0.1:${env.SMTP_PORT}: nothing leaves this machine.\n` +
+              `  Each message is kept in ${join(dataRoot, 'mail')} (.eml files); the lead's Outbox\n` +
+              '  screen shows what was sent and its status.\n'
+          : `  Mail goes to ${env.SMTP_HOST}:${env.SMTP_PORT ?? 2525} (SMTP_HOST).\n`,
+      );
+      console.log('  Press Ctrl-C to stop the server, the mail fake and the database.\n');
     }
   });
   const shutdown = (signal) => {
@@ -99,8 +126,9 @@ async function main() {
   process.on('SIGINT', () => shutdown('Ctrl-C'));
   process.on('SIGTERM', () => shutdown('SIGTERM'));
   server.on('exit', (code) => {
+    mailFake?.kill('SIGTERM');
     stopDb();
-    ok('Server and database stopped.');
+    ok(mailFake ? 'Server, mail fake and database stopped.' : 'Server and database stopped.');
     process.exit(code ?? 0);
   });
 }

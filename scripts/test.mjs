@@ -107,6 +107,8 @@ async function main() {
   if (wanted('e2e')) {
     const e2eUrl = db.createDatabase('heatpath_e2e');
     const port = await freePort(Number(process.env.E2E_PORT ?? 3900));
+    // The e2e server's mail goes to the same local SMTP fake `npm start` uses.
+    const smtpPort = await freePort(port + 1000);
     const env = {
       ...process.env,
       NODE_ENV: 'production',
@@ -116,6 +118,12 @@ async function main() {
       PORT: String(port),
       LOG_LEVEL: 'warn',
       UPLOAD_DIR: join(root, '.data', 'test-uploads'),
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtpPort),
+      SMTP_SECURE: 'false',
+      PUBLIC_URL: `http://127.0.0.1:${port}`,
+      MAIL_POLL_MS: '250',
+      MAIL_RETRY_BASE_MS: '500',
     };
     const api = join(root, 'apps', 'api');
     await runPnpm(
@@ -134,6 +142,11 @@ async function main() {
       'Seeding the e2e database failed.',
       { cwd: api, env },
     );
+    const mailFake = spawn(process.execPath, ['--import', 'tsx', 'src/dev/smtp-fake.ts'], {
+      cwd: api,
+      env: { ...env, SMTP_FAKE_PORT: String(smtpPort), SMTP_FAKE_DIR: join(resultsDir, 'mail') },
+      stdio: ['ignore', 'ignore', 'inherit'],
+    });
     const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
       cwd: api,
       env,
@@ -157,6 +170,7 @@ async function main() {
       });
     } finally {
       server.kill('SIGTERM');
+      mailFake.kill('SIGTERM');
     }
   }
 

@@ -8,3 +8,4 @@ export * from './case-detail';
 export * from './trees';
 export * from './mail';
 export * from './repair-order';
+export * from './temperature-logs';

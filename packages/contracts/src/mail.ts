@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { passwordSchema, roleSchema } from './auth';
 
 /** Control characters (CR and LF above all) never reach a mail header. */
-const controlCharacters = /[\u0000-\u001f\u007f]/;
+const controlCharacters = /\p{Cc}/u;
 
 export const headerTextSchema = (max: number, what: string) =>
   z

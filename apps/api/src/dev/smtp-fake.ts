@@ -25,7 +25,13 @@ export interface SmtpFake {
 }
 
 export async function startSmtpFake(
-  options: { host?: string; port?: number; dir?: string } = {},
+  options: {
+    host?: string;
+    port?: number;
+    dir?: string;
+    /** Recipients to refuse with a permanent 550, as a real server refuses an unknown mailbox. */
+    refuse?: (address: string) => boolean;
+  } = {},
 ): Promise<SmtpFake> {
   const host = options.host ?? '127.0.0.1';
   const messages: ReceivedMail[] = [];
@@ -42,6 +48,13 @@ export async function startSmtpFake(
       callback(null, { user: 'heatpath' });
     },
     size: 25 * 1024 * 1024,
+    onRcptTo(address, _session, callback) {
+      if (options.refuse?.(address.address)) {
+        callback(Object.assign(new Error('No such mailbox here'), { responseCode: 550 }));
+        return;
+      }
+      callback();
+    },
     onData(stream, session, callback) {
       const chunks: Buffer[] = [];
       stream.on('data', (chunk: Buffer) => chunks.push(chunk));

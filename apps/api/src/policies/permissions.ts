@@ -13,6 +13,9 @@ export const permissions = {
   'cases.create': ['lead', 'technician', 'advisor'],
   'cases.walk': ['lead', 'technician'],
   'cases.assign': ['lead'],
+  // Temperature logs on a case: the people who walk it upload them; the advisor reads them.
+  'logs.read': ['lead', 'technician', 'advisor'],
+  'logs.upload': ['lead', 'technician'],
   // Findings: the technician (or lead) edits them until the case is diagnosed; then the advisor
   // (or lead) reviews, edits, approves, exports and sends them. 'findings.save' lets the request
   // in; the service decides by the case's status which of the two applies.

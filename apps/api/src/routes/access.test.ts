@@ -48,6 +48,25 @@ const routes: RouteCase[] = [
     ok: 200,
   },
   {
+    method: 'post',
+    path: () => '/api/staff/invitations',
+    body: () => ({
+      email: `i-${Math.random().toString(36).slice(2)}@factory.test`,
+      name: 'Invited Matrix',
+      role: 'technician',
+    }),
+    allowed: ['lead'],
+    ok: 201,
+  },
+  // The advisor already has a password: the lead gets the 409 that says so.
+  {
+    method: 'post',
+    path: (w) => `/api/staff/${w.people.advisor.id}/invitation`,
+    allowed: ['lead'],
+    ok: 409,
+  },
+  { method: 'get', path: () => '/api/outbox', allowed: ['lead'], ok: 200 },
+  {
     method: 'get',
     path: () => '/api/vehicles?q=ZZ',
     allowed: ['lead', 'technician', 'advisor'],

@@ -4,7 +4,15 @@
 import type { Role } from '@heatpath/contracts';
 
 export type AreaId =
-  'home' | 'staff' | 'trees' | 'cases' | 'training' | 'casebook' | 'findings' | 'calculators';
+  | 'home'
+  | 'staff'
+  | 'trees'
+  | 'cases'
+  | 'training'
+  | 'casebook'
+  | 'findings'
+  | 'outbox'
+  | 'calculators';
 
 export interface Area {
   id: AreaId;
@@ -91,9 +99,20 @@ export const areas: readonly Area[] = [
     path: '/findings',
     label: 'Findings',
     roles: ['advisor'],
+    // The lead reviews and approves repair orders too, from a case's page.
+    readers: ['lead'],
     summary: {
       advisor:
-        'Read the findings of diagnosed cases: concern, cause and correction, parts, labour and follow-ups.',
+        'Review the findings of diagnosed cases for the repair order, approve them, download them as PDF, CSV or JSON and e-mail them.',
+    },
+  },
+  {
+    id: 'outbox',
+    path: '/outbox',
+    label: 'Outbox',
+    roles: ['lead'],
+    summary: {
+      lead: 'Every e-mail Heatpath wrote — repair orders, invitations, password resets — as it was sent, with its status.',
     },
   },
   {

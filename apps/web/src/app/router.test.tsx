@@ -11,7 +11,7 @@ afterEach(() => {
 });
 
 const navByRole: Record<Role, string[]> = {
-  lead: ['Home', 'Staff', 'Decision trees', 'Cases', 'Training', 'Calculators'],
+  lead: ['Home', 'Staff', 'Decision trees', 'Cases', 'Training', 'Outbox', 'Calculators'],
   technician: ['Home', 'My cases', 'Calculators'],
   apprentice: ['Home', 'Casebook', 'Calculators'],
   advisor: ['Home', 'Findings', 'Calculators'],

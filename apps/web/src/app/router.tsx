@@ -8,6 +8,10 @@ import type { AreaId } from './areas';
 import { CasesRoute, casesLoader, casesShouldRevalidate } from './routes/cases';
 import { ComingLaterArea, comingLaterLoader } from './routes/coming-later-area';
 import { FindingsRoute, findingsLoader, findingsShouldRevalidate } from './routes/findings';
+import { ForgotPasswordRoute } from './routes/forgot-password';
+import { OutboxRoute, outboxLoader } from './routes/outbox';
+import { RepairOrderRoute, repairOrderLoader } from './routes/repair-order';
+import { SetPasswordRoute } from './routes/set-password';
 import { HomeRoute } from './routes/home';
 import { NewCaseRoute, newCaseLoader } from './routes/new-case';
 import { SignInRoute, signInLoader } from './routes/sign-in';
@@ -32,6 +36,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       hydrateFallbackElement: <StartingUp />,
       children: [
         { path: '/sign-in', loader: signInLoader(queryClient), Component: SignInRoute },
+        // Opened from e-mailed links, without a session.
+        { path: '/forgot-password', Component: ForgotPasswordRoute },
+        { path: '/set-password', Component: SetPasswordRoute },
         {
           id: 'signed-in',
           loader: signedInLoader(queryClient),
@@ -63,6 +70,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   shouldRevalidate: findingsShouldRevalidate,
                   Component: FindingsRoute,
                 },
+                {
+                  path: 'cases/:caseId/repair-order',
+                  loader: repairOrderLoader(queryClient),
+                  Component: RepairOrderRoute,
+                },
+                { path: 'outbox', loader: outboxLoader(queryClient), Component: OutboxRoute },
                 {
                   path: 'trees',
                   lazy: async () => {

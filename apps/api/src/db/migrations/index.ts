@@ -5,10 +5,12 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-cases';
 import * as m0003 from './0003-tree-authoring';
 import * as m0004 from './0004-repair-orders-and-mail';
+import * as m0005 from './0005-temperature-logs';
 
 export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-cases', ...m0002 },
   { name: '0003-tree-authoring', ...m0003 },
   { name: '0004-repair-orders-and-mail', ...m0004 },
+  { name: '0005-temperature-logs', ...m0005 },
 ].map(({ name, up, down }) => ({ name, up, down }));

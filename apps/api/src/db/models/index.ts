@@ -10,6 +10,9 @@ import { FindingsRevision } from './findings-revision';
 import { OutboxAttachment } from './outbox-attachment';
 import { OutboxMessage } from './outbox-message';
 import { RegressionCase } from './regression-case';
+import { TemperatureLog } from './temperature-log';
+import { TemperatureLogMapping } from './temperature-log-mapping';
+import { TemperatureLogUpload } from './temperature-log-upload';
 import { Tree } from './tree';
 import { TreeVersion } from './tree-version';
 import { User } from './user';
@@ -27,6 +30,9 @@ export {
   OutboxAttachment,
   OutboxMessage,
   RegressionCase,
+  TemperatureLog,
+  TemperatureLogMapping,
+  TemperatureLogUpload,
   Tree,
   TreeVersion,
   User,
@@ -51,6 +57,9 @@ export function initModels(sequelize: Sequelize): void {
     OutboxMessage,
     OutboxAttachment,
     AccountToken,
+    TemperatureLogMapping,
+    TemperatureLogUpload,
+    TemperatureLog,
   ]) {
     model.initModel(sequelize);
   }
@@ -100,4 +109,13 @@ export function initModels(sequelize: Sequelize): void {
   AccountToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   AccountToken.belongsTo(Workshop, fk('workshopId'));
   AccountToken.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  TemperatureLogMapping.belongsTo(Workshop, fk('workshopId'));
+  TemperatureLogMapping.belongsTo(User, { foreignKey: 'confirmedBy', as: 'confirmer' });
+  TemperatureLogUpload.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  TemperatureLogUpload.belongsTo(Workshop, fk('workshopId'));
+  TemperatureLogUpload.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader' });
+  TemperatureLog.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  TemperatureLog.belongsTo(Workshop, fk('workshopId'));
+  TemperatureLog.belongsTo(Attachment, { foreignKey: 'attachmentId', as: 'attachment' });
+  TemperatureLog.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader' });
 }

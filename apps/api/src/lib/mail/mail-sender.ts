@@ -18,7 +18,7 @@ export interface MailSender {
   close(): void;
 }
 
-const controlCharacters = /[\u0000-\u001f\u007f]/;
+const controlCharacters = /\p{Cc}/u;
 
 export function assertHeaderSafe(mail: OutgoingMail): void {
   const values = [

@@ -54,11 +54,16 @@ export function describeSendError(error: unknown, where: string): string {
   const e = (error ?? {}) as SmtpishError;
   const clean = (text: string) => text.replace(/[\r\n\t]+/g, ' ').slice(0, 300);
   if (e.responseCode) return clean(`The mail server refused it: ${e.response ?? e.responseCode}`);
-  switch (e.code) {
+  // nodemailer wraps socket errors (ESOCKET, ECONNECTION); the cause is named in the message.
+  const cause =
+    /\b(ECONNREFUSED|ETIMEDOUT|ETIMEOUT|ENOTFOUND|EDNS|EAUTH)\b/.exec(`${e.code ?? ''} ${e.message ?? ''}`)?.[1] ??
+    e.code;
+  switch (cause) {
     case 'ECONNREFUSED':
       return `No mail server answered at ${where} (connection refused).`;
     case 'ETIMEDOUT':
     case 'ETIMEOUT':
+    case 'ECONNECTION':
       return `The mail server at ${where} did not answer in time.`;
     case 'ENOTFOUND':
     case 'EDNS':

@@ -32,6 +32,7 @@ import {
 } from './cases.schema';
 import { attachmentsRouter } from './attachments.router';
 import { repairOrderRouter } from './repair-order.router';
+import { temperatureLogsRouter } from './temperature-logs.router';
 import type { MailContext } from '../../lib/mail/mail-context';
 
 export function casesRouter(deps: { store: FileStore; mail: MailContext }) {
@@ -128,5 +129,6 @@ export function casesRouter(deps: { store: FileStore; mail: MailContext }) {
 
   router.use('/:caseId/attachments', attachmentsRouter(deps));
   router.use('/:caseId/findings', repairOrderRouter(deps));
+  router.use('/:caseId/logs', temperatureLogsRouter(deps));
   return router;
 }

@@ -63,7 +63,7 @@ describe('walking a case', () => {
       concern: 'Overheats now and then on long climbs.',
       revision: 1,
     });
-    expect(kase.body.findings.cause).toMatch(/Key readings: .*110 °C/);
+    expect(kase.body.findings.cause).toMatch(/Readings on the way there: .*110 °C/);
     expect(kase.body.findings.parts.length).toBeGreaterThan(0);
     expect(kase.body.findings.followUps.join(' ')).toMatch(/timing cover/i);
     expect(kase.body.can.markDiagnosed).toBe(true);

@@ -47,6 +47,8 @@ export async function createCase(options: { actor: Actor; input: CreateCaseReque
       const customer = await createCustomer({ actor, input: input.newCustomer, transaction });
       customerId = customer.id;
       customerName = customer.name;
+      // A car with no owner on file gets the one entered at intake, so it shows next time.
+      if (!vehicle.customerId) await vehicle.update({ customerId: customer.id }, { transaction });
     }
     const [counter] = await sequelize.query<{ case_counter: number }>(
       'UPDATE workshops SET case_counter = case_counter + 1 WHERE id = $1 RETURNING case_counter',

@@ -15,7 +15,7 @@ export function causeText(walk: WalkSummary): string {
     .map((c) => `${c.label}: ${c.display}`);
   const evidence = [...readings, ...computed];
   return evidence.length
-    ? `${walk.outcome.rootCause}\n\nKey readings: ${evidence.join('; ')}.`
+    ? `${walk.outcome.rootCause}\n\nReadings on the way there: ${evidence.join('; ')}.`
     : walk.outcome.rootCause;
 }
 

@@ -37,7 +37,7 @@ export async function findCase(options: {
     where: { id: caseId, workshopId: actor.workshopId },
     include: withDetails
       ? [
-          { model: Vehicle, as: 'vehicle' },
+          { model: Vehicle, as: 'vehicle', include: [{ model: Customer, as: 'customer' }] },
           { model: Customer, as: 'customer' },
           { model: TreeVersion, as: 'treeVersion' },
           { model: User, as: 'assignee' },

@@ -54,11 +54,9 @@ export async function updateFindings(options: {
         transaction,
       });
       if (photos !== chosen.length)
-        throw new AppError(
-          'validation_failed',
-          'Choose only photos attached to this case.',
-          { photoIds: 'Choose only photos attached to this case.' },
-        );
+        throw new AppError('validation_failed', 'Choose only photos attached to this case.', {
+          photoIds: 'Choose only photos attached to this case.',
+        });
     }
     await finding.update(
       { ...changes, photoIds: chosen, revision: finding.revision + 1, updatedBy: actor.userId },

@@ -28,7 +28,10 @@ const outgoingSchema = z.object({
 
 /** Makes a value safe for a composed header (a subject built from stored names): no breaks. */
 export const headerSafe = (value: string): string =>
-  value.replace(/[\u0000-\u001f\u007f]+/g, ' ').replace(/\s{2,}/g, ' ').trim();
+  value
+    .replace(/\p{Cc}+/gu, ' ')
+    .replace(/\s{2,}/g, ' ')
+    .trim();
 
 export async function enqueueMail(options: {
   workshopId: string;

@@ -113,7 +113,11 @@ export async function buildRepairOrder(options: {
       quantity: p.quantity,
       partNumber: p.partNumber ?? null,
     })),
-    labour: revision.labour.map((l, i) => ({ line: i + 1, operation: l.operation, hours: l.hours })),
+    labour: revision.labour.map((l, i) => ({
+      line: i + 1,
+      operation: l.operation,
+      hours: l.hours,
+    })),
     followUps: [...revision.followUps],
     readings: revision.readings.map((r) => ({
       label: r.label,

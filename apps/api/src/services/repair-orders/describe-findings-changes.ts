@@ -78,9 +78,7 @@ export function describeFindingsChanges(
     changes.push('Readings updated from the walk');
   if (before.photoIds.join() !== after.photoIds.join()) {
     const count = after.photoIds.length;
-    changes.push(
-      count === 0 ? 'No photos chosen' : `Photos chosen: ${count} for the repair order`,
-    );
+    changes.push(count === 0 ? 'No photos chosen' : `Photos chosen: ${count} for the repair order`);
   }
   return changes.length > 0 ? changes : ['Saved without changes'];
 }

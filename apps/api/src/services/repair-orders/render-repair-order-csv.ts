@@ -34,5 +34,9 @@ export function renderRepairOrderCsv(document: RepairOrderExport): string {
       l.hours,
     ]),
   ];
-  return stringify(rows, { header: true, columns: [...repairOrderCsvColumns], record_delimiter: '\r\n' });
+  return stringify(rows, {
+    header: true,
+    columns: [...repairOrderCsvColumns],
+    record_delimiter: '\r\n',
+  });
 }

@@ -135,12 +135,18 @@ export async function renderRepairOrderPdf(
   };
   const heightOf = (value: string, font: string, size: number, w: number) =>
     doc.font(font).fontSize(size).heightOfString(printable(value), { width: w });
-  const heading = (title: string) => {
-    ensure(40);
+  // A heading never ends a page: it keeps at least `keepWith` points of what follows.
+  const heading = (title: string, keepWith = 48) => {
+    ensure(30 + keepWith);
     doc.moveDown(0.6);
     text(title, { font: 'bold', size: 12, color: colour.primary, x: left, width });
     const y = doc.y + 2;
-    doc.moveTo(left, y).lineTo(left + width, y).lineWidth(0.75).strokeColor(colour.line).stroke();
+    doc
+      .moveTo(left, y)
+      .lineTo(left + width, y)
+      .lineWidth(0.75)
+      .strokeColor(colour.line)
+      .stroke();
     doc.y = y + 6;
   };
 
@@ -157,10 +163,7 @@ export async function renderRepairOrderPdf(
     { size: 9.5, color: colour.muted, x: left, width },
   );
   doc.moveDown(0.4);
-  doc
-    .rect(left, doc.y, width, 2.5)
-    .fillColor(colour.primary)
-    .fill();
+  doc.rect(left, doc.y, width, 2.5).fillColor(colour.primary).fill();
   doc.y += 10;
 
   // Three columns of facts: the vehicle, the customer, the diagnosis.
@@ -258,7 +261,11 @@ export async function renderRepairOrderPdf(
     drawHeader();
     for (const row of rows) {
       const rowHeight =
-        Math.max(...row.map((cell, i) => heightOf(cell, 'regular', 9.5, (headers[i]?.width ?? 0) - pad * 2))) + 6;
+        Math.max(
+          ...row.map((cell, i) =>
+            heightOf(cell, 'regular', 9.5, (headers[i]?.width ?? 0) - pad * 2),
+          ),
+        ) + 6;
       if (doc.y + rowHeight > bottom()) {
         doc.addPage();
         drawHeader();
@@ -273,7 +280,12 @@ export async function renderRepairOrderPdf(
         x += h.width;
       });
       doc.y = y + rowHeight;
-      doc.moveTo(left, doc.y).lineTo(left + width, doc.y).lineWidth(0.5).strokeColor(colour.line).stroke();
+      doc
+        .moveTo(left, doc.y)
+        .lineTo(left + width, doc.y)
+        .lineWidth(0.5)
+        .strokeColor(colour.line)
+        .stroke();
     }
     doc.x = left;
   };
@@ -297,7 +309,8 @@ export async function renderRepairOrderPdf(
     );
 
   heading('Labour');
-  if (document.labour.length === 0) text('No labour lines.', { color: colour.muted, x: left, width });
+  if (document.labour.length === 0)
+    text('No labour lines.', { color: colour.muted, x: left, width });
   else {
     table(
       [
@@ -318,7 +331,10 @@ export async function renderRepairOrderPdf(
     });
   }
 
-  heading('Follow-ups');
+  heading(
+    'Follow-ups',
+    document.followUps[0] ? heightOf(document.followUps[0], 'regular', 10, width - 18) : 48,
+  );
   document.followUps.forEach((followUp, i) => {
     ensure(heightOf(followUp, 'regular', 10, width - 18) + 4);
     const y = doc.y;
@@ -337,7 +353,13 @@ export async function renderRepairOrderPdf(
   doc.rect(left, cy, width, cautionHeight).fillColor(colour.cautionBg).fill();
   doc.rect(left, cy, 4, cautionHeight).fillColor(colour.cautionLine).fill();
   doc.y = cy + 7;
-  text(caution, { font: 'semibold', size: 9.5, color: colour.cautionInk, x: left + 14, width: width - 24 });
+  text(caution, {
+    font: 'semibold',
+    size: 9.5,
+    color: colour.cautionInk,
+    x: left + 14,
+    width: width - 24,
+  });
   doc.y = cy + cautionHeight;
   doc.x = left;
 
@@ -371,7 +393,12 @@ export async function renderRepairOrderPdf(
           doc.image(img.jpeg, x, y, { fit: [cell, maxHeight] });
         } else {
           doc.y = y;
-          text('This photo could not be converted for print.', { size: 9, color: colour.muted, x, width: cell });
+          text('This photo could not be converted for print.', {
+            size: 9,
+            color: colour.muted,
+            x,
+            width: cell,
+          });
         }
         doc.y = y + (heights[j] ?? 0) + 3;
         text(img.name, { size: 8.5, color: colour.muted, x, width: cell });
@@ -386,7 +413,12 @@ export async function renderRepairOrderPdf(
   for (let i = range.start; i < range.start + range.count; i += 1) {
     doc.switchToPage(i);
     const y = doc.page.height - page.margin - 10;
-    doc.moveTo(left, y - 6).lineTo(left + width, y - 6).lineWidth(0.5).strokeColor(colour.line).stroke();
+    doc
+      .moveTo(left, y - 6)
+      .lineTo(left + width, y - 6)
+      .lineWidth(0.5)
+      .strokeColor(colour.line)
+      .stroke();
     // Written below the bottom margin on purpose: lift the margin so pdfkit adds no page.
     const margin = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;

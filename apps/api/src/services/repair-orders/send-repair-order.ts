@@ -39,7 +39,9 @@ export function repairOrderMessage(options: {
     ...(input.note ? [input.note, ''] : []),
     `The attached PDF lists the parts and labour, the key readings${d.photos.length ? ' and photos' : ''} (case ${d.case.reference}, revision ${d.findings.revision}).`,
     ...(input.audience === 'customer'
-      ? ['Nothing is done without your go-ahead: reply to this e-mail or call us with any question.']
+      ? [
+          'Nothing is done without your go-ahead: reply to this e-mail or call us with any question.',
+        ]
       : []),
     '',
     sender,
@@ -66,7 +68,13 @@ export async function sendRepairOrder(options: {
   const sequelize = OutboxMessage.sequelize;
   if (!sequelize) throw new Error('Models are not initialised.');
   const id = await sequelize.transaction(async (transaction) => {
-    const kase = await findCase({ actor, caseId: options.caseId, transaction, lock: true, bare: true });
+    const kase = await findCase({
+      actor,
+      caseId: options.caseId,
+      transaction,
+      lock: true,
+      bare: true,
+    });
     const sender = await User.findByPk(actor.userId, { transaction });
     const words = repairOrderMessage({ document, input, sender: sender?.name ?? '' });
     const message = await enqueueMail({
@@ -76,7 +84,11 @@ export async function sendRepairOrder(options: {
       subject: words.subject,
       text: words.text,
       attachments: [
-        { filename: repairOrderFilename(document, 'pdf'), mediaType: 'application/pdf', content: pdf },
+        {
+          filename: repairOrderFilename(document, 'pdf'),
+          mediaType: 'application/pdf',
+          content: pdf,
+        },
       ],
       caseId: kase.id,
       findingsRevision: document.findings.revision,

@@ -1,47 +1,34 @@
-// /findings: the service advisor's list of diagnosed cases; each opens the case page, read only,
-// with its findings.
+// /findings: the service advisor's queue of diagnosed cases; each opens its repair order, where
+// the findings are reviewed, approved, exported and sent.
 import type { QueryClient } from '@tanstack/react-query';
-import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import type { LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '../../components/ui/page';
-import { casesQueryOptions, type CaseListFilters } from '../../features/cases/api/get-cases';
-import { CaseList } from '../../features/cases/components/case-list';
+import { reviewQueueQueryOptions } from '../../features/repair-order/api/get-review-queue';
+import { ReviewQueue } from '../../features/repair-order/components/review-queue';
 import { useDocumentTitle } from '../../lib/document-title';
 import { requireArea } from '../guards';
-import { casesShouldRevalidate, settledFilters } from './cases';
-
-function findingsFilters(params: URLSearchParams): CaseListFilters {
-  return { scope: 'workshop', status: 'diagnosed', q: params.get('q') ?? undefined };
-}
+import { casesShouldRevalidate } from './cases';
 
 export function findingsLoader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
     await requireArea(queryClient, request, 'findings');
-    const filters = findingsFilters(new URL(request.url).searchParams);
-    void queryClient.prefetchInfiniteQuery(casesQueryOptions(settledFilters(filters)));
+    void queryClient.prefetchInfiniteQuery(reviewQueueQueryOptions());
     return null;
   };
 }
 
+// The search lives in the screen, not the address: only entering the screen runs the loader.
 export const findingsShouldRevalidate = casesShouldRevalidate;
 
 export function FindingsRoute() {
   useDocumentTitle('Findings');
-  const [params, setParams] = useSearchParams();
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
         title="Findings"
-        lead="Diagnosed cases, newest first. Open one for its concern, cause and correction, parts, labour and follow-ups."
+        lead="Diagnosed cases, newest first. Open one to review its findings for the repair order, approve them, download them and send them to the customer."
       />
-      <CaseList
-        filters={findingsFilters(params)}
-        onFiltersChange={(next) =>
-          setParams(next.q ? { q: next.q } : {}, { replace: true, preventScrollReset: true })
-        }
-        showScope={false}
-        showStatus={false}
-        emptyText="No case has been diagnosed yet."
-      />
+      <ReviewQueue />
     </div>
   );
 }

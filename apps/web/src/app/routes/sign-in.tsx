@@ -1,6 +1,12 @@
 // /sign-in: the only screen open without a session.
 import type { QueryClient } from '@tanstack/react-query';
-import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import {
+  Link,
+  redirect,
+  useNavigate,
+  useSearchParams,
+  type LoaderFunctionArgs,
+} from 'react-router';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { getMe, meQueryKey } from '../../lib/auth';
 import { useDocumentTitle } from '../../lib/document-title';
@@ -31,12 +37,18 @@ export function SignInRoute() {
       <div className="flex flex-col gap-2">
         <h1 className="text-2xl font-bold">Sign in</h1>
         <p className="text-ink-muted">
-          Use the e-mail address and password your workshop lead gave you.
+          Use your e-mail address and the password you chose, or the one your workshop lead gave
+          you.
         </p>
       </div>
       <div className="rounded-panel border-2 border-line bg-surface p-4 sm:p-6">
         <SignInForm onSignedIn={() => void navigate(next, { replace: true })} />
       </div>
+      <p>
+        <Link to="/forgot-password" className="font-semibold underline underline-offset-4">
+          Forgot your password?
+        </Link>
+      </p>
     </main>
   );
 }

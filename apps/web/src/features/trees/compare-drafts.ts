@@ -35,7 +35,14 @@ function describe(value: unknown): string {
 
 export function compareDrafts(theirs: EditableTree, mine: EditableTree): DraftComparison {
   const tree: DraftComparison['tree'] = [];
-  for (const field of ['title', 'symptom', 'summary', 'start', 'applicability', 'computed'] as const) {
+  for (const field of [
+    'title',
+    'symptom',
+    'summary',
+    'start',
+    'applicability',
+    'computed',
+  ] as const) {
     if (!same(theirs[field], mine[field])) {
       tree.push({ field, theirs: describe(theirs[field]), mine: describe(mine[field]) });
     }
@@ -48,7 +55,9 @@ export function compareDrafts(theirs: EditableTree, mine: EditableTree): DraftCo
     if (a && b && same(a, b)) continue;
     const fields =
       a && b
-        ? [...new Set([...Object.keys(a), ...Object.keys(b)])].filter((key) => !same(a[key], b[key]))
+        ? [...new Set([...Object.keys(a), ...Object.keys(b)])].filter(
+            (key) => !same(a[key], b[key]),
+          )
         : [];
     nodes.push({ nodeId: id, theirs: titleOf(theirs, id), mine: titleOf(mine, id), fields });
   }

@@ -52,9 +52,7 @@ function normaliseNode(raw: unknown): TreeNode {
     filled = {
       ...filled,
       inputs: (filled.inputs as unknown[]).map((input) =>
-        isObject(input) && !isObject(input.range)
-          ? { ...input, range: { min: 0, max: 0 } }
-          : input,
+        isObject(input) && !isObject(input.range) ? { ...input, range: { min: 0, max: 0 } } : input,
       ),
     };
   }
@@ -179,7 +177,8 @@ export interface ConnectResult {
 export function connectNodes(tree: EditableTree, from: string, to: string): ConnectResult {
   const node = tree.nodes[from];
   const target = nodeTitle(tree, to);
-  if (!node || !tree.nodes[to]) return { tree, message: 'Those steps no longer exist.', changed: false };
+  if (!node || !tree.nodes[to])
+    return { tree, message: 'Those steps no longer exist.', changed: false };
   if (from === to) {
     return { tree, message: 'A step cannot lead to itself.', changed: false };
   }
@@ -253,7 +252,8 @@ export function edgesOf(tree: EditableTree): GraphEdge[] {
   const edges: GraphEdge[] = [];
   for (const [from, node] of Object.entries(tree.nodes)) {
     const add = (kind: GraphEdge['kind'], key: string, to: unknown, label: string) => {
-      if (typeof to === 'string' && to) edges.push({ id: `${from}:${kind}:${key}`, from, to, label, kind });
+      if (typeof to === 'string' && to)
+        edges.push({ id: `${from}:${kind}:${key}`, from, to, label, kind });
     };
     switch (node.kind) {
       case 'question':
@@ -265,7 +265,8 @@ export function edgesOf(tree: EditableTree): GraphEdge[] {
         node.branches.forEach((branch, index) =>
           add('branch', String(index), branch?.to, branch?.label || branch?.when || 'Branch'),
         );
-        if (node.fallback) add('fallback', 'fallback', node.fallback.to, node.fallback.label || 'Otherwise');
+        if (node.fallback)
+          add('fallback', 'fallback', node.fallback.to, node.fallback.label || 'Otherwise');
         break;
       case 'procedure':
         add('done', 'done', node.done, 'Done');
@@ -281,4 +282,23 @@ export function edgesOf(tree: EditableTree): GraphEdge[] {
 /** The dotted form of a definition path, used to find a problem's field in the form. */
 export function pathKey(path: readonly (string | number)[]): string {
   return path.join('.');
+}
+
+/**
+ * The tree with one value replaced at a definition path, copying only the objects on the way
+ * (so untouched nodes keep their identity). `undefined` removes the field when it is saved.
+ */
+export function setIn(tree: EditableTree, path: readonly (string | number)[], value: unknown): EditableTree {
+  const put = (target: unknown, depth: number): unknown => {
+    const key = path[depth];
+    if (key === undefined) return value;
+    if (Array.isArray(target)) {
+      const copy = [...target];
+      copy[Number(key)] = put(copy[Number(key)], depth + 1);
+      return copy;
+    }
+    const object = isObject(target) ? target : {};
+    return { ...object, [key]: put(object[key], depth + 1) };
+  };
+  return put(tree, 0) as EditableTree;
 }

@@ -47,7 +47,9 @@ export function canonicalUnit(quantity: Quantity): UnitCode {
 /** "°C or °F": the units a reading of this quantity may be typed in. */
 export function entryUnitsWords(quantity: Quantity): string {
   const units = infoOf(quantity).entryUnits.map(unitLabel);
-  return units.length > 1 ? `${units.slice(0, -1).join(', ')} or ${units.at(-1)}` : (units[0] ?? '');
+  return units.length > 1
+    ? `${units.slice(0, -1).join(', ')} or ${units.at(-1)}`
+    : (units[0] ?? '');
 }
 
 export function entryUnitOptions(quantity: Quantity): { value: UnitCode; label: string }[] {

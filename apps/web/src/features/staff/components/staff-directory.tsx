@@ -1,10 +1,12 @@
-// The lead's staff screen body: who works here, and a form to add someone.
+// The lead's staff screen body: who works here, an invitation by e-mail, and a form to add
+// someone with a first password.
 import { Panel } from '../../../components/ui/page';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { Table, TableBody, TableHead, TableHeaderCell } from '../../../components/ui/table';
 import { useMe } from '../../../lib/auth';
 import { useStaff } from '../api/get-staff';
 import { AddStaffForm } from './add-staff-form';
+import { InviteStaffForm } from './invite-staff-form';
 import { StaffRow } from './staff-row';
 
 export function StaffDirectory() {
@@ -51,6 +53,9 @@ export function StaffDirectory() {
             </TableBody>
           </Table>
         )}
+      </Panel>
+      <Panel>
+        <InviteStaffForm />
       </Panel>
       <Panel>
         <AddStaffForm />

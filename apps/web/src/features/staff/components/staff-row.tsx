@@ -7,6 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { TableCell, TableRow } from '../../../components/ui/table';
+import { useResendInvitation } from '../api/invite-staff-member';
 import { useUpdateStaffMember } from '../api/update-staff-member';
 import { roleOptions } from './role-options';
 
@@ -72,7 +73,14 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
         )}
       </TableCell>
       <TableCell label="Status">
-        {member.active ? <Badge tone="ok">Active</Badge> : <Badge>Deactivated</Badge>}
+        <div className="flex flex-wrap gap-2">
+          {member.active ? <Badge tone="ok">Active</Badge> : <Badge>Deactivated</Badge>}
+          {member.invitationPending ? (
+            <Badge tone="caution">
+              <span aria-hidden="true">✉&nbsp;</span>Invited, no password yet
+            </Badge>
+          ) : null}
+        </div>
       </TableCell>
       <TableCell label="Access" className="md:col-span-2">
         <div className="flex flex-col gap-3">
@@ -120,6 +128,9 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
               <span className="sr-only">{member.name}</span>
             </Button>
           )}
+          {member.invitationPending && member.active && !isSelf ? (
+            <ResendInvitation member={member} />
+          ) : null}
           {update.error ? (
             <Alert tone="danger" role="alert" title="Not changed">
               <p>{update.error.message}</p>
@@ -128,5 +139,34 @@ export function StaffRow({ member, isSelf }: StaffRowProps) {
         </div>
       </TableCell>
     </TableRow>
+  );
+}
+
+/** A fresh invitation link for someone who has not set a password; the old link stops working. */
+function ResendInvitation({ member }: { member: StaffMember }) {
+  const resend = useResendInvitation();
+  return (
+    <div className="flex flex-col gap-2">
+      <Button
+        variant="secondary"
+        busy={resend.isPending}
+        busyLabel="Sending…"
+        onClick={() => resend.mutate(member.id)}
+      >
+        {'Send invitation again '}
+        <span className="sr-only">to {member.name}</span>
+      </Button>
+      {resend.isSuccess ? (
+        <p role="status" className="text-sm font-semibold text-ok-ink">
+          <span aria-hidden="true">✓ </span>A new link is in the outbox; the old one no longer
+          works.
+        </p>
+      ) : null}
+      {resend.error ? (
+        <p role="alert" className="text-sm font-semibold text-danger-ink">
+          {resend.error.message}
+        </p>
+      ) : null}
+    </div>
   );
 }

@@ -32,15 +32,16 @@ export const treeEntrySchema = z.custom<TreeLibraryEntry & { regressionCaseIds: 
 );
 
 export const treeVersionDetailSchema = z.custom<TreeVersionDetail>(
-  (value) => hasFields(value, ['id', 'version', 'revision', 'definition']) && hasList(value, 'problems'),
+  (value) =>
+    hasFields(value, ['id', 'version', 'revision', 'definition']) && hasList(value, 'problems'),
 );
 
 export const treeVersionInfoSchema = z.custom<TreeVersionInfo>((value) =>
   hasFields(value, ['id', 'version', 'status']),
 );
 
-export const createdTreeSchema = z.custom<{ treeId: string; draft: TreeVersionDetail }>(
-  (value) => hasFields(value, ['treeId', 'draft']),
+export const createdTreeSchema = z.custom<{ treeId: string; draft: TreeVersionDetail }>((value) =>
+  hasFields(value, ['treeId', 'draft']),
 );
 
 export interface TreeDiffResponse {

@@ -38,10 +38,11 @@ import {
   normaliseDefinition,
   pathKey,
   replaceNode,
+  setIn,
   type EditableTree,
 } from '../draft-model';
 import { useDraftAutosave, type SaveState } from '../hooks/use-draft-autosave';
-import type { FormContext, StepOption } from './editor-fields';
+import type { FormContext, SetAt, StepOption } from './editor-fields';
 import { NodeForm } from './node-form';
 import { ProblemList } from './problem-list';
 import { SaveConflict } from './save-conflict';
@@ -141,23 +142,39 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
     return messages;
   }, [problems]);
   const names = useMemo(() => namesOf(deferred), [deferred]);
+  // Rebuilt only when a step is added, removed or renamed, so the 'Leads to' boxes can skip work.
+  const titlesKey = Object.keys(tree.nodes)
+    .map((id) => `${id}\u0001${nodeTitle(tree, id)}`)
+    .join('\u0002');
   const options = useMemo<StepOption[]>(
-    () => Object.keys(tree.nodes).map((id) => ({ id, title: nodeTitle(tree, id) })),
-    [tree],
+    () =>
+      titlesKey
+        .split('\u0002')
+        .filter(Boolean)
+        .map((entry) => {
+          const [id = '', title = ''] = entry.split('\u0001');
+          return { id, title };
+        }),
+    [titlesKey],
   );
   const onSampleChange = useCallback(
     (name: string, text: string) => setSamples((before) => ({ ...before, [name]: text })),
     [],
   );
+  const setAt = useCallback<SetAt>(
+    (path, value) => setTree((before) => setIn(before, path, value)),
+    [],
+  );
   const context = useMemo<FormContext>(
     () => ({
       options,
+      setAt,
       errorAt: (path) => messagesByPath.get(pathKey(path)),
       names,
       samples,
       onSampleChange,
     }),
-    [options, messagesByPath, names, samples, onSampleChange],
+    [options, setAt, messagesByPath, names, samples, onSampleChange],
   );
 
   const update = (next: EditableTree) => setTree(next);
@@ -425,7 +442,9 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
                 <li>From a question: a new answer leading there (rename it in the form).</li>
                 <li>From a procedure: “Done” if it is not set, otherwise “Could not do”.</li>
                 <li>From a measurement: a new branch; write its condition in the form.</li>
-                <li>On a touch screen: tap the handle under a step, then the other step’s top handle.</li>
+                <li>
+                  On a touch screen: tap the handle under a step, then the other step’s top handle.
+                </li>
               </ul>
             </details>
           </div>
@@ -442,7 +461,10 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
           />
         </div>
 
-        <div ref={formRef} className="min-w-0 scroll-mt-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-5">
+        <div
+          ref={formRef}
+          className="min-w-0 scroll-mt-4 rounded-panel border-2 border-line bg-surface p-4 sm:p-5"
+        >
           {mode === 'try' ? (
             <TryItPreview
               tree={deferred}

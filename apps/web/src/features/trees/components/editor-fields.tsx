@@ -3,7 +3,7 @@
 // control carries `data-path`, the definition path validation names, so a problem in the list
 // can take the lead straight to the box it is about.
 import type { HazardKind, Quantity } from '@heatpath/fault-tree';
-import { useId, useState, type ReactNode } from 'react';
+import { memo, useId, useState, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FieldError, SelectField, TextField } from '../../../components/ui/field';
 import { hazardKinds, pathKey } from '../draft-model';
@@ -25,7 +25,15 @@ interface NumberFieldProps {
 }
 
 /** A number box: keeps the text as typed ("1," on the way to "1,5") and stores only numbers. */
-export function NumberField({ label, value, onChange, path, errorAt, hint, suffix }: NumberFieldProps) {
+export function NumberField({
+  label,
+  value,
+  onChange,
+  path,
+  errorAt,
+  hint,
+  suffix,
+}: NumberFieldProps) {
   const [text, setText] = useState(value === undefined ? '' : String(value));
   const [shown, setShown] = useState(value);
   // The value changed from outside (a reload, another box): show it.
@@ -67,51 +75,81 @@ export interface StepOption {
   title: string;
 }
 
+/** Sets one value of the working copy by its definition path; stable for the editor's life. */
+export type SetAt = (path: Path, value: unknown) => void;
+
 interface TargetSelectProps {
   label: string;
   value: string | undefined;
-  onChange: (value: string | undefined) => void;
   options: readonly StepOption[];
   path: Path;
   errorAt: ErrorAt;
+  /** Writes the choice; a target select writes by path so it can skip re-rendering its options. */
+  setAt: SetAt;
   hint?: ReactNode;
   /** Leaves out the step the choice belongs to: a step never leads to itself. */
   exclude?: string;
-  /** Shown for no target; omit to make a target required-looking ("Choose a step"). */
+  /** Shown for no target. */
   emptyLabel?: string;
+  /** An emptied choice removes the field (a procedure's way on) instead of storing ''. */
+  removeWhenEmpty?: boolean;
 }
 
-export function TargetSelect({
-  label,
-  value,
-  onChange,
-  options,
-  path,
-  errorAt,
-  hint,
-  exclude,
-  emptyLabel = 'Choose a step',
-}: TargetSelectProps) {
-  const known = options.some((option) => option.id === value);
-  const choices = [
-    { value: '', label: emptyLabel },
-    ...(value && !known ? [{ value, label: `“${value}” (no such step)` }] : []),
-    ...options
-      .filter((option) => option.id !== exclude)
-      .map((option) => ({ value: option.id, label: option.title })),
-  ];
-  return (
-    <SelectField
-      label={label}
-      hint={hint}
-      options={choices}
-      value={value ?? ''}
-      data-path={pathKey(path)}
-      error={errorAt(path)}
-      onChange={(event) => onChange(event.target.value || undefined)}
-    />
-  );
+export function TargetSelect({ errorAt, ...props }: TargetSelectProps) {
+  return <TargetSelectControl {...props} error={errorAt(props.path)} />;
 }
+
+type TargetSelectControlProps = Omit<TargetSelectProps, 'errorAt'> & { error: string | undefined };
+
+// A tree of 300 steps gives every "Leads to" box 300 choices; re-render them only when the
+// steps, this box's value or its problem changed, not on every keystroke elsewhere in the form.
+const TargetSelectControl = memo(
+  function TargetSelectControl({
+    label,
+    value,
+    options,
+    path,
+    setAt,
+    hint,
+    exclude,
+    emptyLabel = 'Choose a step',
+    removeWhenEmpty = false,
+    error,
+  }: TargetSelectControlProps) {
+    const known = options.some((option) => option.id === value);
+    const choices = [
+      { value: '', label: emptyLabel },
+      ...(value && !known ? [{ value, label: `“${value}” (no such step)` }] : []),
+      ...options
+        .filter((option) => option.id !== exclude)
+        .map((option) => ({ value: option.id, label: option.title })),
+    ];
+    return (
+      <SelectField
+        label={label}
+        hint={hint}
+        options={choices}
+        value={value ?? ''}
+        data-path={pathKey(path)}
+        error={error}
+        onChange={(event) =>
+          setAt(path, event.target.value || (removeWhenEmpty ? undefined : ''))
+        }
+      />
+    );
+  },
+  (a, b) =>
+    a.value === b.value &&
+    a.label === b.label &&
+    a.options === b.options &&
+    a.exclude === b.exclude &&
+    a.error === b.error &&
+    a.hint === b.hint &&
+    a.emptyLabel === b.emptyLabel &&
+    a.removeWhenEmpty === b.removeWhenEmpty &&
+    a.setAt === b.setAt &&
+    pathKey(a.path) === pathKey(b.path),
+);
 
 interface ListRowProps {
   legend: string;
@@ -207,9 +245,23 @@ interface TextListProps {
 }
 
 /** A list of short texts (tools, follow-ups, notes on applicability). */
-export function TextList({ title, itemLabel, addLabel, items, onChange, path, errorAt, hint }: TextListProps) {
+export function TextList({
+  title,
+  itemLabel,
+  addLabel,
+  items,
+  onChange,
+  path,
+  errorAt,
+  hint,
+}: TextListProps) {
   return (
-    <ListSection title={title} hint={hint} addLabel={addLabel} onAdd={() => onChange([...items, ''])}>
+    <ListSection
+      title={title}
+      hint={hint}
+      addLabel={addLabel}
+      onAdd={() => onChange([...items, ''])}
+    >
       {items.map((item, index) => (
         <div key={index} className="flex items-end gap-2">
           <div className="min-w-0 flex-1">
@@ -285,6 +337,7 @@ export const hazardOptions = hazardKinds.map((hazard) => ({
 /** What every node form needs besides its node: the steps to lead to, problems, formula names. */
 export interface FormContext {
   options: readonly StepOption[];
+  setAt: SetAt;
   errorAt: ErrorAt;
   names: Readonly<Record<string, Quantity>>;
   samples: Readonly<Record<string, string>>;

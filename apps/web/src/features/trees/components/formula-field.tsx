@@ -53,7 +53,15 @@ export function FormulaField({
       return checkFormula(value, { names, expect });
     } catch {
       // Only an unknown quantity (from an imported file) gets here; validation names it.
-      return { ok: false, problems: [{ code: 'formula-syntax', message: 'This formula cannot be checked until its quantity is fixed.' }] };
+      return {
+        ok: false,
+        problems: [
+          {
+            code: 'formula-syntax',
+            message: 'This formula cannot be checked until its quantity is fixed.',
+          },
+        ],
+      };
     }
   }, [value, names, expect]);
 

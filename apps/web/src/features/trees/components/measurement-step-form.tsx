@@ -158,7 +158,9 @@ export function MeasurementFields({
                 label="Hint (optional)"
                 value={input.hint ?? ''}
                 data-path={pathKey([...at, 'hint'])}
-                onChange={(event) => updateInput(index, input, { hint: event.target.value || undefined })}
+                onChange={(event) =>
+                  updateInput(index, input, { hint: event.target.value || undefined })
+                }
               />
             </ListRow>
           );
@@ -208,7 +210,7 @@ export function MeasurementFields({
                 exclude={id}
                 path={[...at, 'to']}
                 errorAt={errorAt}
-                onChange={(to) => updateBranch(index, branch, { to: to ?? '' })}
+                setAt={context.setAt}
               />
               <TextField
                 label="Label (optional)"
@@ -216,7 +218,9 @@ export function MeasurementFields({
                 value={branch.label ?? ''}
                 data-path={pathKey([...at, 'label'])}
                 error={errorAt([...at, 'label'])}
-                onChange={(event) => updateBranch(index, branch, { label: event.target.value || undefined })}
+                onChange={(event) =>
+                  updateBranch(index, branch, { label: event.target.value || undefined })
+                }
               />
             </ListRow>
           );
@@ -231,7 +235,9 @@ export function MeasurementFields({
             className="size-5 accent-primary"
             checked={node.fallback !== undefined}
             onChange={(event) =>
-              onChange({ fallback: event.target.checked ? { to: '', label: 'Otherwise' } : undefined })
+              onChange({
+                fallback: event.target.checked ? { to: '', label: 'Otherwise' } : undefined,
+              })
             }
           />
           <span>When no branch holds, go on to a step</span>
@@ -245,7 +251,7 @@ export function MeasurementFields({
               exclude={id}
               path={[...path, 'fallback', 'to']}
               errorAt={errorAt}
-              onChange={(to) => onChange({ fallback: { ...node.fallback, to: to ?? '' } })}
+                setAt={context.setAt}
             />
             <TextField
               label="Otherwise label (optional)"

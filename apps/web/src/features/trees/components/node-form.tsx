@@ -104,9 +104,7 @@ export function NodeForm({
         />
       ) : (
         <Alert tone="danger" title="This step cannot be edited here">
-          <p>
-            Its kind is not one Heatpath knows. Delete it, or fix the file and import it again.
-          </p>
+          <p>Its kind is not one Heatpath knows. Delete it, or fix the file and import it again.</p>
         </Alert>
       )}
 

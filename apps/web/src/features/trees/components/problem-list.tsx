@@ -32,8 +32,8 @@ export function ProblemList({ tree, problems, onShow, className = '' }: ProblemL
       ) : (
         <>
           <p className="text-sm text-ink-muted">
-            {problemCount(problems.length)} to fix before publishing. The draft is still saved as
-            it is.
+            {problemCount(problems.length)} to fix before publishing. The draft is still saved as it
+            is.
           </p>
           <ul aria-label="Problems" className="flex flex-col gap-1 overflow-y-auto">
             {problems.map((problem, index) => (

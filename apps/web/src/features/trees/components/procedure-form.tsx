@@ -35,7 +35,8 @@ export function ProcedureFields({
           exclude={id}
           path={[...path, 'done']}
           errorAt={errorAt}
-          onChange={(done) => onChange({ done })}
+                setAt={context.setAt}
+          removeWhenEmpty
         />
         <TargetSelect
           label="“Could not do” leads to"
@@ -44,7 +45,8 @@ export function ProcedureFields({
           exclude={id}
           path={[...path, 'couldNotDo']}
           errorAt={errorAt}
-          onChange={(couldNotDo) => onChange({ couldNotDo })}
+                setAt={context.setAt}
+          removeWhenEmpty
         />
       </div>
     </>

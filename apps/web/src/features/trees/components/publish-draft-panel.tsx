@@ -79,7 +79,11 @@ export function PublishDraftPanel({
     publish.mutate(
       {
         treeId,
-        request: { revision: draft.revision, changeNote: changeNote.trim(), confirmChangedOutcomes },
+        request: {
+          revision: draft.revision,
+          changeNote: changeNote.trim(),
+          confirmChangedOutcomes,
+        },
       },
       {
         onSuccess: (published) => onPublished(published.version),

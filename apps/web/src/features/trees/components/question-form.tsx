@@ -64,7 +64,9 @@ export function QuestionFields({
               legend={legend}
               onRemove={() => onChange({ choices: removeItem(choices, index) })}
               onMoveUp={
-                index > 0 ? () => onChange({ choices: moveItem(choices, index, index - 1) }) : undefined
+                index > 0
+                  ? () => onChange({ choices: moveItem(choices, index, index - 1) })
+                  : undefined
               }
             >
               <TextField
@@ -81,7 +83,7 @@ export function QuestionFields({
                 exclude={id}
                 path={[...at, 'to']}
                 errorAt={errorAt}
-                onChange={(to) => updateChoice(index, { to: to ?? '' }, choice)}
+                setAt={context.setAt}
               />
               <TextField
                 label="Hint (optional)"

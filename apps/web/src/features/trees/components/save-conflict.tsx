@@ -35,7 +35,12 @@ export function SaveConflict({
       <p>{message}</p>
       <p>Your changes are still on this screen. Choose what to do with them:</p>
       <div className="flex flex-wrap gap-3">
-        <Button variant="secondary" onClick={onReloadTheirs} busy={loading && !theirs} busyLabel="Loading theirs…">
+        <Button
+          variant="secondary"
+          onClick={onReloadTheirs}
+          busy={loading && !theirs}
+          busyLabel="Loading theirs…"
+        >
           Reload theirs
         </Button>
         {comparison ? null : (

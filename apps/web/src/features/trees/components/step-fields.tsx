@@ -45,7 +45,10 @@ export function SafetyFields({
           onChange({
             cautions: [
               ...cautions,
-              { hazard: hazards.find((h) => !cautions.some((c) => c.hazard === h)) ?? 'hot-surface', text: '' },
+              {
+                hazard: hazards.find((h) => !cautions.some((c) => c.hazard === h)) ?? 'hot-surface',
+                text: '',
+              },
             ],
           })
         }
@@ -81,7 +84,10 @@ export function SafetyFields({
                 error={errorAt([...at, 'text'])}
                 onChange={(event) =>
                   onChange({
-                    cautions: replaceItem(cautions, index, { ...caution, text: event.target.value }),
+                    cautions: replaceItem(cautions, index, {
+                      ...caution,
+                      text: event.target.value,
+                    }),
                   })
                 }
               />
@@ -150,7 +156,9 @@ export function StepExtras({
                   { value: 'log', label: 'Data log (CSV)' },
                 ]}
                 value={item.kind}
-                onChange={(event) => update({ kind: event.target.value as EvidenceRequest['kind'] })}
+                onChange={(event) =>
+                  update({ kind: event.target.value as EvidenceRequest['kind'] })
+                }
               />
               <TextField
                 label="What to capture"

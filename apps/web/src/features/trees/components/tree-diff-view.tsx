@@ -126,7 +126,10 @@ export function TreeDiffView({ treeId, versions, from, to }: TreeDiffViewProps) 
           retrying={diff.isRefetching}
         />
       ) : (
-        <section aria-label={`Changes from ${fromName} to ${toName}`} className="flex flex-col gap-6">
+        <section
+          aria-label={`Changes from ${fromName} to ${toName}`}
+          className="flex flex-col gap-6"
+        >
           <p className="text-lg" aria-live="polite">
             From {fromName} to {toName}: {diff.data.diff.added.length} added,{' '}
             {diff.data.diff.removed.length} removed, {diff.data.diff.changed.length} changed,{' '}
@@ -191,7 +194,10 @@ export function TreeDiffView({ treeId, versions, from, to }: TreeDiffViewProps) 
           ) : null}
           {diff.data.diff.changed.map((node) => (
             <Panel key={node.nodeId} labelledBy={`diff-${node.nodeId}`}>
-              <h2 id={`diff-${node.nodeId}`} className="mb-3 flex flex-wrap items-center gap-2 text-xl font-bold">
+              <h2
+                id={`diff-${node.nodeId}`}
+                className="mb-3 flex flex-wrap items-center gap-2 text-xl font-bold"
+              >
                 <Badge tone="caution">
                   <span aria-hidden="true">~&nbsp;</span>Changed
                 </Badge>

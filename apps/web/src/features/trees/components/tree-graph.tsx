@@ -75,10 +75,14 @@ const StepNodeView = memo(function StepNodeView({
         // Moving through the steps with the keyboard brings each one into view as it is reached.
         onFocus={(event) => {
           if (!event.currentTarget.matches(':focus-visible')) return;
-          void flow.setCenter(positionAbsoluteX + NODE_WIDTH / 2, positionAbsoluteY + NODE_HEIGHT / 2, {
-            zoom: Math.max(flow.getZoom(), 0.7),
-            duration: 200,
-          });
+          void flow.setCenter(
+            positionAbsoluteX + NODE_WIDTH / 2,
+            positionAbsoluteY + NODE_HEIGHT / 2,
+            {
+              zoom: Math.max(flow.getZoom(), 0.7),
+              duration: 200,
+            },
+          );
         }}
       >
         <span className="flex w-full items-center justify-between gap-2 text-sm text-ink-muted">
@@ -86,7 +90,9 @@ const StepNodeView = memo(function StepNodeView({
           <span className="flex gap-1">
             {data.isStart ? <span className="font-semibold text-ink">▶ Start</span> : null}
             {data.selected ? <span className="font-semibold text-primary">Editing</span> : null}
-            {data.current ? <span className="font-semibold text-info-ink">Walk is here</span> : null}
+            {data.current ? (
+              <span className="font-semibold text-info-ink">Walk is here</span>
+            ) : null}
           </span>
         </span>
         <span className="line-clamp-2 w-full text-base leading-tight font-semibold">
@@ -102,7 +108,9 @@ const StepNodeView = memo(function StepNodeView({
           {[
             data.kindLabel,
             data.isStart ? 'first step' : '',
-            data.problems > 0 ? `${data.problems} problem${data.problems === 1 ? '' : 's'}` : 'no problems',
+            data.problems > 0
+              ? `${data.problems} problem${data.problems === 1 ? '' : 's'}`
+              : 'no problems',
           ]
             .filter(Boolean)
             .join(', ')}
@@ -301,7 +309,10 @@ export const TreeGraph = memo(function TreeGraph({
         const words = group.map((edge) => edge.label);
         return {
           edge: first,
-          label: group.length === 1 ? shorten(first.label) : `${group.length} ways: ${shorten(words[0] ?? '', 16)} …`,
+          label:
+            group.length === 1
+              ? shorten(first.label)
+              : `${group.length} ways: ${shorten(words[0] ?? '', 16)} …`,
           ariaLabel: `${words.join('; ')}: from “${titleOf(first.from)}” to “${titleOf(first.to)}”`,
         };
       }),

@@ -150,9 +150,7 @@ function WalkPathList({ view }: { view: WalkView }) {
           {entry.answer.kind === 'measurement'
             ? entry.answer.readings.map((reading) => reading.display).join(', ')
             : entry.answer.label}
-          {entry.routeLabel && entry.answer.kind !== 'choice' && entry.routeLabel !== entry.answer.label
-            ? ` → ${entry.routeLabel}`
-            : ''}
+          {entry.answer.kind === 'measurement' && entry.routeLabel ? ` → ${entry.routeLabel}` : ''}
         </li>
       ))}
     </ol>
@@ -170,7 +168,10 @@ function CurrentStep({ tree, snapshot, view, onAnswer }: CurrentStepProps) {
   const node = view.currentNode;
   const position = view.position;
   return (
-    <article aria-label="Current step" className="flex flex-col gap-4 rounded-panel border-2 border-line-strong bg-surface p-4">
+    <article
+      aria-label="Current step"
+      className="flex flex-col gap-4 rounded-panel border-2 border-line-strong bg-surface p-4"
+    >
       <p className="text-sm font-semibold text-ink-muted">
         {node.kind === 'outcome' ? 'Finding' : `Step ${view.path.length + 1}`}
       </p>
@@ -218,7 +219,12 @@ function CurrentStep({ tree, snapshot, view, onAnswer }: CurrentStepProps) {
                 size="large"
                 className="justify-start text-left"
                 onClick={() =>
-                  onAnswer({ type: 'answer.choice', nodeId: node.id, position, choiceId: choice.id })
+                  onAnswer({
+                    type: 'answer.choice',
+                    nodeId: node.id,
+                    position,
+                    choiceId: choice.id,
+                  })
                 }
               >
                 {choice.label}
@@ -399,7 +405,10 @@ function PreviewReadings({
       onSubmit={(event) => {
         event.preventDefault();
         setTried(true);
-        if (node.inputs.every((input) => readings[input.name]) && Object.keys(preview.fields).length === 0) {
+        if (
+          node.inputs.every((input) => readings[input.name]) &&
+          Object.keys(preview.fields).length === 0
+        ) {
           onAnswer({ type: 'answer.measurement', nodeId: node.id, position, readings });
         }
       }}
@@ -427,14 +436,19 @@ function PreviewReadings({
             autoComplete="off"
             value={typed[input.name] ?? ''}
             error={error}
-            onChange={(event) => setTyped((before) => ({ ...before, [input.name]: event.target.value }))}
+            onChange={(event) =>
+              setTyped((before) => ({ ...before, [input.name]: event.target.value }))
+            }
             after={
               options.length > 1 ? (
                 <select
                   aria-label={`Unit for ${input.label}`}
                   value={unit}
                   onChange={(event) =>
-                    setUnits((before) => ({ ...before, [input.name]: event.target.value as UnitCode }))
+                    setUnits((before) => ({
+                      ...before,
+                      [input.name]: event.target.value as UnitCode,
+                    }))
                   }
                   className="min-h-touch shrink-0 rounded-control border-2 border-line-strong bg-sunken px-3 font-semibold"
                 >
@@ -454,11 +468,17 @@ function PreviewReadings({
         );
       })}
       {live.length > 0 || next ? (
-        <section aria-label="Worked out as you type" className="flex flex-col gap-2 rounded-control bg-sunken px-4 py-3">
+        <section
+          aria-label="Worked out as you type"
+          className="flex flex-col gap-2 rounded-control bg-sunken px-4 py-3"
+        >
           {live.length > 0 ? (
             <dl className="flex flex-col gap-1" aria-live="polite">
               {live.map((value) => (
-                <div key={value.name} className="flex flex-wrap items-baseline justify-between gap-x-3">
+                <div
+                  key={value.name}
+                  className="flex flex-wrap items-baseline justify-between gap-x-3"
+                >
                   <dt>{value.label}</dt>
                   <dd className="text-xl font-bold">{value.display}</dd>
                 </div>
@@ -475,7 +495,11 @@ function PreviewReadings({
       ) : null}
       <div>
         <Button type="submit" size="large">
-          {node.inputs.length === 1 ? 'Save reading' : node.inputs.length === 0 ? 'Continue' : 'Save readings'}
+          {node.inputs.length === 1
+            ? 'Save reading'
+            : node.inputs.length === 0
+              ? 'Continue'
+              : 'Save readings'}
         </Button>
       </div>
     </form>

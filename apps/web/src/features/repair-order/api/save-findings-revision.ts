@@ -1,0 +1,36 @@
+// PUT /api/cases/:caseId/findings: saves the reviewed findings as a new revision (and the photos
+// chosen for the repair order). The request names the revision it edited; 409 means someone
+// saved after it was opened.
+import type { UpdateFindingsRequest } from '@heatpath/contracts';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiRequest } from '../../../lib/api-client';
+import { casesRootKey, repairOrderKeys } from './get-repair-order';
+
+// The answer is the whole case page; this screen reloads its own review instead.
+const savedSchema = z.object({ id: z.string() });
+
+export interface SaveFindingsRevisionInput {
+  caseId: string;
+  findings: UpdateFindingsRequest;
+}
+
+export function saveFindingsRevision({ caseId, findings }: SaveFindingsRevisionInput) {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/findings`, savedSchema, {
+    method: 'PUT',
+    body: findings,
+  });
+}
+
+export function useSaveFindingsRevision() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    networkMode: 'always',
+    mutationFn: saveFindingsRevision,
+    onSuccess: (_saved, { caseId }) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: repairOrderKeys.detail(caseId) }),
+        queryClient.invalidateQueries({ queryKey: casesRootKey }),
+      ]),
+  });
+}

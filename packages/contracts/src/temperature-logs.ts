@@ -1,0 +1,172 @@
+// Temperature logs on a case as the API takes and returns them: the upload's optional column
+// mapping, the "needs mapping" answer with the file's candidate columns, a stored log with its
+// analysis and candidate readings, and the series the chart draws. The series, the analysis and
+// the readings belong to the temperature-log package and are referenced, not re-typed.
+import { z } from 'zod';
+import type {
+  CandidateColumn,
+  CandidateReading,
+  ColumnMapping,
+  DetectedFormat,
+  MappingField,
+  ResolvedMapping,
+  TemperatureLogAnalysis,
+} from '@heatpath/temperature-log';
+import type { PersonRef } from './case-detail';
+
+/** Largest log file accepted, in bytes (a 100,000-reading export is about 2–4 MB). */
+export const temperatureLogMaxBytes = 20 * 1024 * 1024;
+/** Most points the chart series holds; longer windows are thinned keeping each bucket's extremes. */
+export const chartMaxPoints = 2000;
+
+const columnIndex = z
+  .number({ error: 'Choose a column.' })
+  .int('A column is chosen by its position, a whole number.')
+  .min(0, 'A column is chosen by its position, from 0.')
+  .max(999);
+const optionalColumn = columnIndex.nullable().optional();
+
+export const temperatureUnits = ['degC', 'degF'] as const;
+
+/** The short form's answer: which column holds what, and the units when the header is silent. */
+export const columnMappingSchema = z
+  .object({
+    time: columnIndex,
+    coolant: columnIndex,
+    intakeAir: optionalColumn,
+    ambient: optionalColumn,
+    vehicleSpeed: optionalColumn,
+    engineSpeed: optionalColumn,
+    fanDuty: optionalColumn,
+    temperatureUnit: z.enum(temperatureUnits, { error: 'Say whether it is °C or °F.' }).optional(),
+    vehicleSpeedUnit: z.enum(['km/h', 'mph']).optional(),
+    timeUnit: z.enum(['seconds', 'milliseconds', 'minutes']).optional(),
+  })
+  .strict() satisfies z.ZodType<ColumnMapping>;
+
+/** POST /api/cases/:caseId/logs/:pendingUploadId/mapping and PUT /api/cases/:caseId/logs/:logId/mapping */
+export const logMappingRequestSchema = z.object({ mapping: columnMappingSchema });
+export type LogMappingRequest = z.infer<typeof logMappingRequestSchema>;
+
+/** The multipart fields beside "file" on POST /api/cases/:caseId/logs. */
+export const logUploadFieldsSchema = z.object({
+  nodeId: z.string().trim().min(1).max(80).optional(),
+  /** A mapping chosen before uploading, as JSON text (multipart fields are text). */
+  mapping: z
+    .string()
+    .max(2000, 'The mapping is too long.')
+    .transform((text, ctx) => {
+      try {
+        return JSON.parse(text) as unknown;
+      } catch {
+        ctx.addIssue({ code: 'custom', message: 'The mapping is not valid JSON.' });
+        return z.NEVER;
+      }
+    })
+    .pipe(columnMappingSchema)
+    .optional(),
+});
+
+/** GET /api/cases/:caseId/logs/:logId — analysis settings and the chart's time window. */
+export const logDetailQuerySchema = z
+  .object({
+    /** Over-temperature threshold, °C; the episodes are found again with it. */
+    threshold: z.coerce
+      .number({ error: 'The threshold is a temperature in °C.' })
+      .min(60, 'An over-temperature threshold below 60 °C is not a useful one.')
+      .max(150, 'Heatpath reads coolant temperatures up to 150 °C.')
+      .optional(),
+    /** Shortest time above the threshold that counts, s. */
+    minEpisodeSeconds: z.coerce.number().int().min(1).max(3600).optional(),
+    /** The chart window, seconds from the first reading. */
+    from: z.coerce.number().min(0).optional(),
+    to: z.coerce.number().min(0).optional(),
+    maxPoints: z.coerce.number().int().min(50).max(chartMaxPoints).optional(),
+  })
+  .refine((q) => q.from === undefined || q.to === undefined || q.to > q.from, {
+    message: 'The end of the window must come after its start.',
+    path: ['to'],
+  });
+export type LogDetailQuery = z.infer<typeof logDetailQuerySchema>;
+
+export type LogChannel = 'intakeAirC' | 'ambientC' | 'vehicleSpeedKph' | 'engineSpeedRpm' | 'fanDuty';
+export type MappingSource = 'detected' | 'confirmed' | 'remembered';
+
+/** The readings the chart draws: all of them, or at most `maxPoints` keeping each bucket's extremes. */
+export interface ChartSeries {
+  from: number;
+  to: number;
+  /** Readings of the log inside the window. */
+  readingsInWindow: number;
+  /** True when the window held more readings than `maxPoints` and was thinned. */
+  downsampled: boolean;
+  maxPoints: number;
+  times: number[];
+  coolantC: number[];
+  intakeAirC: (number | null)[] | null;
+  ambientC: (number | null)[] | null;
+  vehicleSpeedKph: (number | null)[] | null;
+  engineSpeedRpm: (number | null)[] | null;
+  fanDuty: (number | null)[] | null;
+}
+
+export interface TemperatureLogSummary {
+  id: string;
+  caseId: string;
+  /** The step the log was attached to; null for the case as a whole. */
+  nodeId: string | null;
+  name: string;
+  byteSize: number;
+  attachmentId: string;
+  /** The original file, as uploaded. */
+  fileUrl: string;
+  readings: number;
+  skippedRows: number;
+  durationSeconds: number;
+  /** The first reading's clock time or timestamp as written in the file. */
+  startedAt: string | null;
+  channels: LogChannel[];
+  sourceSignature: string;
+  mapping: ResolvedMapping;
+  mappingSource: MappingSource;
+  detected: DetectedFormat;
+  /** At the default settings, for the list. */
+  headline: { peakC: number; episodes: number; openingC: number | null };
+  uploadedBy: PersonRef;
+  createdAt: string;
+}
+
+export interface TemperatureLogDetail extends TemperatureLogSummary {
+  analysis: TemperatureLogAnalysis;
+  candidateReadings: CandidateReading[];
+  series: ChartSeries;
+  /** The file's columns, so the mapping can be changed; null when the file mapped itself. */
+  columns: CandidateColumn[] | null;
+}
+
+export interface TemperatureLogList {
+  logs: TemperatureLogSummary[];
+}
+
+/** A file that needs its columns confirmed: the form's content, and the upload to finish. */
+export interface LogNeedsMapping {
+  status: 'needs-mapping';
+  pendingUploadId: string;
+  name: string;
+  sourceSignature: string;
+  detected: DetectedFormat;
+  columns: CandidateColumn[];
+  proposed: Partial<ColumnMapping>;
+  unsure: MappingField[];
+  reasons: string[];
+  /** Set when the workshop's remembered mapping for this source no longer fits the file. */
+  rememberedProblem: string | null;
+}
+
+export interface LogStored {
+  status: 'stored';
+  log: TemperatureLogDetail;
+}
+
+/** POST /api/cases/:caseId/logs and POST …/logs/:pendingUploadId/mapping */
+export type LogUploadResult = LogStored | LogNeedsMapping;
