@@ -54,9 +54,16 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   return path;
 }
 
-export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+/** Fill and send the sign-in form, without waiting for the outcome. */
+export async function submitSignIn(page: Page, email: string, password: string): Promise<void> {
   await page.goto('/sign-in');
   await page.getByLabel('E-mail address').fill(email);
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Sign in and wait until the signed-in frame shows, so a following navigation cannot cut the request short. */
+export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+  await submitSignIn(page, email, password);
+  await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: 30_000 });
 }

@@ -1,7 +1,7 @@
 // Each demo role signs in and sees its own navigation; a wrong password shows the message; the
 // lead manages staff and another workshop's lead sees none of it.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, screenshot, signIn } from './browser';
+import { launch, screenshot, signIn, submitSignIn } from './browser';
 import type { BrowserSession } from './browser';
 
 let session: BrowserSession;
@@ -62,7 +62,7 @@ describe('signing in', () => {
 
   it('shows one clear message for a wrong password', async () => {
     const { page, context } = await session.newPage({ width: 390, height: 844 });
-    await signIn(page, 'lead@harbourlane.test', 'not-the-password');
+    await submitSignIn(page, 'lead@harbourlane.test', 'not-the-password');
     const alert = page.getByRole('alert');
     await alert.waitFor();
     expect(await alert.textContent()).toMatch(/do not match an active account/);

@@ -86,6 +86,30 @@ const routes: RouteCase[] = [
     allowed: readers,
     ok: 404,
   },
+  // Temperature logs; temperature-logs.test.ts has the full table with real logs and uploads.
+  { method: 'get', path: (f) => `/api/cases/${f.caseId}/logs`, allowed: readers, ok: 200 },
+  {
+    method: 'get',
+    path: (f) => `/api/cases/${f.caseId}/logs/${randomUUID()}`,
+    allowed: readers,
+    ok: 404,
+  },
+  // Without a file the roles that may upload get the 400 that asks for one.
+  { method: 'post', path: (f) => `/api/cases/${f.caseId}/logs`, allowed: walkers, ok: 400 },
+  {
+    method: 'post',
+    path: (f) => `/api/cases/${f.caseId}/logs/${randomUUID()}/mapping`,
+    body: () => ({ mapping: { time: 0, coolant: 1 } }),
+    allowed: walkers,
+    ok: 404,
+  },
+  {
+    method: 'put',
+    path: (f) => `/api/cases/${f.caseId}/logs/${randomUUID()}/mapping`,
+    body: () => ({ mapping: { time: 0, coolant: 1 } }),
+    allowed: walkers,
+    ok: 404,
+  },
 ];
 
 async function fixture() {
@@ -121,8 +145,8 @@ describe('case routes × roles', () => {
     }
     it(`${label(route)} unauthenticated → 401`, async () => {
       const { f } = await fixture();
-      const res = await supertest(app)
-        [route.method](route.path(f))
+      const anonymous = supertest(app);
+      const res = await anonymous[route.method](route.path(f))
         .set(clientHeaders)
         .send(route.body?.(f));
       expect(res.status).toBe(401);
