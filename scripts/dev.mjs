@@ -1,5 +1,6 @@
-// `npm run dev`: the start command's database, the API under tsx watch on PORT (default 3000)
-// and Vite's dev server on 5173 proxying /api to it. For working on Heatpath, not for serving.
+// `npm run dev`: the start command's database, the API under tsx watch on PORT (default 3000),
+// Vite's dev server on 5173 proxying /api to it, and the local mail fake. For working on
+// Heatpath, not for serving.
 import { spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { ensureSecret, startCluster } from './lib/postgres.mjs';
@@ -36,7 +37,22 @@ async function main() {
     'Seeding failed.',
     { cwd: api, env },
   );
+  // The same local mail fake as npm start, unless SMTP_HOST names a real server.
+  const mailFake = process.env.SMTP_HOST
+    ? []
+    : [
+        spawn(process.execPath, ['--import', 'tsx', 'src/dev/smtp-fake.ts'], {
+          cwd: api,
+          env: {
+            ...env,
+            SMTP_FAKE_PORT: process.env.SMTP_PORT ?? '2525',
+            SMTP_FAKE_DIR: join(root, '.data', 'mail'),
+          },
+          stdio: 'inherit',
+        }),
+      ];
   const children = [
+    ...mailFake,
     spawn(pnpm[0], [...pnpm[1], 'exec', 'tsx', 'watch', 'src/server.ts'], {
       cwd: api,
       env,

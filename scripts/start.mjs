@@ -79,7 +79,11 @@ async function main() {
       stdio: ['ignore', 'ignore', 'inherit'],
     });
     process.once('exit', () => mailFake?.kill('SIGTERM'));
-    Object.assign(env, { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(smtpPort), SMTP_SECURE: 'false' });
+    Object.assign(env, {
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(smtpPort),
+      SMTP_SECURE: 'false',
+    });
   }
   env.PUBLIC_URL = process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`;
 

@@ -167,6 +167,7 @@ async function main() {
         E2E_BASE_URL: baseUrl,
         CHROMIUM_PATH: chromium,
         E2E_ARTIFACTS: join(resultsDir, 'screenshots'),
+        E2E_MAIL_DIR: join(resultsDir, 'mail'),
       });
     } finally {
       server.kill('SIGTERM');

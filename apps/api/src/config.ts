@@ -42,14 +42,30 @@ const envSchema = z
     SMTP_USER: z.string().optional(),
     SMTP_PASSWORD: z.string().optional(),
     SMTP_FROM: z.string().default('Heatpath <heatpath@heatpath.localhost>'),
-    PUBLIC_URL: z.url({ error: 'PUBLIC_URL must be the address people open, like https://heatpath.example.test.' }).optional(),
+    PUBLIC_URL: z
+      .url({
+        error: 'PUBLIC_URL must be the address people open, like https://heatpath.example.test.',
+      })
+      .optional(),
     MAIL_WORKER: bool.default(true),
     MAIL_POLL_MS: z.coerce.number().int().min(50).max(60_000).default(1000),
     MAIL_RETRY_BASE_MS: z.coerce.number().int().min(10).default(5000),
-    MAIL_RETRY_MAX_MS: z.coerce.number().int().min(10).default(10 * 60_000),
+    MAIL_RETRY_MAX_MS: z.coerce
+      .number()
+      .int()
+      .min(10)
+      .default(10 * 60_000),
     MAIL_MAX_REJECTIONS: z.coerce.number().int().min(1).max(100).default(5),
-    INVITATION_TTL_HOURS: z.coerce.number().positive().max(24 * 30).default(72),
-    PASSWORD_RESET_TTL_MINUTES: z.coerce.number().positive().max(24 * 60).default(60),
+    INVITATION_TTL_HOURS: z.coerce
+      .number()
+      .positive()
+      .max(24 * 30)
+      .default(72),
+    PASSWORD_RESET_TTL_MINUTES: z.coerce
+      .number()
+      .positive()
+      .max(24 * 60)
+      .default(60),
     PASSWORD_RESET_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(3),
     PASSWORD_RESET_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
     LOG_LEVEL: z
@@ -75,7 +91,8 @@ const envSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['SMTP_FROM'],
-        message: 'SMTP_FROM must be an address, or a name and an address: Heatpath <mail@example.test>.',
+        message:
+          'SMTP_FROM must be an address, or a name and an address: Heatpath <mail@example.test>.',
       });
       return z.NEVER;
     }

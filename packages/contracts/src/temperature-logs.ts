@@ -14,6 +14,19 @@ import type {
 } from '@heatpath/temperature-log';
 import type { PersonRef } from './case-detail';
 
+// The package's own shapes the web app reads, passed through so it needs no second dependency.
+export type {
+  CandidateColumn,
+  CandidateReading,
+  ColumnMapping,
+  ColumnRole,
+  MappingField,
+  OverTemperatureEpisode,
+  ResultBasis,
+  SwingEpisode,
+  TemperatureLogAnalysis,
+} from '@heatpath/temperature-log';
+
 /** Largest log file accepted, in bytes (a 100,000-reading export is about 2–4 MB). */
 export const temperatureLogMaxBytes = 20 * 1024 * 1024;
 /** Most points the chart series holds; longer windows are thinned keeping each bucket's extremes. */

@@ -11,11 +11,7 @@ import { can } from '../policies/permissions';
 import type { Actor } from '../policies/permissions';
 import { caseReference } from '../services/cases/case-search-text';
 import { describeFindingsChanges } from '../services/repair-orders/describe-findings-changes';
-import {
-  nodeTitle,
-  readingDisplay,
-  treeTitle,
-} from '../services/repair-orders/load-repair-order';
+import { nodeTitle, readingDisplay, treeTitle } from '../services/repair-orders/load-repair-order';
 import type { RepairOrderCase } from '../services/repair-orders/load-repair-order';
 
 const person = (user: User | null | undefined) => (user ? { id: user.id, name: user.name } : null);

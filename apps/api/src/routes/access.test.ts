@@ -116,8 +116,8 @@ describe('route × role access', () => {
 
     it(`${label(route)} unauthenticated → 401`, async () => {
       const w = await createWorkshop();
-      const res = await supertest(app)
-        [route.method](route.path(w))
+      const anonymous = supertest(app);
+      const res = await anonymous[route.method](route.path(w))
         .set(clientHeaders)
         .send(route.body?.(w));
       expect(res.status).toBe(401);

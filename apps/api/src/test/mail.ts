@@ -26,7 +26,12 @@ export function testWorker(options: { port: number; workshopId: string }) {
   const config = testConfig();
   return createOutboxWorker({
     sequelize: testSequelize(),
-    sender: createSmtpSender({ ...config.mail, host: '127.0.0.1', port: options.port, secure: false }),
+    sender: createSmtpSender({
+      ...config.mail,
+      host: '127.0.0.1',
+      port: options.port,
+      secure: false,
+    }),
     mail: testMailContext(),
     from: config.mail.from,
     settings: testMailSettings,

@@ -34,15 +34,19 @@ export async function testPhoto(): Promise<Buffer> {
 export async function walkToOutcome(agent: Agent, caseId: string): Promise<void> {
   let position = 0;
   for (const step of stuckShroudPath) {
-    const res = await agent
-      .post(`/api/cases/${caseId}/walk`)
-      .send({ idempotencyKey: randomUUID(), event: { ...step.answer, nodeId: step.nodeId, position } });
+    const res = await agent.post(`/api/cases/${caseId}/walk`).send({
+      idempotencyKey: randomUUID(),
+      event: { ...step.answer, nodeId: step.nodeId, position },
+    });
     expect(res.status, `${step.nodeId}: ${res.text}`).toBe(201);
     position = res.body.walk.position;
   }
 }
 
-export async function diagnosedCase(app: ReturnType<typeof testApp>, options: { photo?: boolean } = {}) {
+export async function diagnosedCase(
+  app: ReturnType<typeof testApp>,
+  options: { photo?: boolean } = {},
+) {
   const w = await createWorkshopWithTrees();
   const vehicle = await createVehicle(w.workshop.id);
   const tech = await signedIn(app, w.people.technician.email, testPassword);
@@ -60,7 +64,10 @@ export async function diagnosedCase(app: ReturnType<typeof testApp>, options: { 
     const upload = await tech
       .post(`/api/cases/${caseId}/attachments`)
       .field('nodeId', 'shroud-inspection')
-      .attach('file', await testPhoto(), { filename: 'shroud-stuck.png', contentType: 'image/png' });
+      .attach('file', await testPhoto(), {
+        filename: 'shroud-stuck.png',
+        contentType: 'image/png',
+      });
     expect(upload.status, upload.text).toBe(201);
     photoId = upload.body.id as string;
   }
@@ -68,7 +75,16 @@ export async function diagnosedCase(app: ReturnType<typeof testApp>, options: { 
   expect(diagnosed.status, diagnosed.text).toBe(200);
   const advisor = await signedIn(app, w.people.advisor.email, testPassword);
   const lead = await signedIn(app, w.people.lead.email, testPassword);
-  return { w, vehicle, caseId, photoId, tech, advisor, lead, reference: created.body.reference as string };
+  return {
+    w,
+    vehicle,
+    caseId,
+    photoId,
+    tech,
+    advisor,
+    lead,
+    reference: created.body.reference as string,
+  };
 }
 
 /** The findings as a save request, from the review's current revision. */

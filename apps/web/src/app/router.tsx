@@ -22,6 +22,8 @@ import { AppErrorPage, NotFoundPage, RouteErrorPage, StartingUp } from './shell/
 // One module for every calculator route, so they share one lazily loaded chunk.
 const calculatorsModule = () => import('./routes/calculators');
 const caseModule = () => import('./routes/case');
+// The logs screen has its own chunk: it brings recharts, which no other screen needs.
+const caseLogsModule = () => import('./routes/case-logs');
 // The tree screens share two lazy chunks: the library and versions, and the editor with the graph.
 const treesModule = () => import('./routes/trees');
 const treeDraftModule = () => import('./routes/tree-draft');
@@ -69,6 +71,16 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   loader: findingsLoader(queryClient),
                   shouldRevalidate: findingsShouldRevalidate,
                   Component: FindingsRoute,
+                },
+                {
+                  path: 'cases/:caseId/logs',
+                  lazy: async () => {
+                    const route = await caseLogsModule();
+                    return {
+                      loader: route.caseLogsLoader(queryClient),
+                      Component: route.CaseLogsRoute,
+                    };
+                  },
                 },
                 {
                   path: 'cases/:caseId/repair-order',

@@ -23,7 +23,9 @@ export function createMailContext(options: { publicUrl: string; secret: string }
       const iv = randomBytes(12);
       const cipher = createCipheriv('aes-256-gcm', key, iv);
       const body = Buffer.concat([cipher.update(link, 'utf8'), cipher.final()]);
-      return ['v1', iv, cipher.getAuthTag(), body].map((p) => (typeof p === 'string' ? p : p.toString('base64url'))).join('.');
+      return ['v1', iv, cipher.getAuthTag(), body]
+        .map((p) => (typeof p === 'string' ? p : p.toString('base64url')))
+        .join('.');
     },
     unsealLink(sealed) {
       const [version, iv, tag, body] = sealed.split('.');

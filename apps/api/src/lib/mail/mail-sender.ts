@@ -35,7 +35,9 @@ export function assertHeaderSafe(mail: OutgoingMail): void {
 
 const addressOf = (r: MailRecipient) => ({ name: r.name ?? '', address: r.address });
 
-export function createSmtpSender(config: Pick<MailConfig, 'host' | 'port' | 'secure' | 'user' | 'password'>): MailSender {
+export function createSmtpSender(
+  config: Pick<MailConfig, 'host' | 'port' | 'secure' | 'user' | 'password'>,
+): MailSender {
   const transport = nodemailer.createTransport({
     host: config.host,
     port: config.port,

@@ -56,8 +56,9 @@ export function describeSendError(error: unknown, where: string): string {
   if (e.responseCode) return clean(`The mail server refused it: ${e.response ?? e.responseCode}`);
   // nodemailer wraps socket errors (ESOCKET, ECONNECTION); the cause is named in the message.
   const cause =
-    /\b(ECONNREFUSED|ETIMEDOUT|ETIMEOUT|ENOTFOUND|EDNS|EAUTH)\b/.exec(`${e.code ?? ''} ${e.message ?? ''}`)?.[1] ??
-    e.code;
+    /\b(ECONNREFUSED|ETIMEDOUT|ETIMEOUT|ENOTFOUND|EDNS|EAUTH)\b/.exec(
+      `${e.code ?? ''} ${e.message ?? ''}`,
+    )?.[1] ?? e.code;
   switch (cause) {
     case 'ECONNREFUSED':
       return `No mail server answered at ${where} (connection refused).`;
@@ -115,7 +116,8 @@ export function createOutboxWorker(options: OutboxWorkerOptions): OutboxWorker {
     if (!message || message.status !== 'sending') return false;
     try {
       let text = message.bodyText;
-      if (message.sealedLink) text = text.replaceAll(linkPlaceholder, mail.unsealLink(message.sealedLink));
+      if (message.sealedLink)
+        text = text.replaceAll(linkPlaceholder, mail.unsealLink(message.sealedLink));
       const info = await sender.send({
         messageId: `<outbox-${message.id}@${from.address.split('@')[1] ?? 'heatpath.localhost'}>`,
         from,
@@ -156,7 +158,10 @@ export function createOutboxWorker(options: OutboxWorkerOptions): OutboxWorker {
             },
         { where: { id, status: 'sending' } },
       );
-      logger.warn({ messageId: id, attempts: message.attempts, giveUp, lastError }, 'mail not sent');
+      logger.warn(
+        { messageId: id, attempts: message.attempts, giveUp, lastError },
+        'mail not sent',
+      );
       return false;
     }
   }

@@ -176,8 +176,11 @@ describe('forgot password', () => {
     await agentFor(app).post('/api/auth/password-reset').send({ email: email.toUpperCase() });
     const newer = await tokenSentTo(email);
     expect(
-      (await agentFor(app).post('/api/auth/set-password').send({ token: older, password: newPassword }))
-        .status,
+      (
+        await agentFor(app)
+          .post('/api/auth/set-password')
+          .send({ token: older, password: newPassword })
+      ).status,
     ).toBe(404);
     const check = await agentFor(app).post('/api/auth/set-password/check').send({ token: newer });
     expect(check.body.purpose).toBe('password-reset');
@@ -186,12 +189,16 @@ describe('forgot password', () => {
       .send({ token: newer, password: newPassword });
     expect(set.status).toBe(200);
     expect(
-      (await agentFor(app).post('/api/auth/set-password').send({ token: newer, password: newPassword }))
-        .status,
+      (
+        await agentFor(app)
+          .post('/api/auth/set-password')
+          .send({ token: newer, password: newPassword })
+      ).status,
     ).toBe(404);
     await signedIn(app, email, newPassword);
     expect(
-      (await agentFor(app).post('/api/auth/sign-in').send({ email, password: testPassword })).status,
+      (await agentFor(app).post('/api/auth/sign-in').send({ email, password: testPassword }))
+        .status,
     ).toBe(401);
   });
 
@@ -228,7 +235,9 @@ describe('forgot password', () => {
     for (const email of [w.people.technician.email, `ghost-${w.workshop.id}@factory.test`]) {
       const statuses: number[] = [];
       for (let i = 0; i < 3; i += 1)
-        statuses.push((await agentFor(limited).post('/api/auth/password-reset').send({ email })).status);
+        statuses.push(
+          (await agentFor(limited).post('/api/auth/password-reset').send({ email })).status,
+        );
       expect(statuses, email).toEqual([202, 202, 429]);
     }
   });

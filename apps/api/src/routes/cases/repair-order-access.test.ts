@@ -30,7 +30,12 @@ interface RouteCase {
 const reviewers: Role[] = ['lead', 'advisor'];
 
 const routes: RouteCase[] = [
-  { method: 'get', path: (f) => `/api/cases/${f.caseId}/findings/review`, allowed: reviewers, ok: 200 },
+  {
+    method: 'get',
+    path: (f) => `/api/cases/${f.caseId}/findings/review`,
+    allowed: reviewers,
+    ok: 200,
+  },
   // After diagnosis only the advisor and lead edit; the technician's edits ended with it.
   {
     method: 'put',
@@ -46,14 +51,12 @@ const routes: RouteCase[] = [
     allowed: reviewers,
     ok: 200,
   },
-  ...(['pdf', 'csv', 'json'] as const).map(
-    (format): RouteCase => ({
-      method: 'get',
-      path: (f) => `/api/cases/${f.caseId}/findings/export/${format}`,
-      allowed: reviewers,
-      ok: 200,
-    }),
-  ),
+  ...(['pdf', 'csv', 'json'] as const).map((format): RouteCase => ({
+    method: 'get',
+    path: (f) => `/api/cases/${f.caseId}/findings/export/${format}`,
+    allowed: reviewers,
+    ok: 200,
+  })),
   {
     method: 'post',
     path: (f) => `/api/cases/${f.caseId}/findings/send`,

@@ -1,9 +1,12 @@
 // The repair order of a diagnosed case through the API: the advisor's versioned edits with who
 // changed what, photos chosen, approval frozen by the database, and the exports of a known case
 // read back — the PDF's text (pdf-parse), the CSV (csv-parse) and the JSON (its zod schema).
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { parse } from 'csv-parse/sync';
 import { PDFParse } from 'pdf-parse';
 import { describe, expect, it } from 'vitest';
+import { z } from 'zod';
 import { repairOrderCsvColumns, repairOrderExportSchema } from '@heatpath/contracts';
 import { testApp, testSequelize } from '../../test/context';
 import { approveLatest, diagnosedCase, editOf } from '../../test/repair-orders';
@@ -155,7 +158,9 @@ describe('reviewing the findings of a diagnosed case', () => {
       ),
     ).rejects.toThrow(/cannot be changed/);
     await expect(
-      sequelize.query(`DELETE FROM findings_revisions WHERE case_id = '${caseId}' AND revision = 2`),
+      sequelize.query(
+        `DELETE FROM findings_revisions WHERE case_id = '${caseId}' AND revision = 2`,
+      ),
     ).rejects.toThrow(/cannot be deleted/);
     // Revision 1 is not approved, but it is history: its content cannot change either.
     await expect(
@@ -180,7 +185,6 @@ describe('exporting an approved repair order', () => {
       `attachment; filename="${reference}-repair-order-r2.pdf"`,
     );
     const bytes = res.body as Buffer;
-    if (process.env.HP_PDF_OUT) (await import('node:fs')).writeFileSync(process.env.HP_PDF_OUT, bytes);
     expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
     // Heatpath's font is embedded (subset), not a viewer's substitute.
     expect(bytes.toString('latin1')).toMatch(/\/FontName \/[A-Z]{6}\+IBMPlexSans/);
@@ -229,11 +233,13 @@ describe('exporting an approved repair order', () => {
         partNumber: r.part_number || null,
       })),
     ).toEqual(
-      current.parts.map((p: { description: string; quantity: number; partNumber: string | null }) => ({
-        description: p.description,
-        quantity: p.quantity,
-        partNumber: p.partNumber ?? null,
-      })),
+      current.parts.map(
+        (p: { description: string; quantity: number; partNumber: string | null }) => ({
+          description: p.description,
+          quantity: p.quantity,
+          partNumber: p.partNumber ?? null,
+        }),
+      ),
     );
     expect(labour.map((r) => ({ operation: r.description, hours: Number(r.hours) }))).toEqual(
       current.labour,
@@ -258,6 +264,18 @@ describe('exporting an approved repair order', () => {
       photos: [{ id: photoId, name: 'shroud-stuck.png' }],
     });
     expect(parsed.data?.readings.find((r) => r.display === '110 °C')?.unit).toBe('degC');
+  });
+
+  it('is documented: the JSON Schema in docs/repair-order-export.md is the one zod makes', () => {
+    const doc = readFileSync(
+      join(import.meta.dirname, '../../../../../docs/repair-order-export.md'),
+      'utf8',
+    );
+    const block = /## JSON Schema[\s\S]*?```json\n([\s\S]*?)```/.exec(doc)?.[1];
+    expect(block, 'a ```json block under "## JSON Schema"').toBeTruthy();
+    expect(JSON.parse(block ?? '')).toEqual(
+      z.toJSONSchema(repairOrderExportSchema, { target: 'draft-2020-12' }),
+    );
   });
 
   it('answers 400 for an unknown format', async () => {

@@ -71,9 +71,6 @@ export function temperatureLogsRouter(deps: { store: FileStore }) {
     receiveLogFile,
     validate('body', logUploadFieldsSchema),
     async (req, res) => {
-      if (!req.file) {
-        throw new AppError('bad_request', 'Choose a log file to upload (form field "file").');
-      }
       const fields = res.locals.body as { nodeId?: string; mapping?: ColumnMapping };
       const result = await uploadTemperatureLog({
         actor: actorOf(res),
@@ -81,7 +78,7 @@ export function temperatureLogsRouter(deps: { store: FileStore }) {
         caseId: caseIdOf(res),
         nodeId: fields.nodeId ?? null,
         mapping: fields.mapping,
-        file: { originalName: req.file.originalname, bytes: req.file.buffer },
+        file: req.file ? { originalName: req.file.originalname, bytes: req.file.buffer } : null,
         store: deps.store,
       });
       res.status(result.status === 'stored' ? 201 : 200).json(result);

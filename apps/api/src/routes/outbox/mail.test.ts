@@ -104,7 +104,9 @@ describe('sending a repair order by e-mail', () => {
       expect(await worker.runOnce()).toEqual({ sent: 0, failed: 1 });
       const waiting = (await lead.get('/api/outbox')).body.messages[0];
       expect(waiting).toMatchObject({ status: 'queued', attempts: 1, sentAt: null });
-      expect(waiting.lastError).toBe(`No mail server answered at 127.0.0.1:${port} (connection refused).`);
+      expect(waiting.lastError).toBe(
+        `No mail server answered at 127.0.0.1:${port} (connection refused).`,
+      );
       expect(new Date(waiting.nextAttemptAt).getTime()).toBeGreaterThan(
         new Date(waiting.lastAttemptAt).getTime(),
       );
@@ -206,6 +208,9 @@ describe('sending a repair order by e-mail', () => {
     );
     const retried = await lead.post(`/api/outbox/${sent.body.id}/retry`);
     expect(retried.status).toBe(200);
-    expect(retried.body).toMatchObject({ status: 'queued', attachments: [{ mediaType: 'application/pdf' }] });
+    expect(retried.body).toMatchObject({
+      status: 'queued',
+      attachments: [{ mediaType: 'application/pdf' }],
+    });
   });
 });

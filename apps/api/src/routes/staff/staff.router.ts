@@ -52,15 +52,16 @@ export function staffRouter(deps: { config: Config; mail: MailContext }) {
     res.status(201).json(presentStaffMember(user));
   });
 
-  router.post(
-    '/:userId/invitation',
-    validate('params', staffParamsSchema),
-    async (_req, res) => {
-      const { userId } = res.locals.params as { userId: string };
-      const user = await resendInvitation({ actor: actorOf(res), userId, ttlMinutes, mail: deps.mail });
-      res.status(201).json(presentStaffMember(user));
-    },
-  );
+  router.post('/:userId/invitation', validate('params', staffParamsSchema), async (_req, res) => {
+    const { userId } = res.locals.params as { userId: string };
+    const user = await resendInvitation({
+      actor: actorOf(res),
+      userId,
+      ttlMinutes,
+      mail: deps.mail,
+    });
+    res.status(201).json(presentStaffMember(user));
+  });
 
   router.patch(
     '/:userId',

@@ -48,6 +48,10 @@ function summaryOf(e: CaseEvent, nodes: Record<string, NodeWords>): string {
       return `Attached ${String(p.name ?? 'a file')}`;
     case 'findings':
       return `Edited the findings (revision ${String(p.revision ?? '')})`;
+    case 'approval':
+      return `Approved the findings for the repair order (revision ${String(p.revision ?? '')})`;
+    case 'mail':
+      return `Sent the repair order (revision ${String(p.revision ?? '')}) to ${String(p.to ?? 'a recipient')}`;
     case 'status':
       return `Status ${String(p.from ?? '')} → ${String(p.to ?? '')}`;
     default:

@@ -365,20 +365,30 @@ export async function renderRepairOrderPdf(
 
   if (document.readings.length > 0) {
     heading('Key readings');
+    // Two readings to a row: a walk records a dozen or more, and the repair order stays short.
+    const half = (width - 16) / 2;
+    const rows: string[][] = [];
+    for (let i = 0; i < document.readings.length; i += 2) {
+      const [a, b] = [document.readings[i], document.readings[i + 1]];
+      rows.push([a?.label ?? '', a?.display ?? '', '', b?.label ?? '', b?.display ?? '']);
+    }
     table(
       [
-        { title: 'Reading', width: width - 120 },
-        { title: 'Value', width: 120, align: 'right' },
+        { title: 'Reading', width: half - 64 },
+        { title: 'Value', width: 64, align: 'right' },
+        { title: '', width: 16 },
+        { title: 'Reading', width: half - 64 },
+        { title: 'Value', width: 64, align: 'right' },
       ],
-      document.readings.map((r) => [r.label, r.display]),
+      rows,
     );
   }
 
   if (images.length > 0) {
     heading('Photos');
-    const perRow = 2;
-    const cell = (width - gap) / perRow;
-    const maxHeight = 170;
+    const perRow = 3;
+    const cell = (width - gap * (perRow - 1)) / perRow;
+    const maxHeight = 124;
     for (let i = 0; i < images.length; i += perRow) {
       const row = images.slice(i, i + perRow);
       const heights = row.map((img) =>

@@ -112,12 +112,15 @@ export async function uploadTemperatureLog(options: {
   caseId: string;
   nodeId: string | null;
   mapping?: ColumnMapping | undefined;
-  file: UploadedLog;
+  /** null when the form carried no file: refused after the case is found, so another
+   * workshop's case is "not found" whatever the request holds. */
+  file: UploadedLog | null;
   store: FileStore;
 }): Promise<LogUploadResult> {
   const { actor, uploader, caseId, nodeId, file, store } = options;
   assertCan(actor, 'logs.upload');
   const kase = await findCase({ actor, caseId });
+  if (!file) throw new AppError('bad_request', 'Choose a log file to upload (form field "file").');
   await discardExpiredUploads({ actor, store });
 
   const decision = await decideReading({ actor, bytes: file.bytes, mapping: options.mapping });

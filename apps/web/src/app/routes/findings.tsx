@@ -1,34 +1,47 @@
-// /findings: the service advisor's queue of diagnosed cases; each opens its repair order, where
-// the findings are reviewed, approved, exported and sent.
+// /findings: the service advisor's list of diagnosed cases; each opens the case page, read only,
+// with its findings, and from there the case's repair order (app/routes/case.tsx links it).
 import type { QueryClient } from '@tanstack/react-query';
-import type { LoaderFunctionArgs } from 'react-router';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '../../components/ui/page';
-import { reviewQueueQueryOptions } from '../../features/repair-order/api/get-review-queue';
-import { ReviewQueue } from '../../features/repair-order/components/review-queue';
+import { casesQueryOptions, type CaseListFilters } from '../../features/cases/api/get-cases';
+import { CaseList } from '../../features/cases/components/case-list';
 import { useDocumentTitle } from '../../lib/document-title';
 import { requireArea } from '../guards';
-import { casesShouldRevalidate } from './cases';
+import { casesShouldRevalidate, settledFilters } from './cases';
+
+function findingsFilters(params: URLSearchParams): CaseListFilters {
+  return { scope: 'workshop', status: 'diagnosed', q: params.get('q') ?? undefined };
+}
 
 export function findingsLoader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {
     await requireArea(queryClient, request, 'findings');
-    void queryClient.prefetchInfiniteQuery(reviewQueueQueryOptions());
+    const filters = findingsFilters(new URL(request.url).searchParams);
+    void queryClient.prefetchInfiniteQuery(casesQueryOptions(settledFilters(filters)));
     return null;
   };
 }
 
-// The search lives in the screen, not the address: only entering the screen runs the loader.
 export const findingsShouldRevalidate = casesShouldRevalidate;
 
 export function FindingsRoute() {
   useDocumentTitle('Findings');
+  const [params, setParams] = useSearchParams();
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
         title="Findings"
-        lead="Diagnosed cases, newest first. Open one to review its findings for the repair order, approve them, download them and send them to the customer."
+        lead="Diagnosed cases, newest first. Open one for its concern, cause and correction, parts, labour and follow-ups."
       />
-      <ReviewQueue />
+      <CaseList
+        filters={findingsFilters(params)}
+        onFiltersChange={(next) =>
+          setParams(next.q ? { q: next.q } : {}, { replace: true, preventScrollReset: true })
+        }
+        showScope={false}
+        showStatus={false}
+        emptyText="No case has been diagnosed yet."
+      />
     </div>
   );
 }

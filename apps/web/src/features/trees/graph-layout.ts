@@ -2,6 +2,7 @@
 // Layout is the expensive part of redrawing a large tree, so it depends only on the graph's
 // structure (which nodes exist and which lead to which), never on titles or formulas: typing in
 // the form moves nothing and costs no layout. Node boxes have one fixed size for the same reason.
+// Large trees are laid out in a worker (graph-layout.worker.ts) so an edit never waits for it.
 import dagre from '@dagrejs/dagre';
 import type { GraphEdge } from './draft-model';
 
@@ -20,9 +21,9 @@ export function structureKey(ids: readonly string[], edges: readonly GraphEdge[]
   return `${ids.join('\n')}\u0000${edges.map((edge) => `${edge.from}>${edge.to}`).join('\n')}`;
 }
 
-function computeLayout(
+export function computeLayout(
   ids: readonly string[],
-  edges: readonly GraphEdge[],
+  edges: readonly Pick<GraphEdge, 'id' | 'from' | 'to'>[],
   start: string,
 ): Map<string, Position> {
   const graph = new dagre.graphlib.Graph({ multigraph: true });
@@ -47,9 +48,23 @@ function computeLayout(
   return positions;
 }
 
-// A few recent layouts, so undoing a structural change (or flipping between two) is instant.
-const cache = new Map<string, Map<string, Position>>();
-const CACHE_SIZE = 8;
+// Recent layouts by structure, so undoing a structural change (or flipping between two) is instant.
+const cache = new Map<string, Layout>();
+const CACHE_SIZE = 12;
+
+export function remember(key: string, layout: Layout): Layout {
+  cache.delete(key);
+  cache.set(key, layout);
+  if (cache.size > CACHE_SIZE) {
+    const oldest = cache.keys().next().value;
+    if (oldest !== undefined) cache.delete(oldest);
+  }
+  return layout;
+}
+
+export function cachedLayout(key: string): Layout | undefined {
+  return cache.get(key);
+}
 
 export function layoutFor(
   key: string,
@@ -57,14 +72,53 @@ export function layoutFor(
   edges: readonly GraphEdge[],
   start: string,
 ): Layout {
-  const cacheKey = `${start}\u0000${key}`;
-  const known = cache.get(cacheKey);
-  if (known) return known;
-  const layout = computeLayout(ids, edges, start);
-  cache.set(cacheKey, layout);
-  if (cache.size > CACHE_SIZE) {
-    const oldest = cache.keys().next().value;
-    if (oldest !== undefined) cache.delete(oldest);
+  return cache.get(key) ?? remember(key, computeLayout(ids, edges, start));
+}
+
+/**
+ * Up to this many steps dagre lays the tree out in a few milliseconds, so it runs at once.
+ * Beyond it (about 100 ms for 300 steps) the layout runs in a worker, and the graph shows the
+ * edit straight away with the steps it already had where they were.
+ */
+export const SYNC_LAYOUT_LIMIT = 80;
+
+/**
+ * Where steps go until the proper layout arrives: every step keeps its place, and a new one
+ * sits under the first step that leads to it (or beside the tree when nothing does).
+ */
+export function interimLayout(
+  previous: Layout,
+  ids: readonly string[],
+  edges: readonly GraphEdge[],
+): Layout {
+  const positions = new Map<string, Position>();
+  let right = 0;
+  let top = Number.POSITIVE_INFINITY;
+  for (const position of previous.values()) {
+    right = Math.max(right, position.x + NODE_WIDTH);
+    top = Math.min(top, position.y);
   }
-  return layout;
+  if (!Number.isFinite(top)) top = 0;
+  const parentOf = new Map<string, string>();
+  for (const edge of edges) if (!parentOf.has(edge.to)) parentOf.set(edge.to, edge.from);
+  const placedUnder = new Map<string, number>();
+  let loose = 0;
+  for (const id of ids) {
+    const kept = previous.get(id);
+    if (kept) {
+      positions.set(id, kept);
+      continue;
+    }
+    const parent = parentOf.get(id);
+    const anchor = parent ? previous.get(parent) : undefined;
+    if (anchor && parent) {
+      const n = placedUnder.get(parent) ?? 0;
+      placedUnder.set(parent, n + 1);
+      positions.set(id, { x: anchor.x + n * (NODE_WIDTH + 36), y: anchor.y + NODE_HEIGHT + 72 });
+    } else {
+      positions.set(id, { x: right + 72, y: top + loose * (NODE_HEIGHT + 36) });
+      loose += 1;
+    }
+  }
+  return positions;
 }

@@ -25,7 +25,12 @@ export function ForgotPasswordForm() {
       </Alert>
     );
   return (
-    <form onSubmit={submit} noValidate aria-label="Ask for a new password" className="flex flex-col gap-5">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label="Ask for a new password"
+      className="flex flex-col gap-5"
+    >
       {request.error ? (
         <Alert tone="danger" role="alert" title="Not sent">
           <p>{request.error.message}</p>

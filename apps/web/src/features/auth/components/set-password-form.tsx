@@ -52,7 +52,12 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: () =
     set.mutate({ token, password: values.password }, { onSuccess: onDone }),
   );
   return (
-    <form onSubmit={submit} noValidate aria-label="Choose a password" className="flex flex-col gap-5">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label="Choose a password"
+      className="flex flex-col gap-5"
+    >
       <p>
         {info.purpose === 'invitation'
           ? `Welcome to ${info.workshopName}, ${info.name}. Choose the password you will sign in with as ${info.email}.`

@@ -31,7 +31,9 @@ const dateTime = new Intl.DateTimeFormat(undefined, {
 });
 const when = (iso: string | null) => (iso ? dateTime.format(new Date(iso)) : '—');
 const size = (bytes: number) =>
-  bytes < 1024 * 1024 ? `${Math.max(1, Math.round(bytes / 1024))} KB` : `${(bytes / 1048576).toFixed(1)} MB`;
+  bytes < 1024 * 1024
+    ? `${Math.max(1, Math.round(bytes / 1024))} KB`
+    : `${(bytes / 1048576).toFixed(1)} MB`;
 
 export function OutboxList() {
   const outbox = useOutbox();
@@ -46,7 +48,8 @@ export function OutboxList() {
         retrying={outbox.isRefetching}
       />
     );
-  if (messages.length === 0) return <p className="text-ink-muted">No e-mail has been written yet.</p>;
+  if (messages.length === 0)
+    return <p className="text-ink-muted">No e-mail has been written yet.</p>;
   return (
     <div className="flex flex-col gap-4">
       <ul aria-label="Messages" className="flex flex-col gap-4">
@@ -126,7 +129,7 @@ function OutboxEntry({ message: m }: { message: OutboxMessage }) {
                 download
                 className="inline-flex min-h-touch items-center gap-2 rounded-control border-2 border-line-strong px-3 font-semibold hover:bg-sunken"
               >
-                <span aria-hidden="true">⎘</span> {a.filename}
+                <span aria-hidden="true">↓</span> {a.filename}
                 <span className="text-sm font-normal text-ink-muted">{size(a.byteSize)}</span>
               </a>
             </li>
@@ -143,7 +146,9 @@ function OutboxEntry({ message: m }: { message: OutboxMessage }) {
           >
             Send again
           </Button>
-          {retry.error ? <p className="font-semibold text-danger-ink">{retry.error.message}</p> : null}
+          {retry.error ? (
+            <p className="font-semibold text-danger-ink">{retry.error.message}</p>
+          ) : null}
         </div>
       ) : null}
     </article>

@@ -8,7 +8,6 @@ import { apiRequest } from '../../../lib/api-client';
 export const repairOrderKeys = {
   all: ['repair-order'] as const,
   detail: (caseId: string) => [...repairOrderKeys.all, caseId] as const,
-  queue: () => [...repairOrderKeys.all, 'queue'] as const,
 };
 
 /** The cases feature's root key: a save here also changes the case page and the lists. */

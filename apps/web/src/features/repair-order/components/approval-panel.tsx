@@ -2,7 +2,7 @@
 // frozen: exports and e-mails always carry exactly what was approved.
 import type { RepairOrderReview } from '@heatpath/contracts';
 import { Alert } from '../../../components/ui/alert';
-import { Button, buttonClasses } from '../../../components/ui/button';
+import { Button } from '../../../components/ui/button';
 import { useApproveFindings } from '../api/approve-findings';
 import { exportUrl } from '../api/get-repair-order';
 
@@ -58,13 +58,13 @@ export function ApprovalPanel({ review, dirty }: { review: RepairOrderReview; di
                 <a
                   href={exportUrl(review.caseId, f.format, approvedRevision)}
                   download
-                  className={buttonClasses('secondary', 'normal', 'w-full justify-start')}
+                  className="flex min-h-touch w-full flex-col justify-center rounded-control border-2 border-line-strong bg-surface px-4 py-2 hover:bg-sunken"
                 >
-                  <span>
-                    Download {f.label}
+                  <span className="font-semibold">
+                    <span aria-hidden="true">↓ </span>Download {f.label}
                     <span className="sr-only"> of revision {approvedRevision}</span>
                   </span>
-                  <span className="text-sm font-normal text-ink-muted">{f.hint}</span>
+                  <span className="text-sm text-ink-muted">{f.hint}</span>
                 </a>
               </li>
             ))}

@@ -105,7 +105,7 @@ export function FindingsReviewForm({
       onSubmit={submit}
       noValidate
       aria-labelledby="review-heading"
-      className="flex flex-col gap-5 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
+      className="@container flex flex-col gap-5 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
     >
       <div className="flex flex-col gap-1">
         <h2 id="review-heading" className="text-xl font-bold">
@@ -160,7 +160,7 @@ export function FindingsReviewForm({
         {parts.fields.map((field, index) => (
           <div
             key={field.id}
-            className="grid gap-3 rounded-control border-2 border-line p-3 md:grid-cols-[minmax(0,1fr)_6.5rem_9rem] md:items-end"
+            className="grid gap-3 rounded-control border-2 border-line p-3 @lg:grid-cols-[minmax(0,1fr)_6.5rem_9rem] @lg:items-end"
           >
             <TextField
               label={`Part ${index + 1}`}
@@ -188,7 +188,7 @@ export function FindingsReviewForm({
               error={errors.parts?.[index]?.partNumber?.message}
               {...form.register(`parts.${index}.partNumber`)}
             />
-            <div className="md:col-span-3">
+            <div className="@lg:col-span-3">
               <Button variant="quiet" onClick={() => parts.remove(index)}>
                 Remove part {index + 1}
               </Button>
@@ -211,7 +211,7 @@ export function FindingsReviewForm({
         {labour.fields.map((field, index) => (
           <div
             key={field.id}
-            className="grid gap-3 rounded-control border-2 border-line p-3 md:grid-cols-[minmax(0,1fr)_7rem] md:items-end"
+            className="grid gap-3 rounded-control border-2 border-line p-3 @lg:grid-cols-[minmax(0,1fr)_7rem] @lg:items-end"
           >
             <TextField
               label={`Operation ${index + 1}`}
@@ -228,7 +228,7 @@ export function FindingsReviewForm({
               error={errors.labour?.[index]?.hours?.message}
               {...form.register(`labour.${index}.hours`)}
             />
-            <div className="md:col-span-2">
+            <div className="@lg:col-span-2">
               <Button variant="quiet" onClick={() => labour.remove(index)}>
                 Remove operation {index + 1}
               </Button>
@@ -280,7 +280,13 @@ export function FindingsReviewForm({
       />
 
       <div className="flex flex-wrap items-center gap-3 border-t-2 border-line pt-4">
-        <Button type="submit" size="large" busy={save.isPending} busyLabel="Saving…" disabled={!isDirty}>
+        <Button
+          type="submit"
+          size="large"
+          busy={save.isPending}
+          busyLabel="Saving…"
+          disabled={!isDirty}
+        >
           Save revision {current.revision + 1}
         </Button>
         {isDirty ? (

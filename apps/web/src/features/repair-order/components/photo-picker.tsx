@@ -22,7 +22,7 @@ export function PhotoPicker({ photos, chosen, limit, error, onChange }: PhotoPic
           : `Tick up to ${limit}. They print in the order you tick them; ${chosen.length} chosen.`}
       </p>
       {photos.length > 0 ? (
-        <ul className="grid grid-cols-2 gap-3 md:grid-cols-3">
+        <ul className="grid grid-cols-2 gap-3 @2xl:grid-cols-3">
           {photos.map((photo) => {
             const at = chosen.indexOf(photo.id);
             const checked = at !== -1;

@@ -36,7 +36,10 @@ export function RepairOrderScreen({ caseId }: { caseId: string }) {
           retrying={query.isRefetching}
         />
         <p>
-          <Link to={`/cases/${encodeURIComponent(caseId)}`} className="underline underline-offset-4">
+          <Link
+            to={`/cases/${encodeURIComponent(caseId)}`}
+            className="underline underline-offset-4"
+          >
             Open the case
           </Link>
         </p>
@@ -63,8 +66,7 @@ function ApprovalState({ review }: { review: RepairOrderReview }) {
       <Alert tone="ok" title={`Revision ${approvedRevision} approved`}>
         <p>
           Approved by {approved?.approvedBy?.name ?? 'someone'},{' '}
-          {formatDateTime(approved?.approvedAt ?? null)}. Downloads and e-mails carry this
-          revision.
+          {formatDateTime(approved?.approvedAt ?? null)}. Downloads and e-mails carry this revision.
         </p>
       </Alert>
     );
@@ -78,7 +80,13 @@ function ApprovalState({ review }: { review: RepairOrderReview }) {
   );
 }
 
-function RepairOrderView({ review, onReload }: { review: RepairOrderReview; onReload: () => void }) {
+function RepairOrderView({
+  review,
+  onReload,
+}: {
+  review: RepairOrderReview;
+  onReload: () => void;
+}) {
   const [dirty, setDirty] = useState(false);
   const { vehicle } = review;
   const tag = vehicle.plate ?? vehicle.vin ?? review.reference;
@@ -107,8 +115,10 @@ function RepairOrderView({ review, onReload }: { review: RepairOrderReview; onRe
 
       <ApprovalState review={review} />
 
-      <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_22rem] lg:items-start">
-        <div className="flex flex-col gap-5">
+      {/* One column on a tablet and a phone, in the order of the work: edit, approve and
+          download, send, then the readings and the history. Two columns on a wide screen. */}
+      <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_24rem] xl:items-start">
+        <div className="xl:col-start-1 xl:row-span-3 xl:row-start-1">
           {review.can.edit ? (
             <FindingsReviewForm
               // A new revision starts the form afresh from what was saved.
@@ -122,11 +132,17 @@ function RepairOrderView({ review, onReload }: { review: RepairOrderReview; onRe
           ) : (
             <FindingsSummary revision={review.current} photos={review.photos} />
           )}
+        </div>
+        <div className="xl:col-start-2 xl:row-start-1">
+          <ApprovalPanel review={review} dirty={dirty} />
+        </div>
+        <div className="xl:col-start-2 xl:row-start-2">
+          <SendPanel review={review} dirty={dirty} />
+        </div>
+        <div className="xl:col-start-1 xl:row-start-4">
           <KeyReadings review={review} />
         </div>
-        <div className="flex flex-col gap-5">
-          <ApprovalPanel review={review} dirty={dirty} />
-          <SendPanel review={review} dirty={dirty} />
+        <div className="xl:col-start-2 xl:row-span-2 xl:row-start-3">
           <RevisionHistory revisions={review.revisions} />
         </div>
       </div>
@@ -150,11 +166,13 @@ function KeyReadings({ review }: { review: RepairOrderReview }) {
       {readings.length === 0 ? (
         <p className="text-ink-muted">No readings were taken.</p>
       ) : (
-        <dl className="grid grid-cols-[minmax(0,1fr)_auto] gap-x-4 gap-y-1 tabular-nums">
+        <dl className="grid grid-cols-[minmax(0,1fr)_auto] gap-y-1 tabular-nums">
           {readings.map((r, i) => (
             <div key={`${r.nodeId ?? ''}-${r.label}-${i}`} className="contents">
               <dt className="border-b border-line py-1">{r.label}</dt>
-              <dd className="border-b border-line py-1 text-right font-semibold">{r.display}</dd>
+              <dd className="border-b border-line py-1 pl-4 text-right font-semibold">
+                {r.display}
+              </dd>
             </div>
           ))}
         </dl>

@@ -89,7 +89,12 @@ export function SendPanel({ review, dirty }: { review: RepairOrderReview; dirty:
       {revision === null || !review.can.send ? (
         <p className="text-ink-muted">Approve a revision to send it with its PDF.</p>
       ) : (
-        <form onSubmit={submit} noValidate aria-label="Send the repair order" className="flex flex-col gap-4">
+        <form
+          onSubmit={submit}
+          noValidate
+          aria-label="Send the repair order"
+          className="flex flex-col gap-4"
+        >
           <fieldset className="flex flex-col gap-2">
             <legend className="mb-1 font-semibold">Send revision {revision} to</legend>
             {choices.map((choice) => (
@@ -113,7 +118,9 @@ export function SendPanel({ review, dirty }: { review: RepairOrderReview; dirty:
                 />
                 <span className="flex min-w-0 flex-col">
                   <span className="font-semibold">{choice.label}</span>
-                  <span className="text-sm text-ink-muted [overflow-wrap:anywhere]">{choice.detail}</span>
+                  <span className="text-sm text-ink-muted [overflow-wrap:anywhere]">
+                    {choice.detail}
+                  </span>
                 </span>
               </label>
             ))}
@@ -158,7 +165,9 @@ export function SendPanel({ review, dirty }: { review: RepairOrderReview; dirty:
           ) : null}
           {sentTo ? (
             <Alert tone="ok" role="status" title="In the outbox">
-              <p>Going to {sentTo}. The status below changes once the mail server has it.</p>
+              <p className="[overflow-wrap:anywhere]">
+                Going to {sentTo}. The status below changes once the mail server has it.
+              </p>
             </Alert>
           ) : null}
           <div>
@@ -197,7 +206,8 @@ export function SendPanel({ review, dirty }: { review: RepairOrderReview; dirty:
                   </span>
                 </p>
                 <p className="text-sm text-ink-muted">
-                  Revision {s.revision}, by {s.sentBy?.name ?? 'someone'} {formatDateTime(s.createdAt)}
+                  Revision {s.revision}, by {s.sentBy?.name ?? 'someone'}{' '}
+                  {formatDateTime(s.createdAt)}
                   {s.sentAt ? `; delivered ${formatDateTime(s.sentAt)}` : ''}
                   {s.attempts > 1 ? `; ${s.attempts} attempts` : ''}.
                 </p>

@@ -44,13 +44,19 @@ export function InviteStaffForm() {
   });
 
   return (
-    <form onSubmit={submit} noValidate aria-labelledby="invite-heading" className="flex flex-col gap-5">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-labelledby="invite-heading"
+      className="flex flex-col gap-5"
+    >
       <div className="flex flex-col gap-1">
         <h2 id="invite-heading" className="text-xl font-bold">
           Invite by e-mail
         </h2>
         <p className="text-ink-muted">
-          The person gets a link to choose their own password. It works once and only for a limited time; you can send a fresh one from their row.
+          The person gets a link to choose their own password. It works once and only for a limited
+          time; you can send a fresh one from their row.
         </p>
       </div>
       {invite.error ? (
@@ -64,7 +70,12 @@ export function InviteStaffForm() {
         </Alert>
       ) : null}
       <div className="grid gap-5 lg:grid-cols-3">
-        <TextField label="Name" autoComplete="off" error={errors.name?.message} {...form.register('name')} />
+        <TextField
+          label="Name"
+          autoComplete="off"
+          error={errors.name?.message}
+          {...form.register('name')}
+        />
         <TextField
           label="E-mail address"
           type="email"

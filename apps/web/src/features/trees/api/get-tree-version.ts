@@ -26,5 +26,5 @@ export function treeVersionQueryOptions(treeId: string, versionId: string) {
 }
 
 export function useTreeVersion(treeId: string, versionId: string) {
-  return useQuery(treeVersionQueryOptions(treeId, versionId));
+  return useQuery({ ...treeVersionQueryOptions(treeId, versionId), enabled: Boolean(versionId) });
 }

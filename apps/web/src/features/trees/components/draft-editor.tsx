@@ -72,6 +72,14 @@ function namesOf(tree: EditableTree): Record<string, Quantity> {
   }
 }
 
+/**
+ * Under its own box a schema problem need not repeat where it is: '"nodes › cap-test › prompt"
+ * must not be empty.' reads "This must not be empty." there (the list keeps the full sentence).
+ */
+function fieldMessage(message: string | undefined): string | undefined {
+  return message?.replace(/^"[^"]*›[^"]*" /, 'This ');
+}
+
 function SaveStatus({ state, onRetry }: { state: SaveState; onRetry: () => void }) {
   return (
     <div role="status" className="flex min-h-touch items-center gap-2">
@@ -169,7 +177,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
     () => ({
       options,
       setAt,
-      errorAt: (path) => messagesByPath.get(pathKey(path)),
+      errorAt: (path) => fieldMessage(messagesByPath.get(pathKey(path))),
       names,
       samples,
       onSampleChange,
@@ -181,7 +189,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
 
   const showForm = () => {
     // On a tablet the form sits under the graph: bring it into view when a step is picked.
-    if (window.innerWidth < 1024) formRef.current?.scrollIntoView({ block: 'start' });
+    if (window.innerWidth < 1024) formRef.current?.scrollIntoView?.({ block: 'start' });
   };
 
   const select = useCallback((id: string) => {
@@ -208,8 +216,9 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
     if (id) setGraphFocus((before) => ({ id, seq: (before?.seq ?? 0) + 1 }));
   }, []);
 
-  const showProblem = (problem: TreeProblem) => {
-    const id = problem.nodeId && tree.nodes[problem.nodeId] ? problem.nodeId : null;
+  const showProblem = useCallback((problem: TreeProblem) => {
+    const id =
+      problem.nodeId && treeRef.current.nodes[problem.nodeId] ? problem.nodeId : null;
     setMode('edit');
     if (id) {
       setSelection({ kind: 'node', id });
@@ -221,7 +230,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
       path: problem.path ? pathKey(problem.path) : id ? `nodes.${id}` : 'title',
       seq: (before?.seq ?? 0) + 1,
     }));
-  };
+  }, []);
 
   // After a selection from the problem list or the graph, put the keyboard where the problem is:
   // the box the path names, or the closest enclosing one, or the form itself.
@@ -238,7 +247,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
     let target: HTMLElement | null = null;
     while (parts.length > 0 && !target) {
       const key = parts.join('.');
-      target = form.querySelector<HTMLElement>(`[data-path="${CSS.escape(key)}"]`);
+      target = form.querySelector<HTMLElement>(`[data-path="${key.replace(/["\\]/g, '\\$&')}"]`);
       parts.pop();
     }
     const focusable =
@@ -249,7 +258,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
     if (focusable) {
       focusable.focus({ preventScroll: true });
       if (window.innerWidth >= 1024 || fieldFocus.path.split('.').length > 2) {
-        focusable.scrollIntoView({ block: 'center' });
+        focusable.scrollIntoView?.({ block: 'center' });
       } else {
         showForm();
       }

@@ -83,7 +83,7 @@ export function FormulaField({
         label={label}
         hint={
           expect === 'condition'
-            ? 'For example coolantTemp > 105 or capHeldAfterMinute >= 0.9 * capRating. Units may follow a number: 15 psi, 221 degF.'
+            ? 'A yes/no formula over readings and computed values, such as reading > 105 or a >= 0.9 * b. A number may carry a unit: 15 psi, 221 degF.'
             : `Gives ${wanted}. Functions: ${functionNames}.`
         }
         value={value}

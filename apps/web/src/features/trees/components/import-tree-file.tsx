@@ -56,7 +56,9 @@ export function ImportTreeFile() {
   };
 
   return (
-    <div className="flex min-w-0 flex-1 flex-col gap-3">
+    // display: contents, so the button sits in the library's row of actions and the result
+    // below it takes the whole width.
+    <div className="contents">
       <div>
         <label
           htmlFor={inputId}
@@ -77,6 +79,7 @@ export function ImportTreeFile() {
           />
         </label>
       </div>
+      <div className="w-full empty:hidden">
       {result?.kind === 'imported' ? (
         result.draft.problems.length === 0 ? (
           <Alert tone="ok" title={`Imported “${result.title}”`} role="status">
@@ -124,6 +127,7 @@ export function ImportTreeFile() {
           ) : null}
         </Alert>
       ) : null}
+      </div>
     </div>
   );
 }

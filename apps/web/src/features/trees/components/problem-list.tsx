@@ -1,7 +1,7 @@
 // Every problem validation finds in the draft, each a button that selects its step (and the box
 // it is about). Shown beside the graph and kept current as the lead types.
 import type { TreeProblem } from '@heatpath/fault-tree';
-import { useId } from 'react';
+import { memo, useId, useState } from 'react';
 import type { EditableTree } from '../draft-model';
 import { nodeTitle } from '../draft-model';
 import { problemCount } from '../tree-format';
@@ -14,8 +14,19 @@ interface ProblemListProps {
   className?: string;
 }
 
-export function ProblemList({ tree, problems, onShow, className = '' }: ProblemListProps) {
+// A broken link can leave a hundred steps unreachable at once; the first ones are enough to act
+// on, and the rest are one tap away (drawing hundreds of rows would slow every keystroke).
+const FIRST_SHOWN = 40;
+
+export const ProblemList = memo(function ProblemList({
+  tree,
+  problems,
+  onShow,
+  className = '',
+}: ProblemListProps) {
   const headingId = useId();
+  const [showAll, setShowAll] = useState(false);
+  const shown = showAll ? problems : problems.slice(0, FIRST_SHOWN);
   return (
     <section
       aria-labelledby={headingId}
@@ -36,7 +47,7 @@ export function ProblemList({ tree, problems, onShow, className = '' }: ProblemL
             is.
           </p>
           <ul aria-label="Problems" className="flex flex-col gap-1 overflow-y-auto">
-            {problems.map((problem, index) => (
+            {shown.map((problem, index) => (
               <li key={`${problem.code}:${problem.nodeId ?? ''}:${index}`}>
                 <button
                   type="button"
@@ -55,8 +66,17 @@ export function ProblemList({ tree, problems, onShow, className = '' }: ProblemL
               </li>
             ))}
           </ul>
+          {problems.length > shown.length ? (
+            <button
+              type="button"
+              onClick={() => setShowAll(true)}
+              className="min-h-touch self-start rounded-control px-2 font-semibold underline underline-offset-4 hover:bg-sunken"
+            >
+              Show all {problems.length} problems
+            </button>
+          ) : null}
         </>
       )}
     </section>
   );
-}
+});

@@ -49,19 +49,19 @@ export function RegressionTable({ report, chosen, onToggle }: RegressionTablePro
                 <input
                   type="checkbox"
                   className="size-5 accent-primary"
+                  aria-label={`Guards the tree: ${result.reference}`}
                   checked={chosen.has(result.caseId)}
                   onChange={(event) => onToggle(result.caseId, event.target.checked)}
                 />
-                <span>
-                  <span className="lg:sr-only">Guards the tree: </span>
-                  <span className="sr-only">{result.reference}</span>
+                <span aria-hidden="true" className="lg:sr-only">
+                  Guards the tree
                 </span>
               </label>
             </TableCell>
             <TableCell label="Case" header>
               <Link
                 to={`/cases/${result.caseId}`}
-                className="font-semibold underline underline-offset-4"
+                className="font-semibold whitespace-nowrap underline underline-offset-4"
               >
                 {result.reference}
               </Link>

@@ -86,21 +86,21 @@ export function SaveConflict({
                   {comparison.nodes.map((row) => (
                     <tr key={row.nodeId} className="border-b border-current/40 align-top">
                       <th scope="row" className="py-2 pr-3 font-semibold">
-                        {row.mine ?? row.theirs}
+                        Step <code className="font-mono">{row.nodeId}</code>
                       </th>
                       <td className="py-2 pr-3">
                         {row.theirs === null
                           ? 'Not in theirs'
                           : row.mine === null
-                            ? 'Only in theirs'
-                            : `Differs in: ${row.fields.join(', ')}`}
+                            ? `“${row.theirs}” — only in theirs`
+                            : `“${row.theirs}” — differs in: ${row.fields.join(', ')}`}
                       </td>
                       <td className="py-2">
                         {row.mine === null
                           ? 'Not in yours'
                           : row.theirs === null
-                            ? 'Only in yours'
-                            : `Differs in: ${row.fields.join(', ')}`}
+                            ? `“${row.mine}” — only in yours`
+                            : `“${row.mine}” — differs in: ${row.fields.join(', ')}`}
                       </td>
                     </tr>
                   ))}

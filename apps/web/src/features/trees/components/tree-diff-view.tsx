@@ -2,6 +2,7 @@
 // for each changed step its changed fields side by side (the API's diff, from fault-tree).
 import type { TreeVersionInfo } from '@heatpath/contracts';
 import type { FieldChange } from '@heatpath/fault-tree';
+import { useMemo } from 'react';
 import { useNavigate } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
@@ -9,6 +10,7 @@ import { SelectField } from '../../../components/ui/field';
 import { Panel } from '../../../components/ui/page';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { useTreeDiff } from '../api/get-tree-diff';
+import { useTreeVersion } from '../api/get-tree-version';
 import { statusWords, versionName } from '../tree-format';
 
 interface TreeDiffViewProps {
@@ -25,16 +27,44 @@ const kindWords: Record<string, string> = {
   outcome: 'Finding',
 };
 
+type Titles = ReadonlyMap<string, string>;
+
+/** The diff names the step a way on leads to by its id; show its title, as the lead knows it. */
+function Value({ text, titles }: { text: string | null; titles: Titles }) {
+  if (text === null) return <span className="text-ink-muted">(none)</span>;
+  const title = titles.get(text);
+  return title ? (
+    <>
+      {title} <span className="text-sm text-ink-muted">({text})</span>
+    </>
+  ) : (
+    <>{text}</>
+  );
+}
+
+function titlesOf(definition: unknown): Titles {
+  const nodes = (definition as { nodes?: Record<string, { title?: unknown }> } | undefined)?.nodes;
+  const titles = new Map<string, string>();
+  for (const [id, node] of Object.entries(nodes ?? {})) {
+    if (typeof node.title === 'string') titles.set(id, node.title);
+  }
+  return titles;
+}
+
 function ChangesTable({
   caption,
   changes,
   fromName,
   toName,
+  fromTitles,
+  toTitles,
 }: {
   caption: string;
   changes: readonly FieldChange[];
   fromName: string;
   toName: string;
+  fromTitles: Titles;
+  toTitles: Titles;
 }) {
   return (
     <div className="overflow-x-auto">
@@ -60,10 +90,10 @@ function ChangesTable({
                 {change.field}
               </th>
               <td className="py-2 pr-3 break-words whitespace-pre-line">
-                {change.before ?? <span className="text-ink-muted">(none)</span>}
+                <Value text={change.before} titles={fromTitles} />
               </td>
               <td className="py-2 break-words whitespace-pre-line">
-                {change.after ?? <span className="text-ink-muted">(none)</span>}
+                <Value text={change.after} titles={toTitles} />
               </td>
             </tr>
           ))}
@@ -76,6 +106,10 @@ function ChangesTable({
 export function TreeDiffView({ treeId, versions, from, to }: TreeDiffViewProps) {
   const navigate = useNavigate();
   const diff = useTreeDiff(treeId, from, to);
+  const fromVersion = useTreeVersion(treeId, from);
+  const toVersion = useTreeVersion(treeId, to);
+  const fromTitles = useMemo(() => titlesOf(fromVersion.data?.definition), [fromVersion.data]);
+  const toTitles = useMemo(() => titlesOf(toVersion.data?.definition), [toVersion.data]);
   const options = versions.map((version) => ({
     value: version.id,
     label: `${versionName(version)} (${statusWords[version.status].toLowerCase()})`,
@@ -145,6 +179,8 @@ export function TreeDiffView({ treeId, versions, from, to }: TreeDiffViewProps) 
                 changes={diff.data.diff.tree}
                 fromName={fromName}
                 toName={toName}
+                fromTitles={fromTitles}
+                toTitles={toTitles}
               />
             </Panel>
           ) : null}
@@ -211,6 +247,8 @@ export function TreeDiffView({ treeId, versions, from, to }: TreeDiffViewProps) 
                 changes={node.changes}
                 fromName={fromName}
                 toName={toName}
+                fromTitles={fromTitles}
+                toTitles={toTitles}
               />
             </Panel>
           ))}

@@ -21,7 +21,17 @@ import {
 import '@xyflow/react/dist/base.css';
 import { memo, useCallback, useEffect, useMemo, useState } from 'react';
 import { edgesOf, kindLabels, type EditableTree, type GraphEdge } from '../draft-model';
-import { layoutFor, NODE_HEIGHT, NODE_WIDTH, structureKey, type Layout } from '../graph-layout';
+import { requestLayout } from '../graph-layout-client';
+import {
+  cachedLayout,
+  interimLayout,
+  layoutFor,
+  NODE_HEIGHT,
+  NODE_WIDTH,
+  structureKey,
+  SYNC_LAYOUT_LIMIT,
+  type Layout,
+} from '../graph-layout';
 import './tree-graph.css';
 
 export interface GraphFocus {
@@ -233,19 +243,67 @@ function createFlowCache() {
   };
 }
 
+interface LayoutState {
+  key: string;
+  layout: Layout;
+  /** False while the proper layout of this structure is still being worked out. */
+  settled: boolean;
+}
+
+/**
+ * The positions for the current structure. A text edit keeps the layout it has; a structural
+ * edit uses a cached layout, lays a small tree out at once, or — for a large tree — shows the
+ * edit immediately with an interim placement and swaps in the worker's layout when it arrives.
+ */
+function useGraphLayout(ids: readonly string[], edges: readonly GraphEdge[], start: string): Layout {
+  const key = `${start}\u0000${structureKey(ids, edges)}`;
+  const [state, setState] = useState<LayoutState>(() => ({
+    key,
+    layout: layoutFor(key, ids, edges, start),
+    settled: true,
+  }));
+  let current = state;
+  if (state.key !== key) {
+    const ready =
+      cachedLayout(key) ?? (ids.length <= SYNC_LAYOUT_LIMIT ? layoutFor(key, ids, edges, start) : null);
+    current = ready
+      ? { key, layout: ready, settled: true }
+      : { key, layout: interimLayout(state.layout, ids, edges), settled: false };
+    setState(current);
+  }
+  const waiting = !current.settled;
+  useEffect(() => {
+    if (!waiting) return;
+    let cancelled = false;
+    void requestLayout(key, ids, edges, start).then((layout) => {
+      if (!cancelled) {
+        setState((before) => (before.key === key ? { key, layout, settled: true } : before));
+      }
+    });
+    return () => {
+      cancelled = true;
+    };
+    // One job per structure: ids and edges only matter through the key.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [key, waiting]);
+  return current.layout;
+}
+
 function CenterOn({ focus, layout }: { focus: GraphFocus | null; layout: Layout }) {
   const flow = useReactFlow();
+  // The step may only appear (or move) once its layout is ready: centre again when it does.
+  const position = focus ? layout.get(focus.id) : undefined;
+  const x = position?.x;
+  const y = position?.y;
   useEffect(() => {
-    if (!focus) return;
-    const position = layout.get(focus.id);
-    if (!position) return;
-    void flow.setCenter(position.x + NODE_WIDTH / 2, position.y + NODE_HEIGHT / 2, {
+    if (!focus || x === undefined || y === undefined) return;
+    void flow.setCenter(x + NODE_WIDTH / 2, y + NODE_HEIGHT / 2, {
       zoom: Math.max(flow.getZoom(), 0.8),
       duration: 250,
     });
-    // Only a new request moves the view; a re-layout alone does not.
+    // A new request or a new place for the step moves the view; zooming by hand does not.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [focus]);
+  }, [focus, x, y]);
   return null;
 }
 
@@ -260,12 +318,7 @@ export const TreeGraph = memo(function TreeGraph({
 }: TreeGraphProps) {
   const ids = useMemo(() => Object.keys(tree.nodes), [tree.nodes]);
   const edges = useMemo(() => edgesOf(tree), [tree]);
-  const key = structureKey(ids, edges);
-  // layoutFor is keyed by the structure, so a text edit finds the layout it already has.
-  const layout = useMemo(
-    () => layoutFor(key, ids, edges, tree.start),
-    [key, ids, edges, tree.start],
-  );
+  const layout = useGraphLayout(ids, edges, tree.start);
   const [cache] = useState(createFlowCache);
 
   const flowNodes = useMemo(
@@ -312,7 +365,11 @@ export const TreeGraph = memo(function TreeGraph({
           label:
             group.length === 1
               ? shorten(first.label)
-              : `${group.length} ways: ${shorten(words[0] ?? '', 16)} …`,
+              : group.every((edge) => edge.kind === 'choice')
+                ? `${group.length} answers`
+                : group.every((edge) => edge.kind === 'branch' || edge.kind === 'fallback')
+                  ? `${group.length} branches`
+                  : shorten(words.join(' / ')),
           ariaLabel: `${words.join('; ')}: from “${titleOf(first.from)}” to “${titleOf(first.to)}”`,
         };
       }),
@@ -359,7 +416,7 @@ export const TreeGraph = memo(function TreeGraph({
         fitView={fits}
         onInit={openOnStart}
       >
-        <Controls showInteractive={false} position="top-right" />
+        <Controls showInteractive={false} position="top-right" orientation="horizontal" />
         <CenterOn focus={focus} layout={layout} />
       </ReactFlow>
     </ReactFlowProvider>

@@ -133,9 +133,16 @@ function TreeCard({ entry }: { entry: TreeLibraryEntry }) {
                 <Badge tone={statusTones[version.status]}>{statusWords[version.status]}</Badge>
               </td>
               <td className="py-2 pr-3">
-                {version.publishedBy
-                  ? `${version.publishedBy.name}, ${formatWhen(version.publishedAt)}`
-                  : '—'}
+                {version.publishedBy ? (
+                  <>
+                    {version.publishedBy.name}
+                    <span className="block text-sm text-ink-muted">
+                      {formatWhen(version.publishedAt)}
+                    </span>
+                  </>
+                ) : (
+                  '—'
+                )}
               </td>
               <td className="py-2 pr-3">{version.changeNote ?? '—'}</td>
               <td className="py-2 text-right">
