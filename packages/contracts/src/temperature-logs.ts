@@ -102,7 +102,8 @@ export const logDetailQuerySchema = z
   });
 export type LogDetailQuery = z.infer<typeof logDetailQuerySchema>;
 
-export type LogChannel = 'intakeAirC' | 'ambientC' | 'vehicleSpeedKph' | 'engineSpeedRpm' | 'fanDuty';
+export type LogChannel =
+  'intakeAirC' | 'ambientC' | 'vehicleSpeedKph' | 'engineSpeedRpm' | 'fanDuty';
 export type MappingSource = 'detected' | 'confirmed' | 'remembered';
 
 /** The readings the chart draws: all of them, or at most `maxPoints` keeping each bucket's extremes. */

@@ -73,7 +73,7 @@ describe('invitations and password links', () => {
 
     const again = await session.newPage();
     await again.page.goto(link.pathname + link.search);
-    await again.page.getByText('This link no longer works').waitFor();
+    await again.page.getByText('This link no longer works', { exact: true }).waitFor();
     expect(await again.page.getByRole('link', { name: 'Ask for a new link' }).count()).toBe(1);
     await again.context.close();
   });

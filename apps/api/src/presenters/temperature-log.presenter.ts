@@ -8,12 +8,7 @@ import type {
 } from '@heatpath/contracts';
 import { candidateReadings } from '@heatpath/temperature-log';
 import type { NeedsMappingResult, TemperatureLogAnalysis } from '@heatpath/temperature-log';
-import type {
-  Attachment,
-  TemperatureLog,
-  TemperatureLogUpload,
-  User,
-} from '../db/models/index';
+import type { Attachment, TemperatureLog, TemperatureLogUpload, User } from '../db/models/index';
 import { channelsOf } from '../services/temperature-logs/series-columns';
 
 const unknownPerson = { id: '00000000-0000-0000-0000-000000000000', name: 'Unknown' };

@@ -286,6 +286,7 @@ describe('a log whose columns are ambiguous', () => {
       .attach('file', headerlessF(3), 'logger.csv');
     expect(res.status, res.text).toBe(201);
     expect(res.body.log.mappingSource).toBe('confirmed');
+    expect(res.body.log.columns).toHaveLength(2);
     const bad = await tech
       .post(`/api/cases/${caseId}/logs`)
       .field('mapping', '{time: 0')
@@ -381,13 +382,17 @@ describe('bad files', () => {
     [
       'time going backwards',
       () =>
-        Buffer.from(['Time,Coolant (°C)', ...ten((i) => `${i === 4 ? 1.5 : i},${80 + i}`)].join('\n')),
+        Buffer.from(
+          ['Time,Coolant (°C)', ...ten((i) => `${i === 4 ? 1.5 : i},${80 + i}`)].join('\n'),
+        ),
       /^Line 6: the time goes backwards/,
     ],
     [
       'an absurd temperature',
       () =>
-        Buffer.from(['Time,Coolant (°C)', ...ten((i) => `${i},${i === 7 ? 350 : 80 + i}`)].join('\n')),
+        Buffer.from(
+          ['Time,Coolant (°C)', ...ten((i) => `${i},${i === 7 ? 350 : 80 + i}`)].join('\n'),
+        ),
       /^Line 9: .*350 °C.* is outside -50 to 150 °C/,
     ],
     [
@@ -484,7 +489,12 @@ describe('log routes × roles and workshops', () => {
   const uploaders: Role[] = ['lead', 'technician'];
   const confirmF = { mapping: { time: 0, coolant: 1, temperatureUnit: 'degF' } };
   const routes: LogRoute[] = [
-    { label: 'GET /logs', call: (a, f) => a.get(`/api/cases/${f.caseId}/logs`), allowed: readers, ok: 200 },
+    {
+      label: 'GET /logs',
+      call: (a, f) => a.get(`/api/cases/${f.caseId}/logs`),
+      allowed: readers,
+      ok: 200,
+    },
     {
       label: 'GET /logs/:logId',
       call: (a, f) => a.get(`/api/cases/${f.caseId}/logs/${f.logId}?threshold=105`),
@@ -519,7 +529,10 @@ describe('log routes × roles and workshops', () => {
     const w = await openCase();
     const stored = (await upload(w.tech, w.caseId, goodCsv)).body as LogStored;
     const pending = (await upload(w.tech, w.caseId, headerlessF(9))).body as LogNeedsMapping;
-    return { w, f: { caseId: w.caseId, logId: stored.log.id, pendingUploadId: pending.pendingUploadId } };
+    return {
+      w,
+      f: { caseId: w.caseId, logId: stored.log.id, pendingUploadId: pending.pendingUploadId },
+    };
   }
 
   for (const route of routes) {
@@ -546,7 +559,10 @@ describe('log routes × roles and workshops', () => {
     for (const route of routes) {
       // Their case with their ids; and my case with their log or upload id.
       const namesRecord = route.label.includes(':');
-      for (const f of [theirs.f, ...(namesRecord ? [{ ...theirs.f, caseId: mine.f.caseId }] : [])]) {
+      for (const f of [
+        theirs.f,
+        ...(namesRecord ? [{ ...theirs.f, caseId: mine.f.caseId }] : []),
+      ]) {
         const res = await route.call(lead, f);
         expect(res.status, `${route.label}: ${res.text}`).toBe(404);
       }

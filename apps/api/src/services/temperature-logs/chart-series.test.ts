@@ -29,7 +29,9 @@ describe('chartSeries', () => {
   });
 
   it('thins 100,000 readings to at most 2,000 and keeps single-reading spikes and dips', () => {
-    const s = series(100_000, (i) => (i === 61_234 ? 131 : i === 7_777 ? -12 : 90 + Math.sin(i / 50)));
+    const s = series(100_000, (i) =>
+      i === 61_234 ? 131 : i === 7_777 ? -12 : 90 + Math.sin(i / 50),
+    );
     const chart = chartSeries(s, {});
     expect(chart.downsampled).toBe(true);
     expect(chart.times.length).toBeLessThanOrEqual(2000);
@@ -50,7 +52,12 @@ describe('chartSeries', () => {
   it('cuts the asked window, clamped to the log, at full resolution when it fits', () => {
     const s = series(10_000, (i) => 80 + (i % 100));
     const chart = chartSeries(s, { from: 1000, to: 1100 });
-    expect(chart).toMatchObject({ from: 1000, to: 1100, readingsInWindow: 201, downsampled: false });
+    expect(chart).toMatchObject({
+      from: 1000,
+      to: 1100,
+      readingsInWindow: 201,
+      downsampled: false,
+    });
     expect(chart.times[0]).toBe(1000);
     expect(chart.times.at(-1)).toBe(1100);
     const clamped = chartSeries(s, { from: 4900, to: 99_999, maxPoints: 50 });

@@ -64,12 +64,12 @@ export async function decideReading(options: {
   const { actor, bytes, mapping } = options;
   const first = await readLogFile({ bytes, mapping });
   if (mapping) {
-    return first.status === 'parsed'
-      ? {
-          kind: 'read',
-          reading: { series: first.series, mappingSource: 'confirmed', columns: null },
-        }
-      : { kind: 'ask', result: first, rememberedProblem: null };
+    if (first.status === 'needs-mapping')
+      return { kind: 'ask', result: first, rememberedProblem: null };
+    // The file's columns, so the mapping can be changed later; reading stops at the request.
+    const described = await readLogFile({ bytes });
+    const columns = described.status === 'needs-mapping' ? described.columns : null;
+    return { kind: 'read', reading: { series: first.series, mappingSource: 'confirmed', columns } };
   }
   const signature =
     first.status === 'parsed' ? first.series.sourceSignature : first.sourceSignature;

@@ -65,7 +65,8 @@ function saveStateOf(answers: WalkAnswers): WalkSaveState {
   if (notice?.kind === 'refused') {
     return { status: 'refused', message: notice.message, fields: notice.fields };
   }
-  if (notice?.kind === 'moved-on') return { status: 'moved-on', message: notice.message, fields: {} };
+  if (notice?.kind === 'moved-on')
+    return { status: 'moved-on', message: notice.message, fields: {} };
   return { status: 'idle', message: null, fields: {} };
 }
 
@@ -83,7 +84,11 @@ export function CaseLogsRoute() {
   // The answer is stored when the case's walk has moved on from the step it was given at.
   const position = detail?.walk.position;
   const stored =
-    sentAt !== null && !answers.pending && !answers.notice && position !== undefined && position !== sentAt;
+    sentAt !== null &&
+    !answers.pending &&
+    !answers.notice &&
+    position !== undefined &&
+    position !== sentAt;
   useEffect(() => {
     if (stored) void navigate(`/cases/${caseId}`);
   }, [stored, caseId, navigate]);

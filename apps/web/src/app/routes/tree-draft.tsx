@@ -1,13 +1,13 @@
 // /trees/:treeId/draft and /trees/:treeId/draft/publish: the draft editor (live graph, forms,
 // validation, "Try it") and the check-and-publish screen. Loaded lazily (see router.tsx): they
 // bring the graph library, its layout, and the fault-tree package with mathjs.
-import type { QueryClient } from '@tanstack/react-query';
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { Alert } from '../../components/ui/alert';
 import { Button, ButtonLink } from '../../components/ui/button';
 import { PageHeader } from '../../components/ui/page';
 import { ErrorState, LoadingState } from '../../components/ui/status';
-import { draftQueryOptions, useDraft } from '../../features/trees/api/get-draft';
+import { draftQueryOptions, forgetDraft, useDraft } from '../../features/trees/api/get-draft';
 import { treeQueryOptions, useTree } from '../../features/trees/api/get-tree';
 import { useStartDraft } from '../../features/trees/api/start-draft';
 import { DraftEditor } from '../../features/trees/components/draft-editor';
@@ -88,6 +88,7 @@ export function publishLoader(queryClient: QueryClient) {
 export function PublishRoute() {
   const { treeId = '' } = useParams();
   const navigate = useNavigate();
+  const queryClient = useQueryClient();
   const draft = useDraft(treeId);
   const tree = useTree(treeId);
   useDocumentTitle(tree.data ? `Check and publish · ${tree.data.title}` : 'Check and publish');
@@ -127,7 +128,9 @@ export function PublishRoute() {
           regressionCaseIds={tree.data.regressionCaseIds}
           onReloadDraft={() => void draft.refetch()}
           onPublished={(version) =>
-            void navigate(`/trees/${treeId}`, { state: { published: version } })
+            void Promise.resolve(
+              navigate(`/trees/${treeId}`, { state: { published: version } }),
+            ).then(() => forgetDraft(queryClient, treeId))
           }
         />
       ) : null}

@@ -35,8 +35,10 @@ export function temperatureDisplay(preferences: UnitPreferences): TemperatureDis
     symbol,
     fromC: (celsius) => celsius * slope + offset,
     toC: (shown) => toCanonical(shown, unit, 'temperature'),
-    format: (celsius, decimals = 1) => `${minus(formatNumber(celsius * slope + offset, decimals))} ${symbol}`,
-    formatDelta: (kelvin, decimals = 1) => `${minus(formatNumber(delta(kelvin), decimals))} ${deltaSymbol}`,
+    format: (celsius, decimals = 1) =>
+      `${minus(formatNumber(celsius * slope + offset, decimals))} ${symbol}`,
+    formatDelta: (kelvin, decimals = 1) =>
+      `${minus(formatNumber(delta(kelvin), decimals))} ${deltaSymbol}`,
     formatRate: (rate) => `${minus(formatNumber(delta(rate), 1))} ${deltaSymbol}/min`,
   };
 }

@@ -9,7 +9,12 @@ const tree = normaliseDefinition({
   symptom: 'S',
   start: 'ask',
   nodes: {
-    ask: { kind: 'question', title: 'Ask', prompt: 'Q?', choices: [{ id: 'answer', label: 'A', to: 'fix' }] },
+    ask: {
+      kind: 'question',
+      title: 'Ask',
+      prompt: 'Q?',
+      choices: [{ id: 'answer', label: 'A', to: 'fix' }],
+    },
     check: { kind: 'measurement', title: 'Check', prompt: 'Read it.', inputs: [] },
     fix: { kind: 'procedure', title: 'Fix', instruction: 'Do it.', estimatedMinutes: 5 },
     found: { kind: 'outcome', title: 'Found', rootCause: 'C', correction: 'R' },

@@ -288,7 +288,11 @@ export function pathKey(path: readonly (string | number)[]): string {
  * The tree with one value replaced at a definition path, copying only the objects on the way
  * (so untouched nodes keep their identity). `undefined` removes the field when it is saved.
  */
-export function setIn(tree: EditableTree, path: readonly (string | number)[], value: unknown): EditableTree {
+export function setIn(
+  tree: EditableTree,
+  path: readonly (string | number)[],
+  value: unknown,
+): EditableTree {
   const put = (target: unknown, depth: number): unknown => {
     const key = path[depth];
     if (key === undefined) return value;

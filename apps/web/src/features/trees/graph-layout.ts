@@ -7,7 +7,7 @@ import dagre from '@dagrejs/dagre';
 import type { GraphEdge } from './draft-model';
 
 export const NODE_WIDTH = 240;
-export const NODE_HEIGHT = 92;
+export const NODE_HEIGHT = 120;
 
 export interface Position {
   x: number;

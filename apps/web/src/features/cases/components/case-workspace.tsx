@@ -4,6 +4,7 @@
 // exactly where it stands. Part of the lazily loaded case chunk.
 import type { CaseDetail } from '@heatpath/contracts';
 import { Alert } from '../../../components/ui/alert';
+import { ButtonLink } from '../../../components/ui/button';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { isApiError } from '../../../lib/api-client';
 import { useMe } from '../../../lib/auth';
@@ -74,6 +75,10 @@ function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswer
       ) : null}
 
       <CurrentStep detail={detail} model={model} answers={answers} preferences={preferences} />
+      {/* Road-test logs: their chart, analysis and figures for the current step. */}
+      <div>
+        <ButtonLink to={`/cases/${detail.id}/logs`}>Temperature logs</ButtonLink>
+      </div>
 
       {findings && detail.can.editFindings ? (
         <FindingsEditor

@@ -1,7 +1,11 @@
 // Shapes the temperature-log API returns, which the contracts package declares as TypeScript
 // interfaces (the analysis and series belong to the temperature-log package and are typed, not
 // re-described). These check only what the screens cannot work without.
-import type { LogUploadResult, TemperatureLogDetail, TemperatureLogList } from '@heatpath/contracts';
+import type {
+  LogUploadResult,
+  TemperatureLogDetail,
+  TemperatureLogList,
+} from '@heatpath/contracts';
 import { z } from 'zod';
 
 function hasFields(value: unknown, fields: readonly string[]): boolean {

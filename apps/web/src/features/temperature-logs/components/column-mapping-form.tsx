@@ -48,7 +48,10 @@ interface ColumnMappingFormProps {
 }
 
 function columnLabel(column: CandidateColumn): string {
-  const samples = column.samples.filter((s) => s !== '').slice(0, 3).join(', ');
+  const samples = column.samples
+    .filter((s) => s !== '')
+    .slice(0, 3)
+    .join(', ');
   const header = column.header ? ` “${column.header}”` : '';
   return `Column ${column.index + 1}${header}${samples ? ` — ${samples}…` : ''}`;
 }
@@ -72,11 +75,12 @@ export function ColumnMappingForm({
 }: ColumnMappingFormProps) {
   const [time, setTime] = useState(asText(initial.time));
   const [coolant, setCoolant] = useState(asText(initial.coolant));
-  const [optional, setOptional] = useState<Record<OptionalRole, string>>(() =>
-    Object.fromEntries(optionalRoles.map((role) => [role, asText(initial[role])])) as Record<
-      OptionalRole,
-      string
-    >,
+  const [optional, setOptional] = useState<Record<OptionalRole, string>>(
+    () =>
+      Object.fromEntries(optionalRoles.map((role) => [role, asText(initial[role])])) as Record<
+        OptionalRole,
+        string
+      >,
   );
   const [unit, setUnit] = useState<TemperatureUnit | ''>(initial.temperatureUnit ?? '');
   const [timeUnit, setTimeUnit] = useState<TimeUnit>(initial.timeUnit ?? 'seconds');
@@ -107,7 +111,8 @@ export function ColumnMappingForm({
     ] as const) {
       if (value === '') continue;
       const other = used.get(value);
-      if (other) found[role] = `That column is already chosen as ${roleLabels[other].toLowerCase()}.`;
+      if (other)
+        found[role] = `That column is already chosen as ${roleLabels[other].toLowerCase()}.`;
       else used.set(value, role);
     }
     setProblems(found);
@@ -146,7 +151,11 @@ export function ColumnMappingForm({
           <thead>
             <tr>
               {columns.map((column) => (
-                <th key={column.index} scope="col" className="bg-sunken px-3 py-2 text-left align-bottom">
+                <th
+                  key={column.index}
+                  scope="col"
+                  className="bg-sunken px-3 py-2 text-left align-bottom"
+                >
                   <span className="block">Column {column.index + 1}</span>
                   <span className="block font-normal text-ink-muted">
                     {column.header ?? 'no header'}
@@ -156,15 +165,18 @@ export function ColumnMappingForm({
             </tr>
           </thead>
           <tbody>
-            {Array.from({ length: Math.max(0, ...columns.map((c) => c.samples.length)) }, (_, row) => (
-              <tr key={row} className="border-t border-line">
-                {columns.map((column) => (
-                  <td key={column.index} className="px-3 py-1.5 tabular-nums whitespace-nowrap">
-                    {column.samples[row] ?? ''}
-                  </td>
-                ))}
-              </tr>
-            ))}
+            {Array.from(
+              { length: Math.max(0, ...columns.map((c) => c.samples.length)) },
+              (_, row) => (
+                <tr key={row} className="border-t border-line">
+                  {columns.map((column) => (
+                    <td key={column.index} className="px-3 py-1.5 tabular-nums whitespace-nowrap">
+                      {column.samples[row] ?? ''}
+                    </td>
+                  ))}
+                </tr>
+              ),
+            )}
           </tbody>
         </table>
       </div>

@@ -57,6 +57,12 @@ function rowsOf(series: ChartSeries, display: TemperatureDisplay): Row[] {
   }));
 }
 
+/** Whole tens of degrees (twenties in °F), or fives (tens) for a narrow zoomed range. */
+function tickStep(range: number, unit: TemperatureDisplay['unit']): number {
+  const narrow = range < (unit === 'degF' ? 45 : 25);
+  return (narrow ? 5 : 10) * (unit === 'degF' ? 2 : 1);
+}
+
 /** A window around an episode: the episode in the middle half, at least two minutes either side. */
 export function episodeWindow(
   episode: { startSeconds: number; endSeconds: number },
@@ -83,16 +89,25 @@ export function LogChart({ log, display, zoom, onZoom, updating }: LogChartProps
     let low = thresholdShown;
     let high = thresholdShown;
     for (const row of rows) {
-      for (const v of [row.coolant, row.intake, row.ambient]) {
+      // Zoomed in, the scale follows the coolant: a far-off ambient line would flatten the episode.
+      for (const v of zoom ? [row.coolant] : [row.coolant, row.intake, row.ambient]) {
         if (typeof v === 'number') {
           if (v < low) low = v;
           if (v > high) high = v;
         }
       }
     }
-    const step = display.unit === 'degF' ? 10 : 5;
-    return [Math.floor(low / step) * step - step, Math.ceil(high / step) * step + step];
-  }, [rows, thresholdShown, display.unit]);
+    const step = tickStep(high - low, display.unit);
+    return [Math.floor(low / step) * step - step / 2, Math.ceil(high / step) * step + step / 2];
+  }, [rows, thresholdShown, display.unit, zoom]);
+  const yTicks = useMemo(() => {
+    const step = tickStep(yDomain[1] - yDomain[0], display.unit);
+    const ticks: number[] = [];
+    for (let v = Math.ceil(yDomain[0] / step) * step; v <= yDomain[1]; v += step) ticks.push(v);
+    // Five or six labels at most, so they stay readable at 16 px on a portrait tablet.
+    const every = Math.max(1, Math.ceil(ticks.length / 6));
+    return ticks.filter((_, i) => i % every === 0);
+  }, [yDomain, display.unit]);
 
   const fanMax = series.fanDuty ? Math.max(1, ...series.fanDuty.map((v) => v ?? 0)) : 1;
   const fanIsSwitch = fanMax <= 1;
@@ -134,6 +149,7 @@ export function LogChart({ log, display, zoom, onZoom, updating }: LogChartProps
             <YAxis
               yAxisId="temperature"
               domain={yDomain}
+              ticks={yTicks}
               allowDataOverflow
               tick={tick}
               width={64}
@@ -165,7 +181,7 @@ export function LogChart({ log, display, zoom, onZoom, updating }: LogChartProps
                 strokeDasharray="4 3"
                 label={{
                   value: `Over ${display.format(threshold, 0)} · ${index + 1}`,
-                  position: 'insideTopLeft',
+                  position: 'top',
                   fill: 'var(--color-danger-ink)',
                   fontSize: 16,
                   fontWeight: 600,
@@ -183,7 +199,7 @@ export function LogChart({ log, display, zoom, onZoom, updating }: LogChartProps
               ifOverflow="extendDomain"
               label={{
                 value: `Threshold ${display.format(threshold, 0)}`,
-                position: 'insideBottomRight',
+                position: 'insideTopLeft',
                 fill: 'var(--color-danger-ink)',
                 fontSize: 16,
               }}

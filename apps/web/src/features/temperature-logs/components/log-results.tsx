@@ -78,7 +78,12 @@ export function LogResults({
             basis={a.warmUp.basis}
           />
         ) : (
-          <ResultCard title="Warm-up time" figure={a.warmUp.reason} basis={a.warmUp.basis} missing />
+          <ResultCard
+            title="Warm-up time"
+            figure={a.warmUp.reason}
+            basis={a.warmUp.basis}
+            missing
+          />
         )}
         {a.opening.found ? (
           <ResultCard
@@ -113,8 +118,9 @@ export function LogResults({
               <ol className="flex flex-col gap-1">
                 {episodes.map((e, i) => (
                   <li key={e.startSeconds}>
-                    <span className="font-semibold">{i + 1}.</span> From {formatClock(e.startSeconds)}{' '}
-                    for {formatDuration(e.durationSeconds)}, peak {display.format(e.peakC)}
+                    <span className="font-semibold">{i + 1}.</span> From{' '}
+                    {formatClock(e.startSeconds)} for {formatDuration(e.durationSeconds)}, peak{' '}
+                    {display.format(e.peakC)}
                     {e.ongoingAtEnd ? ' (still over when the log ends)' : ''}
                   </li>
                 ))}
@@ -133,7 +139,12 @@ export function LogResults({
             basis={a.riseRate.basis}
           />
         ) : (
-          <ResultCard title="Rate of rise" figure={a.riseRate.reason} basis={a.riseRate.basis} missing />
+          <ResultCard
+            title="Rate of rise"
+            figure={a.riseRate.reason}
+            basis={a.riseRate.basis}
+            missing
+          />
         )}
         {a.timeToTarget.found ? (
           <ResultCard

@@ -31,7 +31,9 @@ export function LogUploadForm({ caseId, step, onResult, onStored }: LogUploadFor
       return;
     }
     if (file.size > temperatureLogMaxBytes) {
-      setProblem(`A log can be at most ${temperatureLogMaxBytes / 1024 / 1024} MB; split a longer log.`);
+      setProblem(
+        `A log can be at most ${temperatureLogMaxBytes / 1024 / 1024} MB; split a longer log.`,
+      );
       return;
     }
     setProblem(null);

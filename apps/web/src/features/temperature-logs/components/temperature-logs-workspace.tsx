@@ -145,8 +145,8 @@ export function TemperatureLogsWorkspace(props: TemperatureLogsWorkspaceProps) {
               Which column is which in “{pending.name}”?
             </h2>
             <p className="text-ink-muted">
-              The file is kept while you choose; your choice is remembered for the next log of
-              this kind.
+              The file is kept while you choose; your choice is remembered for the next log of this
+              kind.
             </p>
           </div>
           <ColumnMappingForm
@@ -205,7 +205,9 @@ function LogList({
       {loading ? <LoadingState label="Loading the logs…" /> : null}
       {error ? <ErrorState title="Logs not loaded" message={error} onRetry={onRetry} /> : null}
       {!loading && !error && logs.length === 0 ? (
-        <p className="text-ink-muted">No log yet. Export one from the scan tool after a road test.</p>
+        <p className="text-ink-muted">
+          No log yet. Export one from the scan tool after a road test.
+        </p>
       ) : null}
       {logs.length > 0 ? (
         <ul className="flex flex-col gap-2">
@@ -239,8 +241,8 @@ function LogList({
                     )}
                   </span>
                   <span className="text-sm font-normal text-ink-muted">
-                    {formatDuration(log.durationSeconds)} · peak {display.format(log.headline.peakC)}{' '}
-                    · {log.uploadedBy.name},{' '}
+                    {formatDuration(log.durationSeconds)} · peak{' '}
+                    {display.format(log.headline.peakC)} · {log.uploadedBy.name},{' '}
                     {new Date(log.createdAt).toLocaleString('en-GB', {
                       dateStyle: 'medium',
                       timeStyle: 'short',
@@ -283,8 +285,13 @@ function ThresholdForm({
   };
 
   return (
-    <form noValidate onSubmit={submit} aria-label="Over-temperature threshold" className="flex flex-wrap items-end gap-3">
-      <div className="w-48">
+    <form
+      noValidate
+      onSubmit={submit}
+      aria-label="Over-temperature threshold"
+      className="flex flex-wrap items-end gap-3"
+    >
+      <div className="w-64">
         <TextField
           label="Over-temperature threshold"
           inputMode="decimal"
@@ -349,8 +356,7 @@ function SelectedLog({
             </h2>
             <p className="text-ink-muted">
               {readings.toLocaleString('en-GB')} readings over {formatDuration(durationSeconds)}
-              {log.startedAt ? `, from ${log.startedAt}` : ''} ·{' '}
-              {formatBytes(log.byteSize)} ·{' '}
+              {log.startedAt ? `, from ${log.startedAt}` : ''} · {formatBytes(log.byteSize)} ·{' '}
               <a className="underline underline-offset-4" href={log.fileUrl}>
                 Download the original
               </a>

@@ -21,9 +21,8 @@ import {
 } from '@heatpath/fault-tree';
 import { useId, useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
-import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
+import { SelectField, TextField } from '../../../components/ui/field';
 
 export interface WalkStep {
   nodeId: string;
@@ -98,7 +97,11 @@ export function UseInWalk(props: UseInWalkProps) {
       </p>
     );
   } else if (!step || step.kind === 'outcome') {
-    body = <p className="text-ink-muted">The walk has reached a finding: no step is waiting for readings.</p>;
+    body = (
+      <p className="text-ink-muted">
+        The walk has reached a finding: no step is waiting for readings.
+      </p>
+    );
   } else if (step.kind !== 'measurement' || step.inputs.length === 0) {
     body = (
       <p className="text-ink-muted">
@@ -233,44 +236,56 @@ function StepReadingsForm({
         const refused = save.status === 'refused' ? save.fields[input.name] : undefined;
         return (
           <div key={input.name} className="flex flex-col gap-2">
-            <TextField
-              label={input.label}
-              labelAside={`Allowed ${shown(input.range.min, unit, input.quantity)} to ${formatWithUnit(fromCanonical(input.range.max, unit, input.quantity), unit)}`}
-              value={box.text}
-              disabled={busy}
-              inputMode={input.range.min < 0 ? 'text' : 'decimal'}
-              autoComplete="off"
-              error={problems[input.name] ?? refused}
-              suffix={unitSymbol(unit) || undefined}
-              onChange={(event) => setBox(input.name, { text: event.target.value, from: null })}
-            />
-            {fitting.length > 0 ? (
-              <div className="flex flex-wrap gap-2" role="group" aria-label={`From the log for ${input.label}`}>
-                {fitting.map(({ candidate, suggested }) => (
-                  <Button
-                    key={candidate.name}
-                    variant={box.from?.name === candidate.name ? 'primary' : 'secondary'}
-                    disabled={busy}
-                    aria-pressed={box.from?.name === candidate.name}
-                    onClick={() => {
-                      setBox(input.name, {
-                        text: shown(candidate.value, unit, input.quantity),
-                        from: candidate,
-                      });
-                      setChecked(false);
-                    }}
-                  >
-                    <span>
-                      Use {shown(candidate.value, unit, input.quantity)} {unitSymbol(unit)}
-                      <span className="font-normal"> · {candidate.label}</span>
-                    </span>
-                    {suggested ? <Badge tone="ok">Asked here</Badge> : null}
-                  </Button>
-                ))}
-              </div>
-            ) : (
-              <p className="text-sm text-ink-muted">Not in the log: type it.</p>
-            )}
+            <div className="grid gap-3 md:grid-cols-2 md:items-start">
+              <TextField
+                label={input.label}
+                labelAside={`Allowed ${shown(input.range.min, unit, input.quantity)} to ${formatWithUnit(fromCanonical(input.range.max, unit, input.quantity), unit)}`}
+                value={box.text}
+                disabled={busy}
+                inputMode={input.range.min < 0 ? 'text' : 'decimal'}
+                autoComplete="off"
+                error={problems[input.name] ?? refused}
+                suffix={unitSymbol(unit) || undefined}
+                onChange={(event) => setBox(input.name, { text: event.target.value, from: null })}
+              />
+              {fitting.length > 0 ? (
+                <SelectField
+                  label={
+                    <>
+                      From the log<span className="sr-only"> for {input.label}</span>
+                    </>
+                  }
+                  className="font-semibold"
+                  disabled={busy}
+                  value={box.from?.name ?? ''}
+                  options={[
+                    {
+                      value: '',
+                      label: `Choose from ${fitting.length} ${fitting.length === 1 ? 'figure' : 'figures'}`,
+                    },
+                    ...fitting.map(({ candidate, suggested }) => ({
+                      value: candidate.name,
+                      label: `${shown(candidate.value, unit, input.quantity)} ${unitSymbol(unit)} · ${candidate.label}${suggested ? ' (asked here)' : ''}`,
+                    })),
+                  ]}
+                  onChange={(event) => {
+                    const picked = fitting.find((f) => f.candidate.name === event.target.value);
+                    setBox(
+                      input.name,
+                      picked
+                        ? {
+                            text: shown(picked.candidate.value, unit, input.quantity),
+                            from: picked.candidate,
+                          }
+                        : { text: '', from: null },
+                    );
+                    setChecked(false);
+                  }}
+                />
+              ) : (
+                <p className="text-sm text-ink-muted md:pt-9">Not in the log: type it.</p>
+              )}
+            </div>
             {box.from ? (
               <div className="rounded-control border-l-8 border-info-line bg-info-bg p-3 text-sm text-info-ink">
                 <p>

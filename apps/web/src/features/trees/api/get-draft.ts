@@ -1,6 +1,6 @@
 // GET /api/trees/:treeId/draft: the open draft with its revision (for optimistic saves) and the
 // problems the server found in it.
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { treesKeys } from './get-tree-library';
 import { treeVersionDetailSchema } from './response-schemas';
@@ -24,4 +24,9 @@ export function draftQueryOptions(treeId: string) {
 
 export function useDraft(treeId: string) {
   return useQuery(draftQueryOptions(treeId));
+}
+
+/** Drops the cached draft once it is published or discarded, so the next visit asks again. */
+export function forgetDraft(queryClient: QueryClient, treeId: string) {
+  queryClient.removeQueries({ queryKey: treesKeys.draft(treeId) });
 }

@@ -24,10 +24,14 @@ export function usePublishDraft() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: publishDraft,
+    // The draft is now a published version. Its cached copy is dropped by the screen once it has
+    // left (forgetDraft), so the screen still showing it does not fetch a draft that is gone.
     onSuccess: (_published, { treeId }) => {
-      // The draft is now a published version: nothing is left under the draft key.
-      queryClient.removeQueries({ queryKey: treesKeys.draft(treeId) });
-      return queryClient.invalidateQueries({ queryKey: treesKeys.all });
+      const draftKey = treesKeys.draft(treeId);
+      return queryClient.invalidateQueries({
+        queryKey: treesKeys.all,
+        predicate: (query) => query.queryKey.join('/') !== draftKey.join('/'),
+      });
     },
   });
 }

@@ -217,8 +217,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
   }, []);
 
   const showProblem = useCallback((problem: TreeProblem) => {
-    const id =
-      problem.nodeId && treeRef.current.nodes[problem.nodeId] ? problem.nodeId : null;
+    const id = problem.nodeId && treeRef.current.nodes[problem.nodeId] ? problem.nodeId : null;
     setMode('edit');
     if (id) {
       setSelection({ kind: 'node', id });
@@ -389,7 +388,9 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
         </Alert>
       ) : null}
 
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div
+        className={`grid gap-4 ${mode === 'try' ? 'lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]' : 'lg:grid-cols-2'}`}
+      >
         <div className="flex min-w-0 flex-col gap-3 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)] lg:self-start">
           <div className="flex flex-wrap items-end gap-2">
             <Button

@@ -132,9 +132,7 @@ const TargetSelectControl = memo(
         value={value ?? ''}
         data-path={pathKey(path)}
         error={error}
-        onChange={(event) =>
-          setAt(path, event.target.value || (removeWhenEmpty ? undefined : ''))
-        }
+        onChange={(event) => setAt(path, event.target.value || (removeWhenEmpty ? undefined : ''))}
       />
     );
   },

@@ -80,53 +80,53 @@ export function ImportTreeFile() {
         </label>
       </div>
       <div className="w-full empty:hidden">
-      {result?.kind === 'imported' ? (
-        result.draft.problems.length === 0 ? (
-          <Alert tone="ok" title={`Imported “${result.title}”`} role="status">
-            <p>It is draft version 1, with no problems: try it, then publish it.</p>
-            <p>
-              <Link
-                to={`/trees/${result.treeId}/draft`}
-                className="font-semibold underline underline-offset-4"
-              >
-                Open the draft
-              </Link>
-            </p>
+        {result?.kind === 'imported' ? (
+          result.draft.problems.length === 0 ? (
+            <Alert tone="ok" title={`Imported “${result.title}”`} role="status">
+              <p>It is draft version 1, with no problems: try it, then publish it.</p>
+              <p>
+                <Link
+                  to={`/trees/${result.treeId}/draft`}
+                  className="font-semibold underline underline-offset-4"
+                >
+                  Open the draft
+                </Link>
+              </p>
+            </Alert>
+          ) : (
+            <Alert
+              tone="caution"
+              title={`Imported “${result.title}” with ${problemCount(result.draft.problems.length)}`}
+              role="status"
+            >
+              <p>It is kept as draft version 1. Fix these before it can be published:</p>
+              <ul aria-label="Problems in the imported file" className="list-disc pl-6">
+                {result.draft.problems.map((problem, index) => (
+                  <li key={index}>{problem.message}</li>
+                ))}
+              </ul>
+              <p>
+                <Link
+                  to={`/trees/${result.treeId}/draft`}
+                  className="font-semibold underline underline-offset-4"
+                >
+                  Open the draft
+                </Link>
+              </p>
+            </Alert>
+          )
+        ) : result?.kind === 'refused' ? (
+          <Alert tone="danger" title={`Not imported: ${fileName ?? 'the file'}`} role="alert">
+            <p>{result.message}</p>
+            {result.problems.length > 0 ? (
+              <ul aria-label="Problems in the file" className="list-disc pl-6">
+                {result.problems.map((text, index) => (
+                  <li key={index}>{text}</li>
+                ))}
+              </ul>
+            ) : null}
           </Alert>
-        ) : (
-          <Alert
-            tone="caution"
-            title={`Imported “${result.title}” with ${problemCount(result.draft.problems.length)}`}
-            role="status"
-          >
-            <p>It is kept as draft version 1. Fix these before it can be published:</p>
-            <ul aria-label="Problems in the imported file" className="list-disc pl-6">
-              {result.draft.problems.map((problem, index) => (
-                <li key={index}>{problem.message}</li>
-              ))}
-            </ul>
-            <p>
-              <Link
-                to={`/trees/${result.treeId}/draft`}
-                className="font-semibold underline underline-offset-4"
-              >
-                Open the draft
-              </Link>
-            </p>
-          </Alert>
-        )
-      ) : result?.kind === 'refused' ? (
-        <Alert tone="danger" title={`Not imported: ${fileName ?? 'the file'}`} role="alert">
-          <p>{result.message}</p>
-          {result.problems.length > 0 ? (
-            <ul aria-label="Problems in the file" className="list-disc pl-6">
-              {result.problems.map((text, index) => (
-                <li key={index}>{text}</li>
-              ))}
-            </ul>
-          ) : null}
-        </Alert>
-      ) : null}
+        ) : null}
       </div>
     </div>
   );

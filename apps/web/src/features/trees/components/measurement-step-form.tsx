@@ -251,7 +251,7 @@ export function MeasurementFields({
               exclude={id}
               path={[...path, 'fallback', 'to']}
               errorAt={errorAt}
-                setAt={context.setAt}
+              setAt={context.setAt}
             />
             <TextField
               label="Otherwise label (optional)"

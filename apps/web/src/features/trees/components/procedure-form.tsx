@@ -35,7 +35,7 @@ export function ProcedureFields({
           exclude={id}
           path={[...path, 'done']}
           errorAt={errorAt}
-                setAt={context.setAt}
+          setAt={context.setAt}
           removeWhenEmpty
         />
         <TargetSelect
@@ -45,7 +45,7 @@ export function ProcedureFields({
           exclude={id}
           path={[...path, 'couldNotDo']}
           errorAt={errorAt}
-                setAt={context.setAt}
+          setAt={context.setAt}
           removeWhenEmpty
         />
       </div>

@@ -72,7 +72,7 @@ export function TreeDetailsForm({
         options={context.options}
         path={['start']}
         errorAt={errorAt}
-                setAt={context.setAt}
+        setAt={context.setAt}
       />
       <TextList
         title="Applies to"

@@ -107,35 +107,41 @@ afterEach(() => {
 });
 
 describe('the draft editor', () => {
-  it('lists every problem, marks its step in the graph, and a problem selects its step', { timeout: 15_000 }, async () => {
-    mockApi({
-      'GET /api/me': () => json(makeMe()),
-      [`GET /api/trees/${treeId}/draft`]: () => json(draft(3)),
-    });
-    renderApp(`/trees/${treeId}/draft`);
+  it(
+    'lists every problem, marks its step in the graph, and a problem selects its step',
+    { timeout: 15_000 },
+    async () => {
+      mockApi({
+        'GET /api/me': () => json(makeMe()),
+        [`GET /api/trees/${treeId}/draft`]: () => json(draft(3)),
+      });
+      renderApp(`/trees/${treeId}/draft`);
 
-    // The first test also waits for the lazily loaded editor module.
-    const problems = await screen.findByRole('list', { name: 'Problems' }, { timeout: 10_000 });
-    const items = within(problems).getAllByRole('button');
-    expect(items).toHaveLength(1);
-    expect(items[0]?.textContent).toContain('When does it run hot?');
-    expect(items[0]?.textContent).toMatch(/missing-step/);
+      // The first test also waits for the lazily loaded editor module.
+      const problems = await screen.findByRole('list', { name: 'Problems' }, { timeout: 10_000 });
+      const items = within(problems).getAllByRole('button');
+      expect(items).toHaveLength(1);
+      expect(items[0]?.textContent).toContain('When does it run hot?');
+      expect(items[0]?.textContent).toMatch(/missing-step/);
 
-    // The step is marked in the graph in words, not only by its outline.
-    const graph = screen.getByRole('region', { name: 'Tree graph' });
-    const node = within(graph).getByRole('button', { name: 'When does it run hot?' });
-    expect(node.textContent).toContain('1 problem');
+      // The step is marked in the graph in words, not only by its outline.
+      const graph = screen.getByRole('region', { name: 'Tree graph' });
+      const node = within(graph).getByRole('button', { name: 'When does it run hot?' });
+      expect(node.textContent).toContain('1 problem');
 
-    // Select another step, then follow the problem back to the box it is about.
-    fireEvent.click(within(graph).getByRole('button', { name: 'Coolant temperature' }));
-    expect(await screen.findByRole('form', { name: 'Edit “Coolant temperature”' })).toBeTruthy();
-    await userEvent.setup().click(items[0]!);
-    expect(await screen.findByRole('form', { name: 'Edit “When does it run hot?”' })).toBeTruthy();
-    const answer = screen.getByRole('group', { name: 'Answer 2: At speed' });
-    const target = within(answer).getByLabelText('Leads to');
-    await waitFor(() => expect(document.activeElement).toBe(target));
-    expect(target.getAttribute('aria-invalid')).toBe('true');
-  });
+      // Select another step, then follow the problem back to the box it is about.
+      fireEvent.click(within(graph).getByRole('button', { name: 'Coolant temperature' }));
+      expect(await screen.findByRole('form', { name: 'Edit “Coolant temperature”' })).toBeTruthy();
+      await userEvent.setup().click(items[0]!);
+      expect(
+        await screen.findByRole('form', { name: 'Edit “When does it run hot?”' }),
+      ).toBeTruthy();
+      const answer = screen.getByRole('group', { name: 'Answer 2: At speed' });
+      const target = within(answer).getByLabelText('Leads to');
+      await waitFor(() => expect(document.activeElement).toBe(target));
+      expect(target.getAttribute('aria-invalid')).toBe('true');
+    },
+  );
 
   it('checks a formula as it is typed and works it out on sample values', async () => {
     mockApi({
@@ -154,12 +160,16 @@ describe('the draft editor', () => {
     await user.clear(condition);
     await user.type(condition, 'coolantTemp > 105 and engineHot');
     expect(
-      await within(branch).findByText('"engineHot" is not a reading or computed value of this tree.'),
+      await within(branch).findByText(
+        '"engineHot" is not a reading or computed value of this tree.',
+      ),
     ).toBeTruthy();
 
     await user.clear(condition);
     await user.type(condition, 'coolantTemp > 221 degF');
-    expect(await within(branch).findByText(/Formula reads well: it gives a yes\/no result/)).toBeTruthy();
+    expect(
+      await within(branch).findByText(/Formula reads well: it gives a yes\/no result/),
+    ).toBeTruthy();
     await user.type(within(branch).getByLabelText('Sample coolantTemp'), '104');
     expect(within(branch).getByText('does not hold (false)')).toBeTruthy();
     await user.clear(within(branch).getByLabelText('Sample coolantTemp'));
@@ -203,10 +213,13 @@ describe('the draft editor', () => {
       // Compare: their copy beside mine, step by step.
       await user.click(within(alert).getByRole('button', { name: 'Compare' }));
       const comparison = await screen.findByRole('region', { name: 'Their draft and yours' });
-      expect(within(comparison).getByText('“Cooling works as it should” — differs in: title')).toBeTruthy();
+      expect(
+        within(comparison).getByText('“Cooling works as it should” — differs in: title'),
+      ).toBeTruthy();
       expect(within(comparison).getByText('“Cooling normal” — differs in: title')).toBeTruthy();
-      expect(within(comparison).getByRole('button', { name: 'Keep mine and save over theirs' }))
-        .toBeTruthy();
+      expect(
+        within(comparison).getByRole('button', { name: 'Keep mine and save over theirs' }),
+      ).toBeTruthy();
 
       // Nothing was sent again while the conflict stands.
       await user.type(screen.getByLabelText('Title'), '!');
@@ -214,10 +227,16 @@ describe('the draft editor', () => {
       expect(requests.filter((request) => request.method === 'PUT')).toHaveLength(1);
 
       await user.click(within(comparison).getByRole('button', { name: 'Reload theirs' }));
-      await waitFor(() => expect(screen.queryByRole('region', { name: 'Their draft and yours' })).toBeNull());
-      expect((screen.getByLabelText('Title') as HTMLInputElement).value).toBe('When does it run hot?');
+      await waitFor(() =>
+        expect(screen.queryByRole('region', { name: 'Their draft and yours' })).toBeNull(),
+      );
+      expect((screen.getByLabelText('Title') as HTMLInputElement).value).toBe(
+        'When does it run hot?',
+      );
       const graph = screen.getByRole('region', { name: 'Tree graph' });
-      expect(within(graph).getByRole('button', { name: 'Cooling works as it should' })).toBeTruthy();
+      expect(
+        within(graph).getByRole('button', { name: 'Cooling works as it should' }),
+      ).toBeTruthy();
     },
   );
 

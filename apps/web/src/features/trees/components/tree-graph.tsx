@@ -62,10 +62,10 @@ const StepNodeView = memo(function StepNodeView({
   const flow = useReactFlow();
   const descId = `graph-node-${id}-desc`;
   const classes = [
-    'tree-node flex h-full w-full flex-col items-start justify-between gap-1 rounded-control bg-surface px-3 py-2 text-left',
+    'tree-node flex h-full w-full flex-col items-start justify-between gap-1 rounded-control px-3 py-2 text-left',
+    data.current ? 'bg-info-bg' : 'bg-surface',
     data.problems > 0 ? 'border-[3px] border-danger-line' : 'border-2 border-line-strong',
     data.selected ? 'outline-4 outline-offset-2 outline-primary' : '',
-    data.current ? 'bg-info-bg' : '',
   ].join(' ');
   return (
     <>
@@ -97,23 +97,23 @@ const StepNodeView = memo(function StepNodeView({
       >
         <span className="flex w-full items-center justify-between gap-2 text-sm text-ink-muted">
           <span>{data.kindLabel}</span>
-          <span className="flex gap-1">
-            {data.isStart ? <span className="font-semibold text-ink">▶ Start</span> : null}
-            {data.selected ? <span className="font-semibold text-primary">Editing</span> : null}
-            {data.current ? (
-              <span className="font-semibold text-info-ink">Walk is here</span>
-            ) : null}
-          </span>
+          {data.isStart ? <span className="font-semibold text-ink">▶ Start</span> : null}
         </span>
         <span className="line-clamp-2 w-full text-base leading-tight font-semibold">
           {data.title}
         </span>
-        {data.problems > 0 ? (
-          <span className="text-sm font-bold text-danger-ink">
-            <span aria-hidden="true">✕ </span>
-            {data.problems === 1 ? '1 problem' : `${data.problems} problems`}
-          </span>
-        ) : null}
+        <span className="flex min-h-[1.45rem] w-full items-center justify-between gap-2 text-sm font-semibold">
+          {data.problems > 0 ? (
+            <span className="text-danger-ink">
+              <span aria-hidden="true">✕ </span>
+              {data.problems === 1 ? '1 problem' : `${data.problems} problems`}
+            </span>
+          ) : (
+            <span />
+          )}
+          {data.selected ? <span className="text-primary">Editing</span> : null}
+          {data.current ? <span className="text-info-ink">Walk is here</span> : null}
+        </span>
         <span id={descId} className="sr-only">
           {[
             data.kindLabel,
@@ -255,7 +255,11 @@ interface LayoutState {
  * edit uses a cached layout, lays a small tree out at once, or — for a large tree — shows the
  * edit immediately with an interim placement and swaps in the worker's layout when it arrives.
  */
-function useGraphLayout(ids: readonly string[], edges: readonly GraphEdge[], start: string): Layout {
+function useGraphLayout(
+  ids: readonly string[],
+  edges: readonly GraphEdge[],
+  start: string,
+): Layout {
   const key = `${start}\u0000${structureKey(ids, edges)}`;
   const [state, setState] = useState<LayoutState>(() => ({
     key,
@@ -265,7 +269,8 @@ function useGraphLayout(ids: readonly string[], edges: readonly GraphEdge[], sta
   let current = state;
   if (state.key !== key) {
     const ready =
-      cachedLayout(key) ?? (ids.length <= SYNC_LAYOUT_LIMIT ? layoutFor(key, ids, edges, start) : null);
+      cachedLayout(key) ??
+      (ids.length <= SYNC_LAYOUT_LIMIT ? layoutFor(key, ids, edges, start) : null);
     current = ready
       ? { key, layout: ready, settled: true }
       : { key, layout: interimLayout(state.layout, ids, edges), settled: false };

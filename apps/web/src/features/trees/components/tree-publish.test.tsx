@@ -47,7 +47,9 @@ const draft = version({
   basedOnVersion: 1,
 });
 
-function entry(overrides: Partial<TreeLibraryEntry> = {}): TreeLibraryEntry & {
+function entry(
+  overrides: Partial<TreeLibraryEntry & { regressionCaseIds: string[] }> = {},
+): TreeLibraryEntry & {
   regressionCaseIds: string[];
 } {
   const v1 = version({});
@@ -84,45 +86,62 @@ const report: RegressionReport = {
 };
 
 describe('check and publish', () => {
-  it('shows the cases whose finding would change and publishes only on “Publish anyway”', { timeout: 15_000 }, async () => {
-    const publishes: unknown[] = [];
-    let published = false;
-    mockApi({
-      'GET /api/me': () => json(makeMe()),
-      [`GET /api/trees/${treeId}/draft`]: () => json(draft),
-      [`GET /api/trees/${treeId}`]: () =>
-        json(published ? entry({ draft: null, versions: [version({}), { ...draft, status: 'published' }] }) : entry()),
-      [`POST /api/trees/${treeId}/draft/regression`]: () => json(report),
-      [`POST /api/trees/${treeId}/draft/publish`]: (request) => {
-        publishes.push(request.body);
-        if (!(request.body as { confirmChangedOutcomes: boolean }).confirmChangedOutcomes) {
-          return errorResponse(
-            409,
-            'conflict',
-            '1 case(s) in the regression set would no longer reach the outcome they reached (C-00012). Confirm to publish anyway.',
-            { 'C-00012': 'different-outcome' },
-          );
-        }
-        published = true;
-        return json({ ...draft, status: 'published', changeNote: 'Fan check first.' });
-      },
-    });
-    renderApp(`/trees/${treeId}/draft/publish`);
-    const user = userEvent.setup();
-    await user.type(await screen.findByLabelText('Change note', {}, { timeout: 10_000 }), 'Fan check first.');
-    await user.click(screen.getByRole('button', { name: 'Publish' }));
+  it(
+    'shows the cases whose finding would change and publishes only on “Publish anyway”',
+    { timeout: 15_000 },
+    async () => {
+      const publishes: unknown[] = [];
+      let published = false;
+      mockApi({
+        'GET /api/me': () => json(makeMe()),
+        [`GET /api/trees/${treeId}/draft`]: () => json(draft),
+        [`GET /api/trees/${treeId}`]: () =>
+          json(
+            published
+              ? entry({ draft: null, versions: [version({}), { ...draft, status: 'published' }] })
+              : entry(),
+          ),
+        [`POST /api/trees/${treeId}/draft/regression`]: () => json(report),
+        [`POST /api/trees/${treeId}/draft/publish`]: (request) => {
+          publishes.push(request.body);
+          if (!(request.body as { confirmChangedOutcomes: boolean }).confirmChangedOutcomes) {
+            return errorResponse(
+              409,
+              'conflict',
+              '1 case(s) in the regression set would no longer reach the outcome they reached (C-00012). Confirm to publish anyway.',
+              { 'C-00012': 'different-outcome' },
+            );
+          }
+          published = true;
+          return json({ ...draft, status: 'published', changeNote: 'Fan check first.' });
+        },
+      });
+      renderApp(`/trees/${treeId}/draft/publish`);
+      const user = userEvent.setup();
+      await user.type(
+        await screen.findByLabelText('Change note', {}, { timeout: 10_000 }),
+        'Fan check first.',
+      );
+      await user.click(screen.getByRole('button', { name: 'Publish' }));
 
-    const warning = await screen.findByRole('alert');
-    expect(warning.textContent).toContain('C-00012');
-    expect(within(warning).getByText('Different finding')).toBeTruthy();
-    // The replay that runs with the refusal says what the case reaches now.
-    expect(await within(warning).findByText(/Fan stage not switching → Thermostat sticking closed/)).toBeTruthy();
-    expect(publishes).toHaveLength(1);
+      const warning = await screen.findByRole('alert');
+      expect(warning.textContent).toContain('C-00012');
+      expect(within(warning).getByText('Different finding')).toBeTruthy();
+      // The replay that runs with the refusal says what the case reaches now.
+      expect(
+        await within(warning).findByText(/Fan stage not switching → Thermostat sticking closed/),
+      ).toBeTruthy();
+      expect(publishes).toHaveLength(1);
 
-    await user.click(within(warning).getByRole('button', { name: 'Publish anyway' }));
-    expect(await screen.findByText('Version 2 published')).toBeTruthy();
-    expect(publishes[1]).toEqual({ revision: 7, changeNote: 'Fan check first.', confirmChangedOutcomes: true });
-  });
+      await user.click(within(warning).getByRole('button', { name: 'Publish anyway' }));
+      expect(await screen.findByText('Version 2 published')).toBeTruthy();
+      expect(publishes[1]).toEqual({
+        revision: 7,
+        changeNote: 'Fan check first.',
+        confirmChangedOutcomes: true,
+      });
+    },
+  );
 
   it('replays finished cases in a table and saves the chosen regression set', async () => {
     const { requests } = mockApi({
@@ -134,8 +153,12 @@ describe('check and publish', () => {
     });
     renderApp(`/trees/${treeId}/draft/publish`);
     const user = userEvent.setup();
-    await user.click(await screen.findByRole('button', { name: 'Replay finished cases' }, { timeout: 10_000 }));
-    const table = await screen.findByRole('table', { name: 'Finished cases replayed against the draft' });
+    await user.click(
+      await screen.findByRole('button', { name: 'Replay finished cases' }, { timeout: 10_000 }),
+    );
+    const table = await screen.findByRole('table', {
+      name: 'Finished cases replayed against the draft',
+    });
     const row = within(table).getAllByRole('row')[1]!;
     expect(row.textContent).toContain('C-00012');
     expect(row.textContent).toContain('Fan stage not switching');
@@ -145,7 +168,9 @@ describe('check and publish', () => {
     await user.click(within(row).getByRole('checkbox', { name: /Guards the tree: C-00012/ }));
     await user.click(screen.getByRole('button', { name: 'Save regression set' }));
     await waitFor(() =>
-      expect(requests.find((request) => request.method === 'PUT')?.body).toEqual({ caseIds: [caseId] }),
+      expect(requests.find((request) => request.method === 'PUT')?.body).toEqual({
+        caseIds: [caseId],
+      }),
     );
   });
 });
@@ -162,7 +187,11 @@ describe('the tree library', () => {
       caseCount: 0,
       definition: { title: 'Imported tree' },
       problems: [
-        { code: 'unknown-target', message: '"Ask" leads to "nowhere", but there is no node with that id.', nodeId: 'ask' },
+        {
+          code: 'unknown-target',
+          message: '"Ask" leads to "nowhere", but there is no node with that id.',
+          nodeId: 'ask',
+        },
         { code: 'no-outcome', message: 'The tree has no outcome.' },
       ],
     });
