@@ -1,13 +1,8 @@
-// Words for the tree screens: hazards, quantities, units, version statuses and verdicts, and
-// how dates and readings are written.
+// Words for the tree screens: hazards, version statuses and verdicts, and how dates and typed
+// numbers are read. No fault-tree code, so the library screens load without mathjs; quantities
+// and units are in units-format.ts.
 import type { RegressionVerdict, TreeVersionInfo, TreeVersionStatus } from '@heatpath/contracts';
-import {
-  quantityInfo,
-  unitSymbol,
-  type HazardKind,
-  type Quantity,
-  type UnitCode,
-} from '@heatpath/fault-tree';
+import type { HazardKind } from '@heatpath/fault-tree';
 import type { BadgeTone } from '../../components/ui/badge';
 
 export const hazardLabels: Record<HazardKind, string> = {
@@ -19,42 +14,6 @@ export const hazardLabels: Record<HazardKind, string> = {
   'belt-drive': 'Timing-belt work',
   'road-test': 'Road test',
 };
-
-export const quantityLabels: Record<Quantity, string> = {
-  temperature: 'Temperature',
-  temperatureDelta: 'Temperature difference',
-  pressure: 'Pressure (gauge)',
-  time: 'Time',
-  volume: 'Volume',
-  percentage: 'Percentage',
-  number: 'Plain number',
-};
-
-/** "°C", "bar"; a plain number has no unit and says so. */
-export function unitLabel(unit: UnitCode): string {
-  return (unitSymbol(unit) as string | undefined) || (unit === 'none' ? 'no unit' : String(unit));
-}
-
-// Tolerant of an imported file's unknown quantity: validation names that problem itself.
-function infoOf(quantity: Quantity) {
-  return (quantityInfo as Partial<typeof quantityInfo>)[quantity] ?? quantityInfo.number;
-}
-
-export function canonicalUnit(quantity: Quantity): UnitCode {
-  return infoOf(quantity).canonical;
-}
-
-/** "°C or °F": the units a reading of this quantity may be typed in. */
-export function entryUnitsWords(quantity: Quantity): string {
-  const units = infoOf(quantity).entryUnits.map(unitLabel);
-  return units.length > 1
-    ? `${units.slice(0, -1).join(', ')} or ${units.at(-1)}`
-    : (units[0] ?? '');
-}
-
-export function entryUnitOptions(quantity: Quantity): { value: UnitCode; label: string }[] {
-  return infoOf(quantity).entryUnits.map((unit) => ({ value: unit, label: unitLabel(unit) }));
-}
 
 export const statusWords: Record<TreeVersionStatus, string> = {
   draft: 'Draft',

@@ -12,7 +12,8 @@ import {
 import { useId, useMemo } from 'react';
 import { FieldError, TextField } from '../../../components/ui/field';
 import { pathKey } from '../draft-model';
-import { canonicalUnit, quantityLabels, readNumber, unitLabel } from '../tree-format';
+import { readNumber } from '../tree-format';
+import { canonicalUnit, quantityLabels, unitLabel } from '../units-format';
 import type { ErrorAt, Path } from './editor-fields';
 
 export type Samples = Readonly<Record<string, string>>;

@@ -10,7 +10,7 @@ import {
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { pathKey, valueNameFrom } from '../draft-model';
-import { canonicalUnit, entryUnitsWords, quantityLabels, unitLabel } from '../tree-format';
+import { canonicalUnit, entryUnitsWords, quantityLabels, unitLabel } from '../units-format';
 import {
   ListRow,
   ListSection,

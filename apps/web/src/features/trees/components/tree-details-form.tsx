@@ -3,7 +3,7 @@
 import { quantities, type ComputedValue, type Quantity } from '@heatpath/fault-tree';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { pathKey, valueNameFrom, type EditableTree } from '../draft-model';
-import { canonicalUnit, quantityLabels, unitLabel } from '../tree-format';
+import { canonicalUnit, quantityLabels, unitLabel } from '../units-format';
 import {
   ListRow,
   ListSection,

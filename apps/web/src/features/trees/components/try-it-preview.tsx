@@ -26,7 +26,8 @@ import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import type { EditableTree } from '../draft-model';
-import { entryUnitOptions, hazardLabels, problemCount, readNumber } from '../tree-format';
+import { hazardLabels, problemCount, readNumber } from '../tree-format';
+import { entryUnitOptions } from '../units-format';
 
 interface TryItPreviewProps {
   tree: EditableTree;
