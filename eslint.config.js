@@ -25,7 +25,11 @@ export default tseslint.config(
       'check-file/filename-naming-convention': [
         'error',
         // Migrations start with their sequence number, e.g. 0002-cases.ts.
-        { '**/!(migrations)/*.{ts,tsx,js,mjs}': 'KEBAB_CASE', '**/migrations/[0-9]*.ts': '+([0-9])-+([a-z0-9-])', '**/migrations/index.ts': 'KEBAB_CASE' },
+        {
+          '**/!(migrations)/*.{ts,tsx,js,mjs}': 'KEBAB_CASE',
+          '**/migrations/[0-9]*.ts': '+([0-9])-+([a-z0-9-])',
+          '**/migrations/index.ts': 'KEBAB_CASE',
+        },
         { ignoreMiddleExtensions: true },
       ],
       'check-file/folder-naming-convention': [
@@ -54,8 +58,14 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['@heatpath/api', '@heatpath/web', '**/apps/**'], message: 'Packages never import the apps.' },
-            { group: ['node:fs', 'fs', 'node:net', 'node:http', 'pg', 'sequelize', 'express'], message: 'Packages have no I/O.' },
+            {
+              group: ['@heatpath/api', '@heatpath/web', '**/apps/**'],
+              message: 'Packages never import the apps.',
+            },
+            {
+              group: ['node:fs', 'fs', 'node:net', 'node:http', 'pg', 'sequelize', 'express'],
+              message: 'Packages have no I/O.',
+            },
           ],
         },
       ],
@@ -66,7 +76,14 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: ['**/features/**', '**/app/**'], message: 'Shared code knows no features or routes.' }] },
+        {
+          patterns: [
+            {
+              group: ['**/features/**', '**/app/**'],
+              message: 'Shared code knows no features or routes.',
+            },
+          ],
+        },
       ],
     },
   },

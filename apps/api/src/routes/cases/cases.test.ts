@@ -39,21 +39,17 @@ describe('opening a case', () => {
 
   it('numbers cases per workshop and can add a new customer at intake', async () => {
     const { tech, vehicle, trees } = await setup();
-    const first = await tech
-      .post('/api/cases')
-      .send({
-        vehicleId: vehicle.id,
-        complaint: 'First complaint',
-        treeId: trees[overheatingTreeKey],
-      });
-    const second = await tech
-      .post('/api/cases')
-      .send({
-        vehicleId: vehicle.id,
-        complaint: 'Second complaint',
-        treeId: trees[overheatingTreeKey],
-        newCustomer: { name: 'Demelza Rowe', phone: '01632 960999' },
-      });
+    const first = await tech.post('/api/cases').send({
+      vehicleId: vehicle.id,
+      complaint: 'First complaint',
+      treeId: trees[overheatingTreeKey],
+    });
+    const second = await tech.post('/api/cases').send({
+      vehicleId: vehicle.id,
+      complaint: 'Second complaint',
+      treeId: trees[overheatingTreeKey],
+      newCustomer: { name: 'Demelza Rowe', phone: '01632 960999' },
+    });
     expect(first.body.number).toBe(1);
     expect(second.body.number).toBe(2);
     expect(second.body.customer.name).toBe('Demelza Rowe');
@@ -83,24 +79,20 @@ describe('opening a case', () => {
 
   it('lets only a lead assign a case to someone else', async () => {
     const { tech, vehicle, trees, people } = await setup();
-    const res = await tech
-      .post('/api/cases')
-      .send({
-        vehicleId: vehicle.id,
-        complaint: 'Overheats',
-        treeId: trees[overheatingTreeKey],
-        assignedTo: people.lead.id,
-      });
+    const res = await tech.post('/api/cases').send({
+      vehicleId: vehicle.id,
+      complaint: 'Overheats',
+      treeId: trees[overheatingTreeKey],
+      assignedTo: people.lead.id,
+    });
     expect(res.status).toBe(403);
     const lead = await signedIn(app, people.lead.email, testPassword);
-    const ok = await lead
-      .post('/api/cases')
-      .send({
-        vehicleId: vehicle.id,
-        complaint: 'Overheats',
-        treeId: trees[overheatingTreeKey],
-        assignedTo: people.technician.id,
-      });
+    const ok = await lead.post('/api/cases').send({
+      vehicleId: vehicle.id,
+      complaint: 'Overheats',
+      treeId: trees[overheatingTreeKey],
+      assignedTo: people.technician.id,
+    });
     expect(ok.status).toBe(201);
     expect(ok.body.assignee.id).toBe(people.technician.id);
   });
@@ -111,13 +103,11 @@ describe('the case list', () => {
     const { tech, vehicle, trees, people } = await setup();
     const ids: string[] = [];
     for (let i = 0; i < 7; i += 1) {
-      const r = await tech
-        .post('/api/cases')
-        .send({
-          vehicleId: vehicle.id,
-          complaint: `Complaint ${i}`,
-          treeId: trees[overheatingTreeKey],
-        });
+      const r = await tech.post('/api/cases').send({
+        vehicleId: vehicle.id,
+        complaint: `Complaint ${i}`,
+        treeId: trees[overheatingTreeKey],
+      });
       ids.push(r.body.id);
     }
     const seen: string[] = [];
@@ -150,32 +140,26 @@ describe('the case list', () => {
   it('shows nothing of another workshop, and answers 404 for its case', async () => {
     const mine = await setup();
     const theirs = await setup();
-    const theirCase = await theirs.tech
-      .post('/api/cases')
-      .send({
-        vehicleId: theirs.vehicle.id,
-        complaint: 'Theirs',
-        treeId: theirs.trees[overheatingTreeKey],
-      });
+    const theirCase = await theirs.tech.post('/api/cases').send({
+      vehicleId: theirs.vehicle.id,
+      complaint: 'Theirs',
+      treeId: theirs.trees[overheatingTreeKey],
+    });
     const list = await mine.tech.get('/api/cases').query({ q: theirs.vehicle.plate ?? '' });
     expect(list.body.cases).toEqual([]);
     expect((await mine.tech.get(`/api/cases/${theirCase.body.id}`)).status).toBe(404);
     // Nor can their vehicle or tree be used for a case here.
-    const crossVehicle = await mine.tech
-      .post('/api/cases')
-      .send({
-        vehicleId: theirs.vehicle.id,
-        complaint: 'x y z',
-        treeId: mine.trees[overheatingTreeKey],
-      });
+    const crossVehicle = await mine.tech.post('/api/cases').send({
+      vehicleId: theirs.vehicle.id,
+      complaint: 'x y z',
+      treeId: mine.trees[overheatingTreeKey],
+    });
     expect(crossVehicle.status).toBe(404);
-    const crossTree = await mine.tech
-      .post('/api/cases')
-      .send({
-        vehicleId: mine.vehicle.id,
-        complaint: 'x y z',
-        treeId: theirs.trees[overheatingTreeKey],
-      });
+    const crossTree = await mine.tech.post('/api/cases').send({
+      vehicleId: mine.vehicle.id,
+      complaint: 'x y z',
+      treeId: theirs.trees[overheatingTreeKey],
+    });
     expect(crossTree.status).toBe(404);
   });
 

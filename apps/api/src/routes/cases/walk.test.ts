@@ -15,13 +15,11 @@ async function openCase() {
   const w = await createWorkshopWithTrees();
   const vehicle = await createVehicle(w.workshop.id);
   const tech = await signedIn(app, w.people.technician.email, testPassword);
-  const res = await tech
-    .post('/api/cases')
-    .send({
-      vehicleId: vehicle.id,
-      complaint: 'Overheats now and then on long climbs.',
-      treeId: w.trees[overheatingTreeKey],
-    });
+  const res = await tech.post('/api/cases').send({
+    vehicleId: vehicle.id,
+    complaint: 'Overheats now and then on long climbs.',
+    treeId: w.trees[overheatingTreeKey],
+  });
   expect(res.status).toBe(201);
   return { ...w, tech, caseId: res.body.id as string };
 }
@@ -128,12 +126,10 @@ describe('walking a case', () => {
     const { tech, caseId } = await openCase();
     await answer(tech, caseId, stuckShroudPath[0]!, 0);
     await answer(tech, caseId, stuckShroudPath[1]!, 1);
-    const back = await tech
-      .post(`/api/cases/${caseId}/walk`)
-      .send({
-        idempotencyKey: randomUUID(),
-        event: { type: 'walk.back', nodeId: 'visual-leaks', position: 2 },
-      });
+    const back = await tech.post(`/api/cases/${caseId}/walk`).send({
+      idempotencyKey: randomUUID(),
+      event: { type: 'walk.back', nodeId: 'visual-leaks', position: 2 },
+    });
     expect(back.status).toBe(201);
     expect(back.body.walk.currentNodeId).toBe('level-cold');
     expect(back.body.walk.history).toHaveLength(3);
@@ -229,13 +225,11 @@ describe('walking a case', () => {
     expect(kase.body.tree.version).toBe(1);
     expect(kase.body.walk.currentNodeId).toBe('level-cold');
     expect((await answer(tech, caseId, stuckShroudPath[1]!, 1)).status).toBe(201);
-    const fresh = await tech
-      .post('/api/cases')
-      .send({
-        vehicleId: kase.body.vehicle.id,
-        complaint: 'Another visit',
-        treeId: trees[overheatingTreeKey],
-      });
+    const fresh = await tech.post('/api/cases').send({
+      vehicleId: kase.body.vehicle.id,
+      complaint: 'Another visit',
+      treeId: trees[overheatingTreeKey],
+    });
     expect(fresh.body.tree.version).toBe(2);
   });
 
@@ -301,20 +295,16 @@ describe('walking a case', () => {
   it('stores notes once per idempotency key, with who and when', async () => {
     const { tech, caseId } = await openCase();
     const key = randomUUID();
-    const a = await tech
-      .post(`/api/cases/${caseId}/notes`)
-      .send({
-        idempotencyKey: key,
-        nodeId: 'interview-pattern',
-        text: 'Customer tows a caravan in summer.',
-      });
-    const b = await tech
-      .post(`/api/cases/${caseId}/notes`)
-      .send({
-        idempotencyKey: key,
-        nodeId: 'interview-pattern',
-        text: 'Customer tows a caravan in summer.',
-      });
+    const a = await tech.post(`/api/cases/${caseId}/notes`).send({
+      idempotencyKey: key,
+      nodeId: 'interview-pattern',
+      text: 'Customer tows a caravan in summer.',
+    });
+    const b = await tech.post(`/api/cases/${caseId}/notes`).send({
+      idempotencyKey: key,
+      nodeId: 'interview-pattern',
+      text: 'Customer tows a caravan in summer.',
+    });
     expect(a.status).toBe(201);
     expect(b.body.id).toBe(a.body.id);
     const kase = await tech.get(`/api/cases/${caseId}`);

@@ -39,14 +39,12 @@ describe('staff management', () => {
   it('refuses a duplicate address with 409 and a short password with 400', async () => {
     const { people } = await createWorkshop();
     const lead = await signedIn(app, people.lead.email, testPassword);
-    const dup = await lead
-      .post('/api/staff')
-      .send({
-        email: people.advisor.email,
-        name: 'Dup',
-        role: 'advisor',
-        password: 'long-enough-pass',
-      });
+    const dup = await lead.post('/api/staff').send({
+      email: people.advisor.email,
+      name: 'Dup',
+      role: 'advisor',
+      password: 'long-enough-pass',
+    });
     expect(dup.status).toBe(409);
     expect(dup.body.error.message).toMatch(/already/);
     const short = await lead

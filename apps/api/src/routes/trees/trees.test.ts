@@ -25,12 +25,10 @@ async function finishedCase(agent: Agent, workshopId: string, treeId: string) {
     .send({ vehicleId: vehicle.id, complaint: 'Overheats on climbs', treeId });
   let position = 0;
   for (const step of stuckShroudPath) {
-    const r = await agent
-      .post(`/api/cases/${kase.body.id}/walk`)
-      .send({
-        idempotencyKey: randomUUID(),
-        event: { ...step.answer, nodeId: step.nodeId, position },
-      });
+    const r = await agent.post(`/api/cases/${kase.body.id}/walk`).send({
+      idempotencyKey: randomUUID(),
+      event: { ...step.answer, nodeId: step.nodeId, position },
+    });
     position = r.body.walk.position;
   }
   expect((await agent.post(`/api/cases/${kase.body.id}/diagnosed`)).status).toBe(200);

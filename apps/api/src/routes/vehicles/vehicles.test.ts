@@ -92,14 +92,12 @@ describe('vehicles', () => {
     expect((await me.get('/api/vehicles').query({ q: plate })).body.vehicles).toEqual([]);
     expect((await me.get(`/api/vehicles/${theirVehicle.body.id}`)).status).toBe(404);
     expect((await me.get('/api/customers').query({ q: 'Isolde' })).body.customers).toEqual([]);
-    const linked = await me
-      .post('/api/vehicles')
-      .send({
-        plate: uniquePlate(),
-        make: 'Brisa',
-        model: 'Orlo',
-        customerId: theirCustomer.body.id,
-      });
+    const linked = await me.post('/api/vehicles').send({
+      plate: uniquePlate(),
+      make: 'Brisa',
+      model: 'Orlo',
+      customerId: theirCustomer.body.id,
+    });
     expect(linked.status).toBe(404);
   });
 });
