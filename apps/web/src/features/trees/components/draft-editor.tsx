@@ -427,7 +427,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
           <section
             aria-label="Tree graph"
             aria-describedby="tree-graph-help"
-            className="h-[26rem] overflow-hidden rounded-panel border-2 border-line bg-canvas lg:h-[52dvh] lg:min-h-[22rem]"
+            className="h-[26rem] overflow-hidden rounded-panel border-2 border-line bg-canvas lg:h-[46dvh] lg:min-h-[20rem]"
           >
             <TreeGraph
               tree={deferred}

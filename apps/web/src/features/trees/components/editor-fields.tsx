@@ -96,7 +96,14 @@ interface TargetSelectProps {
 }
 
 export function TargetSelect({ errorAt, ...props }: TargetSelectProps) {
-  return <TargetSelectControl {...props} error={errorAt(props.path)} />;
+  const error = errorAt(props.path);
+  // Validation says an empty target "leads to \"\"": under the box, say what to do instead.
+  return (
+    <TargetSelectControl
+      {...props}
+      error={error && !props.value ? 'Choose the step this leads to.' : error}
+    />
+  );
 }
 
 type TargetSelectControlProps = Omit<TargetSelectProps, 'errorAt'> & { error: string | undefined };
