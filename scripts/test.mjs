@@ -46,6 +46,7 @@ async function vitest(stage, projects, env = {}) {
     '--reporter=default',
     '--reporter=json',
     `--outputFile.json=${report}`,
+    ...(process.env.HEATPATH_VITEST_ARGS ? process.env.HEATPATH_VITEST_ARGS.split(' ') : []),
   ];
   const code = await run(pnpm[0], args, { env: { ...process.env, ...env } });
   let counts = { passed: 0, failed: code === 0 ? 0 : 1, skipped: 0 };
