@@ -1,5 +1,5 @@
 // The parser over every layout issue 9 lists: delimiters, decimal marks, header or none, the
-// four time formats, and °C/°F from the header. All data are invented.
+// four time formats, and °C/°F from the header. Every log here is invented.
 import { describe, expect, it } from 'vitest';
 import { file, needsMapping, parsed, rows } from '../test/parse-helpers.js';
 
