@@ -9,3 +9,4 @@ export * from './trees';
 export * from './mail';
 export * from './repair-order';
 export * from './temperature-logs';
+export * from './training';
