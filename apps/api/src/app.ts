@@ -22,6 +22,7 @@ import { vehiclesRouter } from './routes/vehicles/vehicles.router';
 import { casesRouter } from './routes/cases/cases.router';
 import { treesRouter } from './routes/trees/trees.router';
 import { outboxRouter } from './routes/outbox/outbox.router';
+import { trainingRouter } from './routes/training/training.router';
 import { createDiskFileStore } from './lib/storage/disk-file-store';
 import { createMailContext } from './lib/mail/mail-context';
 import type { MailContext } from './lib/mail/mail-context';
@@ -78,6 +79,7 @@ export function createApp(deps: AppDeps): express.Express {
   api.use('/trees', treesRouter());
   api.use('/cases', casesRouter({ store, mail }));
   api.use('/outbox', outboxRouter());
+  api.use('/training', trainingRouter({ store }));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

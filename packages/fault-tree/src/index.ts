@@ -121,7 +121,7 @@ export {
   WalkInvariantError,
 } from './walk/walk-api.js';
 export type { AnswerCheck, ApplyResult, ReadingsPreview } from './walk/walk-api.js';
-export { currentNodeIdOf, describeWalk } from './walk/walk-view.js';
+export { computedViews, currentNodeIdOf, describeWalk } from './walk/walk-view.js';
 export type {
   AnswerSummary,
   ComputedView,
@@ -146,3 +146,17 @@ export type { PersistedWalk, RestoreResult } from './walk/persist-walk.js';
 // Diff between versions
 export { diffTrees } from './diff/diff-trees.js';
 export type { FieldChange, NodeChange, NodeRef, TreeDiff } from './diff/diff-trees.js';
+
+// Training: what an apprentice predicts at each step of a finished walk
+export {
+  maxScoreOf,
+  planPredictions,
+  predictionPoints,
+  predictionQuestions,
+  scorePrediction,
+} from './training/plan-predictions.js';
+export type {
+  PlannedPrediction,
+  PredictionKind,
+  PredictionOption,
+} from './training/plan-predictions.js';

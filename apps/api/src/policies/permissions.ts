@@ -27,6 +27,11 @@ export const permissions = {
   'outbox.manage': ['lead'],
   'trees.read': ['lead', 'technician', 'advisor'],
   'trees.edit': ['lead'],
+  // The training casebook: the lead marks finished cases, builds courses, reads progress and
+  // signs off; apprentices (and the lead, to preview) replay and predict. Apprentices see only
+  // training cases, stripped of customer details, and only their own scores.
+  'training.manage': ['lead'],
+  'training.learn': ['lead', 'apprentice'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

@@ -6,6 +6,7 @@ import * as m0002 from './0002-cases';
 import * as m0003 from './0003-tree-authoring';
 import * as m0004 from './0004-repair-orders-and-mail';
 import * as m0005 from './0005-temperature-logs';
+import * as m0006 from './0006-training-casebook';
 
 export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0001-foundation', ...m0001 },
@@ -13,4 +14,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0003-tree-authoring', ...m0003 },
   { name: '0004-repair-orders-and-mail', ...m0004 },
   { name: '0005-temperature-logs', ...m0005 },
+  { name: '0006-training-casebook', ...m0006 },
 ].map(({ name, up, down }) => ({ name, up, down }));

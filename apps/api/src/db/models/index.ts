@@ -13,6 +13,12 @@ import { RegressionCase } from './regression-case';
 import { TemperatureLog } from './temperature-log';
 import { TemperatureLogMapping } from './temperature-log-mapping';
 import { TemperatureLogUpload } from './temperature-log-upload';
+import { TrainingAttempt } from './training-attempt';
+import { TrainingCase } from './training-case';
+import { TrainingCourse } from './training-course';
+import { TrainingCourseItem } from './training-course-item';
+import { TrainingPrediction } from './training-prediction';
+import { TrainingSignOff } from './training-sign-off';
 import { Tree } from './tree';
 import { TreeVersion } from './tree-version';
 import { User } from './user';
@@ -33,6 +39,12 @@ export {
   TemperatureLog,
   TemperatureLogMapping,
   TemperatureLogUpload,
+  TrainingAttempt,
+  TrainingCase,
+  TrainingCourse,
+  TrainingCourseItem,
+  TrainingPrediction,
+  TrainingSignOff,
   Tree,
   TreeVersion,
   User,
@@ -60,6 +72,12 @@ export function initModels(sequelize: Sequelize): void {
     TemperatureLogMapping,
     TemperatureLogUpload,
     TemperatureLog,
+    TrainingAttempt,
+    TrainingCase,
+    TrainingCourse,
+    TrainingCourseItem,
+    TrainingPrediction,
+    TrainingSignOff,
   ]) {
     model.initModel(sequelize);
   }
@@ -118,4 +136,23 @@ export function initModels(sequelize: Sequelize): void {
   TemperatureLog.belongsTo(Workshop, fk('workshopId'));
   TemperatureLog.belongsTo(Attachment, { foreignKey: 'attachmentId', as: 'attachment' });
   TemperatureLog.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader' });
+  TrainingCase.belongsTo(Workshop, fk('workshopId'));
+  TrainingCase.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });
+  TrainingCase.belongsTo(User, { foreignKey: 'markedBy', as: 'marker' });
+  TrainingCourse.belongsTo(Workshop, fk('workshopId'));
+  TrainingCourse.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+  TrainingCourse.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  TrainingCourse.hasMany(TrainingCourseItem, { foreignKey: 'courseId', as: 'items' });
+  TrainingCourseItem.belongsTo(TrainingCourse, { foreignKey: 'courseId', as: 'course' });
+  TrainingCourseItem.belongsTo(TrainingCase, { foreignKey: 'trainingCaseId', as: 'trainingCase' });
+  TrainingAttempt.belongsTo(Workshop, fk('workshopId'));
+  TrainingAttempt.belongsTo(TrainingCase, { foreignKey: 'trainingCaseId', as: 'trainingCase' });
+  TrainingAttempt.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+  TrainingAttempt.hasMany(TrainingPrediction, { foreignKey: 'attemptId', as: 'predictions' });
+  TrainingPrediction.belongsTo(TrainingAttempt, { foreignKey: 'attemptId', as: 'attempt' });
+  TrainingPrediction.belongsTo(Workshop, fk('workshopId'));
+  TrainingSignOff.belongsTo(TrainingCourse, { foreignKey: 'courseId', as: 'course' });
+  TrainingSignOff.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+  TrainingSignOff.belongsTo(User, { foreignKey: 'signedBy', as: 'signer' });
+  TrainingSignOff.belongsTo(Workshop, fk('workshopId'));
 }

@@ -1,0 +1,128 @@
+// Courses: an ordered set of training cases for one apprentice or for all of them. Saving a
+// course replaces its list in one transaction, so the order is never half written.
+import { Op } from 'sequelize';
+import type { CourseRequest, TrainingCourse as TrainingCourseView } from '@heatpath/contracts';
+import {
+  DiagnosticCase,
+  TrainingCase,
+  TrainingCourse,
+  TrainingCourseItem,
+  User,
+} from '../../db/models/index';
+import { AppError, notFound } from '../../errors';
+import { assertCan } from '../../policies/permissions';
+import type { Actor } from '../../policies/permissions';
+
+async function presentCourse(actor: Actor, course: TrainingCourse): Promise<TrainingCourseView> {
+  const items = await TrainingCourseItem.findAll({
+    where: { courseId: course.id },
+    include: [
+      {
+        model: TrainingCase,
+        as: 'trainingCase',
+        where: { workshopId: actor.workshopId },
+        include: [{ model: DiagnosticCase, as: 'case', attributes: ['symptom'] }],
+      },
+    ],
+    order: [['position', 'ASC']],
+  });
+  const apprentice = course.apprenticeId
+    ? await User.findOne({
+        where: { id: course.apprenticeId, workshopId: actor.workshopId },
+        attributes: ['id', 'name'],
+      })
+    : null;
+  return {
+    id: course.id,
+    title: course.title,
+    description: course.description,
+    apprentice: apprentice ? { id: apprentice.id, name: apprentice.name } : null,
+    items: items.map((item) => ({
+      trainingCaseId: item.trainingCaseId,
+      symptom:
+        (item.trainingCase as (TrainingCase & { case?: DiagnosticCase }) | undefined)?.case
+          ?.symptom ?? '',
+      difficulty: item.trainingCase?.difficulty ?? 'starter',
+    })),
+    createdAt: course.createdAt.toISOString(),
+    updatedAt: course.updatedAt.toISOString(),
+  };
+}
+
+async function checkRequest(actor: Actor, request: CourseRequest) {
+  if (request.apprenticeId) {
+    const apprentice = await User.findOne({
+      where: { id: request.apprenticeId, workshopId: actor.workshopId, role: 'apprentice' },
+    });
+    if (!apprentice)
+      throw new AppError('validation_failed', 'Choose an apprentice of this workshop.', {
+        apprenticeId: 'Choose an apprentice of this workshop, or everyone.',
+      });
+  }
+  const found = await TrainingCase.count({
+    where: { workshopId: actor.workshopId, id: { [Op.in]: request.trainingCaseIds } },
+  });
+  if (found !== request.trainingCaseIds.length)
+    throw new AppError('validation_failed', 'Some of those cases are not in the casebook.', {
+      trainingCaseIds: 'Choose training cases of this workshop.',
+    });
+}
+
+export async function listCourses(actor: Actor): Promise<TrainingCourseView[]> {
+  assertCan(actor, 'training.manage');
+  const courses = await TrainingCourse.findAll({
+    where: { workshopId: actor.workshopId },
+    order: [['createdAt', 'ASC']],
+  });
+  return Promise.all(courses.map((course) => presentCourse(actor, course)));
+}
+
+export async function saveCourse(options: {
+  actor: Actor;
+  courseId?: string;
+  request: CourseRequest;
+}): Promise<TrainingCourseView> {
+  const { actor, courseId, request } = options;
+  assertCan(actor, 'training.manage');
+  if (
+    courseId &&
+    !(await TrainingCourse.count({ where: { id: courseId, workshopId: actor.workshopId } }))
+  )
+    throw notFound('That course');
+  await checkRequest(actor, request);
+  const sequelize = TrainingCourse.sequelize;
+  if (!sequelize) throw new Error('models are not initialised');
+  const course = await sequelize.transaction(async (transaction) => {
+    const fields = {
+      title: request.title,
+      description: request.description ?? null,
+      apprenticeId: request.apprenticeId,
+    };
+    let saved: TrainingCourse;
+    if (courseId) {
+      const existing = await TrainingCourse.findOne({
+        where: { id: courseId, workshopId: actor.workshopId },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
+      if (!existing) throw notFound('That course');
+      saved = await existing.update(fields, { transaction });
+      await TrainingCourseItem.destroy({ where: { courseId }, transaction });
+    } else {
+      saved = await TrainingCourse.create(
+        { ...fields, workshopId: actor.workshopId, createdBy: actor.userId },
+        { transaction },
+      );
+    }
+    await TrainingCourseItem.bulkCreate(
+      request.trainingCaseIds.map((trainingCaseId, position) => ({
+        courseId: saved.id,
+        trainingCaseId,
+        position,
+      })),
+      { transaction },
+    );
+    return saved;
+  });
+  return presentCourse(actor, course);
+}
