@@ -79,20 +79,20 @@ export const areas: readonly Area[] = [
     label: 'Training',
     roles: ['lead'],
     summary: {
-      lead: 'Choose finished cases for apprentices to replay, and sign off their scores.',
+      lead: 'Choose finished cases for apprentices to replay, build courses, and sign off their progress.',
     },
-    comingWith: 'the training casebook',
   },
   {
     id: 'casebook',
     path: '/casebook',
     label: 'Casebook',
     roles: ['apprentice'],
+    // The lead opens training cases by link from Training, to see them as an apprentice does.
+    readers: ['lead'],
     summary: {
       apprentice:
         'Replay finished cases step by step, predict the next check, and see how you scored.',
     },
-    comingWith: 'the training casebook',
   },
   {
     id: 'findings',

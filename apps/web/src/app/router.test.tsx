@@ -5,6 +5,26 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { errorResponse, json, makeMe, makeStaffMember, mockApi } from '../test/api-mock';
 import { renderApp } from '../test/render-app';
 
+const casebookEntry = {
+  id: '00000000-0000-4000-8000-0000000000d1',
+  symptom: 'Overheats now and then, no fault codes stored',
+  complaint: 'Gauge climbs on long climbs.',
+  treeTitle: 'Overheats now and then',
+  difficulty: 'starter',
+  vehicle: {
+    make: 'Corvane',
+    model: 'Tessel',
+    year: 2017,
+    engine: null,
+    fuel: null,
+    mileageAtIntake: null,
+    mileageUnit: 'km',
+  },
+  stepCount: 9,
+  attempts: 0,
+  bestScore: null,
+};
+
 afterEach(() => {
   cleanup();
   vi.unstubAllGlobals();
@@ -36,12 +56,30 @@ describe('the signed-in shell', () => {
     },
   );
 
-  it('marks areas that are not built as coming later, without controls', async () => {
-    mockApi({ 'GET /api/me': () => json(makeMe({ role: 'apprentice' })) });
+  it('opens the casebook for an apprentice: courses and cases, never the answer', async () => {
+    mockApi({
+      'GET /api/me': () => json(makeMe({ role: 'apprentice' })),
+      'GET /api/training/casebook': () =>
+        json({
+          courses: [
+            {
+              id: '00000000-0000-4000-8000-0000000000b1',
+              title: 'First month',
+              description: null,
+              forEveryone: true,
+              trainingCaseIds: [casebookEntry.id],
+              signOff: null,
+            },
+          ],
+          cases: [casebookEntry],
+        }),
+    });
     renderApp('/casebook');
     expect(await screen.findByRole('heading', { level: 1, name: 'Casebook' })).toBeTruthy();
-    expect(screen.getByText('Coming with the training casebook')).toBeTruthy();
-    expect(within(screen.getByRole('main')).queryAllByRole('button')).toHaveLength(0);
+    expect(await screen.findByRole('heading', { name: 'First month' })).toBeTruthy();
+    expect(screen.getAllByText(/Overheats now and then, no fault codes stored/)).toHaveLength(2);
+    expect(screen.queryByText(/Coming with/)).toBeNull();
+    expect(screen.getByRole('link', { name: 'My progress' })).toBeTruthy();
   });
 
   it('sends a visitor without a session to sign-in, remembering the screen', async () => {

@@ -27,8 +27,12 @@ const caseLogsModule = () => import('./routes/case-logs');
 // The tree screens share two lazy chunks: the library and versions, and the editor with the graph.
 const treesModule = () => import('./routes/trees');
 const treeDraftModule = () => import('./routes/tree-draft');
+// The lead's training screens and the learner's casebook: one lazy chunk each.
+const trainingModule = () => import('./routes/training');
+const casebookModule = () => import('./routes/casebook');
 
-const comingLaterAreas: readonly AreaId[] = ['training', 'casebook'];
+// Areas whose capability is not built yet get an honest placeholder; none at the moment.
+const comingLaterAreas: readonly AreaId[] = [];
 
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
@@ -126,6 +130,98 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                     return {
                       loader: route.publishLoader(queryClient),
                       Component: route.PublishRoute,
+                    };
+                  },
+                },
+                {
+                  path: 'training',
+                  lazy: async () => {
+                    const route = await trainingModule();
+                    return {
+                      loader: route.trainingLayoutLoader(queryClient),
+                      Component: route.TrainingLayout,
+                    };
+                  },
+                  children: [
+                    {
+                      index: true,
+                      lazy: async () => {
+                        const route = await trainingModule();
+                        return {
+                          loader: route.trainingCasesLoader(queryClient),
+                          Component: route.TrainingCasesRoute,
+                        };
+                      },
+                    },
+                    {
+                      path: 'courses',
+                      lazy: async () => {
+                        const route = await trainingModule();
+                        return {
+                          loader: route.coursesLoader(queryClient),
+                          Component: route.CoursesRoute,
+                        };
+                      },
+                    },
+                    {
+                      path: 'progress',
+                      lazy: async () => {
+                        const route = await trainingModule();
+                        return {
+                          loader: route.progressLoader(queryClient),
+                          Component: route.ProgressRoute,
+                        };
+                      },
+                    },
+                  ],
+                },
+                {
+                  path: 'casebook',
+                  lazy: async () => {
+                    const route = await casebookModule();
+                    return {
+                      loader: route.casebookLoader(queryClient),
+                      Component: route.CasebookRoute,
+                    };
+                  },
+                },
+                {
+                  path: 'casebook/progress',
+                  lazy: async () => {
+                    const route = await casebookModule();
+                    return {
+                      loader: route.myProgressLoader(queryClient),
+                      Component: route.MyProgressRoute,
+                    };
+                  },
+                },
+                {
+                  path: 'casebook/attempts/:attemptId',
+                  lazy: async () => {
+                    const route = await casebookModule();
+                    return {
+                      loader: route.attemptLoader(queryClient),
+                      Component: route.AttemptRoute,
+                    };
+                  },
+                },
+                {
+                  path: 'casebook/:trainingCaseId',
+                  lazy: async () => {
+                    const route = await casebookModule();
+                    return {
+                      loader: route.casebookCaseLoader(queryClient),
+                      Component: route.CasebookCaseRoute,
+                    };
+                  },
+                },
+                {
+                  path: 'casebook/:trainingCaseId/replay',
+                  lazy: async () => {
+                    const route = await casebookModule();
+                    return {
+                      loader: route.replayLoader(queryClient),
+                      Component: route.ReplayRoute,
                     };
                   },
                 },
