@@ -1,5 +1,6 @@
-// Scripted answers for the shipped "overheats now and then" tree, used by API tests to walk a
-// case the way a technician would. Readings are invented but physically plausible.
+// Scripted answers for the shipped "overheats now and then" tree: the demo seed walks its
+// finished cases with them and API tests walk cases the way a technician would. Readings are
+// invented but physically plausible.
 type Answer =
   | { type: 'answer.choice'; choiceId: string }
   | { type: 'answer.procedure'; result: 'done' | 'could-not-do' }
@@ -71,3 +72,15 @@ export const stuckShroudPath: { nodeId: string; answer: Answer }[] = [
 
 export const stuckShroudOutcome = 'pump-shroud-stuck';
 export const overheatingTreeKey = 'overheats-intermittent-no-codes';
+
+/** A leak seen at the first look and confirmed under pressure: a short, starter case. */
+export const confirmedLeakPath: { nodeId: string; answer: Answer }[] = [
+  { nodeId: 'interview-pattern', answer: { type: 'answer.choice', choiceId: 'speed-or-load' } },
+  {
+    nodeId: 'level-cold',
+    answer: { type: 'answer.measurement', readings: { topUpLitres: { value: 0.9, unit: 'L' } } },
+  },
+  { nodeId: 'visual-leaks', answer: { type: 'answer.choice', choiceId: 'leak-seen' } },
+  { nodeId: 'locate-visible-leak', answer: { type: 'answer.procedure', result: 'done' } },
+  { nodeId: 'visible-leak-confirmed', answer: { type: 'answer.choice', choiceId: 'confirmed' } },
+];

@@ -5,6 +5,7 @@ import type { Sequelize } from 'sequelize';
 import { Customer, User, Vehicle, Workshop } from '../models/index';
 import { installShippedTrees } from '../../services/trees/install-shipped-trees';
 import { hashPassword } from '../../lib/passwords';
+import { seedDemoCases } from './demo-cases';
 
 export const demoPassword = 'heatpath-demo';
 
@@ -101,6 +102,13 @@ export const demoWorkshops: {
 
 /** Seed the demo when no workshop exists yet; returns whether it seeded. */
 export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
+  const seeded = await seedDemoWorkshops(sequelize);
+  // The finished cases go through the case services, each with its own transaction.
+  if (seeded) await seedDemoCases();
+  return seeded;
+}
+
+async function seedDemoWorkshops(sequelize: Sequelize): Promise<boolean> {
   return sequelize.transaction(async (transaction) => {
     await sequelize.query('SELECT pg_advisory_xact_lock(734052)', { transaction });
     if ((await Workshop.count({ transaction })) > 0) return false;
