@@ -156,6 +156,13 @@ const routes: RouteCase[] = [
     ok: [200],
   },
   {
+    name: 'tree of a training case',
+    method: 'get',
+    path: () => `/api/training/cases/${f.trainingCaseId}/tree`,
+    allowed: ['lead', 'apprentice'],
+    ok: [200],
+  },
+  {
     name: 'photo',
     method: 'get',
     path: () => f.photoUrl,
@@ -219,6 +226,7 @@ describe('training isolation', () => {
       );
       expect((await agent.get(`/api/training/attempts/${f.attemptId}`)).status).toBe(404);
       expect((await agent.get(f.photoUrl)).status).toBe(404);
+      expect((await agent.get(`/api/training/cases/${f.trainingCaseId}/tree`)).status).toBe(404);
       expect((await agent.get('/api/training/casebook')).body).toEqual({ courses: [], cases: [] });
     }
     expect(

@@ -181,6 +181,26 @@ export function trainingRouter(deps: { store: FileStore }) {
     },
   );
 
+  // Apprentices read the tree version a training case was walked on (and no other tree).
+  router.get(
+    '/cases/:trainingCaseId/tree',
+    learn,
+    validate('params', trainingCaseParamsSchema),
+    async (_req, res) => {
+      const training = await findTrainingCase({
+        actor: actorOf(res),
+        trainingCaseId: params(res).trainingCaseId,
+        forLearner: true,
+      });
+      const version = training.case.treeVersion;
+      res.json({
+        version: version.version,
+        status: version.status,
+        definition: version.definition,
+      });
+    },
+  );
+
   const sendPhoto: RequestHandler = async (_req, res) => {
     const actor = actorOf(res);
     const { trainingCaseId, attachmentId, which } = res.locals.params as {

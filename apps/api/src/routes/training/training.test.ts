@@ -142,6 +142,13 @@ describe('personal data and the apprentice', () => {
     expect((await apprentice.get(shroud.photos[0].url)).status).toBe(200);
     const hiddenUrl = shroud.photos[0].url.replace(shownPhotoId, hiddenPhotoId);
     expect((await apprentice.get(hiddenUrl)).status).toBe(404);
+    // The tree the case was walked on is readable too, for the apprentice to study.
+    const tree = await apprentice.get(`/api/training/cases/${trainingCaseId}/tree`);
+    expect(tree.status).toBe(200);
+    expect(tree.body).toMatchObject({
+      version: 1,
+      definition: { id: 'overheats-intermittent-no-codes' },
+    });
     // Cautions are shown at the steps that carry them.
     expect(replay.steps.some((s: { cautions: unknown[] }) => s.cautions.length > 0)).toBe(true);
   });
