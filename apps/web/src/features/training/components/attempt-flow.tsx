@@ -7,23 +7,15 @@ import type { AttemptStep, PredictionResult, TrainingAttempt } from '@heatpath/c
 import { useEffect, useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
 import { Alert } from '../../../components/ui/alert';
-import { Badge } from '../../../components/ui/badge';
 import { Button, ButtonLink } from '../../../components/ui/button';
 import { Disclosure } from '../../../components/ui/disclosure';
-import { PageHeader } from '../../../components/ui/page';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { useAttempt } from '../api/get-attempt';
 import { useStartAttempt } from '../api/start-attempt';
 import { useSubmitPrediction } from '../api/submit-prediction';
-import {
-  countText,
-  difficultyMark,
-  difficultyText,
-  scorePercent,
-  scoreText,
-  trainingVehicleName,
-} from '../training-format';
+import { countText, scorePercent, scoreText } from '../training-format';
 import { PredictionForm } from './prediction-form';
+import { TrainingCaseHeader } from './training-case-header';
 import { PredictionResultView } from './prediction-result';
 import { StepOutcome, TrainingStepView } from './training-step';
 import { TeachingNote, TrainingOutcomeView } from './training-outcome';
@@ -83,13 +75,13 @@ function ScorePanel({ attempt, onTryAgain }: { attempt: TrainingAttempt; onTryAg
   return (
     <section
       aria-labelledby="score-heading"
-      className="flex flex-col gap-4 rounded-panel border-2 border-primary bg-surface p-4 sm:flex-row sm:items-center sm:justify-between sm:p-6"
+      className="flex flex-col gap-4 rounded-panel border-2 border-primary bg-surface p-4 sm:p-6 lg:flex-row lg:items-center lg:justify-between"
     >
       <div className="flex flex-col gap-1">
         <h2 id="score-heading" className="text-xl font-bold">
           Your score
         </h2>
-        <p className="text-figure font-bold" data-testid="attempt-score">
+        <p className="text-figure font-bold whitespace-nowrap" data-testid="attempt-score">
           {scoreText(score)}
         </p>
         <p className="text-ink-muted">
@@ -155,26 +147,15 @@ export function AttemptFlow({ attemptId }: { attemptId: string }) {
 
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader
-        title={entry.symptom}
-        lead={
-          <p className="flex flex-wrap items-center gap-x-3 gap-y-1">
-            <span>{trainingVehicleName(entry.vehicle)}</span>
-            <Badge>
-              <span aria-hidden="true" className="mr-1.5">
-                {difficultyMark(entry.difficulty)}
-              </span>
-              {difficultyText(entry.difficulty)}
-            </Badge>
-            <span>
-              {finished
-                ? 'Finished'
-                : `Step ${data.current ? data.current.step.index + 1 : data.steps.length + 1} of ${entry.stepCount} · ${data.score} ${data.score === 1 ? 'point' : 'points'} so far`}
-            </span>
-          </p>
+      <TrainingCaseHeader
+        title="Predict, then see"
+        entry={entry}
+        status={
+          finished
+            ? 'Finished'
+            : `Step ${data.current ? data.current.step.index + 1 : data.steps.length + 1} of ${entry.stepCount} · ${data.score} ${data.score === 1 ? 'point' : 'points'} so far`
         }
       />
-      <p className="-mt-3 text-ink-muted">“{entry.complaint}”</p>
 
       {again.error ? (
         <Alert tone="danger" role="alert" title="New attempt not started">
@@ -188,10 +169,10 @@ export function AttemptFlow({ attemptId }: { attemptId: string }) {
           {lastPredicted ? (
             <PredictionResultView entry={lastPredicted} headingId="reveal-heading" />
           ) : null}
+          {data.teachingNote ? <TeachingNote note={data.teachingNote} /> : null}
           {data.outcome ? (
             <TrainingOutcomeView outcome={data.outcome} findings={data.findings} />
           ) : null}
-          {data.teachingNote ? <TeachingNote note={data.teachingNote} /> : null}
           <Disclosure
             title="Every step and your predictions"
             summary={countText(data.steps.length, 'step', 'steps')}

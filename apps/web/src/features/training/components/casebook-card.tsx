@@ -35,6 +35,7 @@ export function CasebookCard({ entry, position }: { entry: CasebookEntry; positi
         </span>
         <DifficultyBadge entry={entry} />
       </span>
+      <span>“{entry.complaint}”</span>
       <span className="text-ink-muted">{trainingVehicleName(entry.vehicle)}</span>
       <span className="text-sm text-ink-muted">
         {countText(entry.stepCount, 'step', 'steps')} · {entry.treeTitle}

@@ -41,7 +41,7 @@ function CourseSection({ course, cases }: { course: CasebookCourse; cases: Caseb
           {course.signOff.note}
         </p>
       ) : null}
-      <ol className="grid gap-3 md:grid-cols-2">
+      <ol className="grid grid-cols-[repeat(auto-fill,minmax(min(100%,20rem),1fr))] gap-3">
         {entries.map((entry, at) => (
           <li key={entry.id}>
             <CasebookCard entry={entry} position={at + 1} />
@@ -88,7 +88,7 @@ export function CasebookOverview() {
             <p>The lead has not chosen any finished case for training yet.</p>
           </Alert>
         ) : (
-          <ul className="grid gap-3 md:grid-cols-2 xl:grid-cols-3">
+          <ul className="grid grid-cols-[repeat(auto-fill,minmax(min(100%,20rem),1fr))] gap-3">
             {cases.map((entry) => (
               <li key={entry.id}>
                 <CasebookCard entry={entry} />

@@ -86,9 +86,7 @@ export function HidingChoices({
                     className={
                       'flex h-full cursor-pointer flex-col gap-2 rounded-control border-2 p-2 ' +
                       'has-focus-visible:outline-3 has-focus-visible:outline-focus ' +
-                      (hidden
-                        ? 'border-dashed border-line-strong bg-sunken'
-                        : 'border-line-strong bg-surface')
+                      (hidden ? 'border-line bg-sunken' : 'border-line-strong bg-surface')
                     }
                   >
                     {photo.thumbnailUrl ? (

@@ -17,7 +17,7 @@ import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { isApiError } from '../../../lib/api-client';
 import { useCandidates } from '../api/get-candidates';
 import { useMarkTrainingCase } from '../api/mark-training-case';
-import { difficultyMark, formatDate } from '../training-format';
+import { formatDate } from '../training-format';
 import { AlwaysHiddenNote, HidingChoices } from './hiding-choices';
 
 type Field = 'caseId' | 'teachingNote' | 'difficulty' | 'hiddenAttachmentIds';
@@ -25,7 +25,7 @@ type Errors = Partial<Record<Field, string>>;
 
 export const difficultyChoices = trainingDifficulties.map((value) => ({
   value,
-  label: `${difficultyMark(value)} ${trainingDifficultyLabels[value]}`,
+  label: trainingDifficultyLabels[value],
 }));
 
 function CandidateChoice({

@@ -49,7 +49,7 @@ export function PredictionForm({ ask, busy, error, onPredict }: PredictionFormPr
           </span>
           {ask.question}
         </legend>
-        <div className="grid gap-3 md:grid-cols-2">
+        <div className="grid gap-3 lg:grid-cols-2">
           {ask.options.map((option) => {
             const checked = option.id === chosen;
             return (
@@ -81,7 +81,7 @@ export function PredictionForm({ ask, busy, error, onPredict }: PredictionFormPr
                 >
                   {checked ? '✓' : ''}
                 </span>
-                <span>{option.label}</span>
+                <span className="min-w-0 [overflow-wrap:anywhere]">{option.label}</span>
               </label>
             );
           })}

@@ -30,8 +30,12 @@ function SignOffControl({ course, apprentice }: { course: CourseProgress; appren
     );
   if (!open)
     return (
-      <Button variant="secondary" onClick={() => setOpen(true)}>
-        Sign off as complete<span className="sr-only">: {course.title}</span>
+      <Button
+        variant="secondary"
+        onClick={() => setOpen(true)}
+        aria-label={`Sign off as complete: ${course.title}`}
+      >
+        Sign off as complete
       </Button>
     );
   const incomplete = course.completedCases < course.totalCases;

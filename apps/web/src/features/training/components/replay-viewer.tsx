@@ -3,11 +3,9 @@
 // address (?step=), so a reload or the back button keeps it.
 import { useEffect, useRef } from 'react';
 import { Button } from '../../../components/ui/button';
-import { PageHeader } from '../../../components/ui/page';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { useReplay } from '../api/get-replay';
-import { trainingVehicleName } from '../training-format';
-import { DifficultyBadge } from './casebook-card';
+import { TrainingCaseHeader } from './training-case-header';
 import { TrainingStepView } from './training-step';
 import { TeachingNote, TrainingOutcomeView } from './training-outcome';
 
@@ -51,16 +49,7 @@ export function ReplayViewer({ trainingCaseId, position, onMove }: ReplayViewerP
 
   return (
     <div className="flex flex-col gap-6">
-      <PageHeader
-        title={trainingCase.symptom}
-        lead={
-          <p className="flex flex-wrap items-center gap-x-3 gap-y-1">
-            <span>{trainingVehicleName(trainingCase.vehicle)}</span>
-            <DifficultyBadge entry={trainingCase} />
-            <span>Replay as it happened</span>
-          </p>
-        }
-      />
+      <TrainingCaseHeader title="Replay as it happened" entry={trainingCase} />
       <div ref={topRef} tabIndex={-1} className="flex flex-col gap-4 focus:outline-none">
         <p className="font-semibold" data-testid="replay-position">
           {step ? `Step ${at + 1} of ${last}` : `The finding, after ${last} steps`}
