@@ -1,9 +1,11 @@
-// Tree authoring in a real browser: the lead starts a draft of a shipped tree, adds a step and
-// sees its problems marked on the graph, fixes them, edits a question, tries the draft, and
-// publishes version 2 — while a case opened on version 1 stays on version 1.
+// Tree authoring in a real browser: the lead starts a draft of a shipped tree, adds a measurement
+// step with a formula branch, sees the branch that leads nowhere marked on the graph, fixes it by
+// connecting the branch and the step, tries the draft, and publishes version 2 — while a case
+// opened on version 1 stays on version 1.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launch, screenshot, signIn } from './browser';
 import type { BrowserSession } from './browser';
+import type { Page } from 'playwright-core';
 
 let session: BrowserSession;
 beforeAll(async () => {
@@ -15,6 +17,12 @@ afterAll(async () => {
 
 const treeTitle = 'Overheats now and then, no fault codes stored';
 const client = { 'X-Heatpath-Client': 'web' };
+
+/** A full-page screenshot from the top, so the sticky graph column is drawn where it starts. */
+async function shot(page: Page, name: string): Promise<void> {
+  await page.evaluate('window.scrollTo(0, 0)');
+  await screenshot(page, name);
+}
 
 describe('tree authoring', () => {
   it('the lead edits, checks, tries and publishes version 2; a version-1 case keeps version 1', async () => {
@@ -53,64 +61,133 @@ describe('tree authoring', () => {
     await graph.waitFor({ timeout: 30_000 });
     await page.getByText('The draft is complete').waitFor();
 
-    // A new measurement step leads nowhere and nothing leads to it: both are marked on the graph.
+    // A new measurement step: the heater hoses after a refill, with one reading and a branch on it.
+    const stepTitle = 'Heater hose drop after a refill';
     await page.getByLabel('Kind of step').selectOption('measurement');
     await page.getByRole('button', { name: /Add step/ }).click();
+    const form = page.getByRole('form', { name: /^Edit “/ });
+    await form.getByLabel('Title', { exact: true }).fill(stepTitle);
+    await form
+      .getByLabel('What to measure')
+      .fill(
+        'Engine at operating temperature, heater on full: read the heater inlet and outlet hoses with the IR thermometer and enter how much cooler the outlet is.',
+      );
+    await form.getByRole('button', { name: /Add reading/ }).click();
+    const reading = form.getByRole('group', { name: /^Reading 1/ });
+    await reading.getByLabel('Label', { exact: true }).fill('Drop across the heater hoses');
+    await reading.getByLabel('Name in formulas').fill('drop');
+    await reading.getByLabel('Quantity').selectOption('temperatureDelta');
+    await reading.getByLabel('Lowest allowed').fill('0');
+    await reading.getByLabel('Highest allowed').fill('80');
+    await form.getByLabel('Hot surfaces').check();
+    await form.getByRole('button', { name: /Add caution/ }).click();
+    await form
+      .getByLabel('Caution text')
+      .fill(
+        'The hoses are hot enough to burn at operating temperature: read them from a distance with the thermometer and follow the maker’s procedure.',
+      );
+
+    // A branch with a formula: checked as it is typed and worked out on a sample value.
+    await form.getByRole('button', { name: /Add branch/ }).click();
+    const branch = form.getByRole('group', { name: /^Branch 1/ });
+    await branch.getByLabel('Condition').fill('drop > 15');
+    await branch.getByText('Formula reads well').waitFor();
+    await branch.getByLabel('Sample drop').fill('20');
+    await branch.getByText('holds (true)').waitFor();
+    await branch.getByLabel('Label (optional)').fill('Large drop: air in the heater loop');
+
+    // The branch leads nowhere yet and nothing leads to the step: listed and marked on the graph.
     const problems = page.getByRole('list', { name: 'Problems' });
-    await problems.waitFor();
-    expect(await problems.getByRole('listitem').count()).toBeGreaterThan(0);
-    await graph
-      .getByText(/\d+ problems?/)
+    await problems.getByText('leads nowhere yet').first().waitFor();
+    await problems
+      .getByText(/cannot be reached from the start/)
       .first()
       .waitFor();
-    await screenshot(page, 'tree-editor-problems');
+    await branch.getByText('Choose the step this leads to.').waitFor();
+    const newNode = graph.getByRole('button', { name: stepTitle });
+    await newNode.waitFor();
+    await newNode.getByText(/^✕?\s*\d+ problems?$/).waitFor();
+    await shot(page, 'tree-editor-dangling-branch');
 
-    // Fixed by taking the unfinished step out again.
-    await page.getByRole('button', { name: 'Delete step' }).click();
-    await page.getByRole('button', { name: 'Yes, delete this step' }).click();
-    await page.getByText('The draft is complete').waitFor();
+    // Fixed by connecting: the branch leads to the bleed, "Otherwise" to the usual level check...
+    await branch.getByLabel('Leads to', { exact: true }).selectOption({
+      label: 'Refill and bleed the main loop',
+    });
+    await form.getByLabel('When no branch holds, go on to a step').check();
+    await form
+      .getByLabel('Otherwise leads to')
+      .selectOption({ label: 'Coolant level, engine cold' });
+    await problems.getByText('leads nowhere yet').waitFor({ state: 'detached' });
 
-    // Reword the leak check.
+    // ...and the refill answer of the first question now leads to the new step.
     // The step may sit outside the graph's visible area; select it as a click would.
     await graph
-      .getByRole('button', { name: /Look for leaks/ })
+      .getByRole('button', { name: 'When does it run hot?' })
       .first()
       .dispatchEvent('click');
     await page
-      .getByLabel('Question to ask')
-      .fill('Look under the car and around the engine bay for coolant, cold engine first.');
+      .getByRole('form', { name: 'Edit “When does it run hot?”' })
+      .getByRole('group', { name: /^Answer 3/ })
+      .getByLabel('Leads to')
+      .selectOption({ label: stepTitle });
+    await page.getByText('The draft is complete').waitFor();
+    expect(await newNode.textContent()).not.toMatch(/\d+ problems?/);
     await page
       .getByText(/^✓?\s*Saved$/)
       .first()
       .waitFor({ timeout: 20_000 });
+    await shot(page, 'tree-editor-connected');
 
-    // Try it: the preview starts at the first step and creates no case.
+    // Try it: the refill answer reaches the new step, and a large drop goes on to the bleed.
+    // The preview creates no case.
     await page.getByRole('button', { name: /Try it/ }).click();
-    await page
-      .getByRole('region', { name: 'Try it' })
-      .getByText('When does it run hot?')
-      .first()
-      .waitFor();
-    await screenshot(page, 'tree-editor-try-it');
+    const tryIt = page.getByRole('region', { name: 'Try it' });
+    await tryIt.getByText('When does it run hot?').first().waitFor();
+    await tryIt.getByRole('button', { name: /Only since the system was drained/ }).click();
+    await tryIt.getByRole('heading', { name: stepTitle }).waitFor();
+    await tryIt.getByRole('textbox', { name: 'Drop across the heater hoses' }).fill('20');
+    await tryIt.getByText(/Next: .*Refill and bleed the main loop/).waitFor();
+    await tryIt.getByRole('button', { name: 'Save reading' }).click();
+    await tryIt.getByRole('heading', { name: 'Refill and bleed the main loop' }).waitFor();
+    await shot(page, 'tree-editor-try-it');
 
     await page.getByRole('button', { name: 'Check and publish' }).click();
-    await page.getByLabel('Change note').fill('Clearer wording for the leak check.');
+    await page
+      .getByLabel('Change note')
+      .fill('Heater hose check after a refill, before the level check.');
     await page.getByRole('button', { name: 'Publish', exact: true }).click();
     await page.waitForURL(/\/trees\/[0-9a-f-]{36}$/, { timeout: 30_000 });
     await page
       .getByText(/v2|version 2/i)
       .first()
       .waitFor();
-    await screenshot(page, 'tree-published-v2');
+    await shot(page, 'tree-published-v2');
 
     const kase = (await (await page.request.get(`/api/cases/${caseId}`)).json()) as {
       tree: { version: number };
     };
     expect(kase.tree.version).toBe(1);
     const library = (await (await page.request.get(`/api/trees/${tree.id}`)).json()) as {
-      latestPublished: { version: number };
+      latestPublished: { id: string; version: number };
     };
     expect(library.latestPublished.version).toBe(2);
+    // Version 2 holds the new step, reached from the refill answer, with its formula branch.
+    const v2 = (await (
+      await page.request.get(`/api/trees/${tree.id}/versions/${library.latestPublished.id}`)
+    ).json()) as {
+      definition: {
+        nodes: Record<
+          string,
+          { title: string; choices?: { to: string }[]; branches?: { when: string; to: string }[] }
+        >;
+      };
+    };
+    const [newId, added] =
+      Object.entries(v2.definition.nodes).find(([, node]) => node.title === stepTitle) ?? [];
+    expect(added?.branches).toEqual([
+      expect.objectContaining({ when: 'drop > 15', to: 'main-loop-bleed' }),
+    ]);
+    expect(v2.definition.nodes['interview-pattern']?.choices?.[2]?.to).toBe(newId);
     await context.close();
   });
 });

@@ -41,7 +41,9 @@ export function checkGraph(
       problems.push(
         problem(
           'unknown-target',
-          `${nodeName(edge.from, nodes.get(edge.from))} leads to "${edge.to}" (${edge.label}), but there is no node with that id.`,
+          edge.to === ''
+            ? `${nodeName(edge.from, nodes.get(edge.from))} has a way on that leads nowhere yet (${edge.label}): choose the step it leads to.`
+            : `${nodeName(edge.from, nodes.get(edge.from))} leads to "${edge.to}" (${edge.label}), but there is no node with that id.`,
           { nodeId: edge.from, path: edge.path },
         ),
       );

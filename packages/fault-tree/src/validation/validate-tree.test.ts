@@ -151,6 +151,19 @@ describe('validateTree', () => {
     );
   });
 
+  it('says a branch without a target leads nowhere yet, with its path for the editor', () => {
+    const tree = edit((_, nodes) => {
+      at(branchesOf(nodes.temp), 1).to = '';
+    });
+    const found = validateTree(tree).find((p) => p.code === 'unknown-target');
+    expect(found).toMatchObject({
+      nodeId: 'temp',
+      path: ['nodes', 'temp', 'branches', 1, 'to'],
+      message:
+        '"Engine temperature" has a way on that leads nowhere yet (engineTemp >= 90): choose the step it leads to.',
+    });
+  });
+
   it('reports an unknown start, unreachable nodes, dead ends and a missing target', () => {
     expect(codes(edit((tree) => (tree.start = 'missing')))).toContainEqual({
       code: 'unknown-start',

@@ -118,6 +118,8 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
   const [samples, setSamples] = useState<Record<string, string>>({});
   const [newKind, setNewKind] = useState<NodeKind>('question');
   const [notice, setNotice] = useState<string | null>(null);
+  // The step the "connect it" notice is about: once a way on leads there, the notice has done its job.
+  const [noticeUntilLinked, setNoticeUntilLinked] = useState<string | null>(null);
   const [graphFocus, setGraphFocus] = useState<GraphFocus | null>(null);
   const [fieldFocus, setFieldFocus] = useState<{ path: string; seq: number } | null>(null);
   const [theirs, setTheirs] = useState<TreeVersionDetail | null>(null);
@@ -203,6 +205,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
   const connect = useCallback((from: string, to: string) => {
     const result = connectNodes(treeRef.current, from, to);
     setNotice(result.message);
+    setNoticeUntilLinked(null);
     if (result.changed) {
       setTree(result.tree);
       setSelection({ kind: 'node', id: from });
@@ -272,6 +275,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
     setNotice(
       `Added “${nodeTitle(next, id)}”. Connect it: drag from a step’s lower handle to it, or pick it as a “Leads to” step.`,
     );
+    setNoticeUntilLinked(id);
     setGraphFocus((before) => ({ id, seq: (before?.seq ?? 0) + 1 }));
     setFieldFocus((before) => ({ path: `nodes.${id}.title`, seq: (before?.seq ?? 0) + 1 }));
   };
@@ -424,10 +428,12 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
               </Button>
             </div>
           </div>
+          {/* On a wide screen the column fits the window: the graph gives way to the problem list
+              (up to a third of the height), so the problems to fix stay readable beside it. */}
           <section
             aria-label="Tree graph"
             aria-describedby="tree-graph-help"
-            className="h-[26rem] overflow-hidden rounded-panel border-2 border-line bg-canvas lg:h-[46dvh] lg:min-h-[20rem]"
+            className="h-[26rem] overflow-hidden rounded-panel border-2 border-line bg-canvas lg:h-auto lg:min-h-[16rem] lg:flex-[1_1_46dvh]"
           >
             <TreeGraph
               tree={deferred}
@@ -458,7 +464,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
               </ul>
             </details>
           </div>
-          {notice ? (
+          {notice && !(noticeUntilLinked && incoming.get(noticeUntilLinked)) ? (
             <p role="status" className="rounded-control bg-info-bg px-3 py-2 text-info-ink">
               {notice}
             </p>
@@ -467,7 +473,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
             tree={deferred}
             problems={problems}
             onShow={showProblem}
-            className="lg:min-h-0 lg:flex-1 lg:overflow-y-auto"
+            className="lg:max-h-[30dvh] lg:shrink-0 lg:overflow-y-auto"
           />
         </div>
 
@@ -497,6 +503,7 @@ export function DraftEditor({ treeId, draft, onPublish }: DraftEditorProps) {
                 update(deleteNode(tree, selection.id));
                 setSelection({ kind: 'tree' });
                 setNotice(`Deleted “${title}”. Any way on that led there is listed as a problem.`);
+                setNoticeUntilLinked(null);
               }}
             />
           ) : (

@@ -126,7 +126,7 @@ describe('the draft editor', () => {
 
       // The step is marked in the graph in words, not only by its outline.
       const graph = screen.getByRole('region', { name: 'Tree graph' });
-      const node = within(graph).getByRole('button', { name: 'When does it run hot?' });
+      const node = await within(graph).findByRole('button', { name: 'When does it run hot?' });
       expect(node.textContent).toContain('1 problem');
 
       // Select another step, then follow the problem back to the box it is about.
@@ -153,7 +153,7 @@ describe('the draft editor', () => {
     renderApp(`/trees/${treeId}/draft`);
     const user = userEvent.setup();
     const graph = await screen.findByRole('region', { name: 'Tree graph' });
-    fireEvent.click(within(graph).getByRole('button', { name: 'Coolant temperature' }));
+    fireEvent.click(await within(graph).findByRole('button', { name: 'Coolant temperature' }));
 
     const branch = await screen.findByRole('group', { name: 'Branch 1: Too hot' });
     const condition = within(branch).getByLabelText('Condition');
@@ -235,12 +235,12 @@ describe('the draft editor', () => {
       );
       const graph = screen.getByRole('region', { name: 'Tree graph' });
       expect(
-        within(graph).getByRole('button', { name: 'Cooling works as it should' }),
+        await within(graph).findByRole('button', { name: 'Cooling works as it should' }),
       ).toBeTruthy();
     },
   );
 
-  it('adds a step of the chosen kind, shown in the graph and listed as unreachable', async () => {
+  it('adds a step of the chosen kind, shown in the graph and listed as unreachable, until a way on leads there', async () => {
     mockApi({
       'GET /api/me': () => json(makeMe()),
       [`GET /api/trees/${treeId}/draft`]: () => json(draft(3)),
@@ -254,10 +254,28 @@ describe('the draft editor', () => {
     await user.click(screen.getByRole('button', { name: /Add step/ }));
     expect(await screen.findByRole('form', { name: 'Edit “New procedure”' })).toBeTruthy();
     const graph = screen.getByRole('region', { name: 'Tree graph' });
-    expect(within(graph).getByRole('button', { name: 'New procedure' })).toBeTruthy();
+    expect(await within(graph).findByRole('button', { name: 'New procedure' })).toBeTruthy();
     // The new step is not reached from the start yet: validation says so.
     const problems = screen.getByRole('list', { name: 'Problems' });
     await waitFor(() => expect(problems.textContent).toMatch(/New procedure/));
+    await user.type(screen.getByLabelText('Instruction'), 'Check the fan fuse.');
+    await waitFor(() =>
+      expect(screen.getByRole('list', { name: 'Problems' }).textContent).toContain(
+        '"New procedure" cannot be reached',
+      ),
+    );
+    expect(screen.getByText(/Added “New procedure”\. Connect it/)).toBeTruthy();
+
+    // Connected from an existing answer: it is reached, and the "connect it" notice has gone.
+    fireEvent.click(within(graph).getByRole('button', { name: 'When does it run hot?' }));
+    const answer = await screen.findByRole('group', { name: 'Answer 2: At speed' });
+    await user.selectOptions(within(answer).getByLabelText('Leads to'), 'new-procedure');
+    await waitFor(() =>
+      expect(screen.getByRole('list', { name: 'Problems' }).textContent).not.toContain(
+        '"New procedure" cannot be reached',
+      ),
+    );
+    expect(screen.queryByText(/Added “New procedure”\. Connect it/)).toBeNull();
   });
 });
 
