@@ -139,7 +139,7 @@ export interface TrainingStep {
   /** Filled once revealed: the choice, branch or result that led on, and where to. */
   routeLabel: string | null;
   next: { nodeId: string; kind: NodeKind; title: string } | null;
-  /** The tree's own explanation of the step, once revealed. */
+  /** The tree's own explanation of the step, once revealed (null when the tree gives none). */
   why: string | null;
 }
 
@@ -300,6 +300,7 @@ export interface TrainingCandidate {
   caseId: string;
   reference: string;
   symptom: string;
+  treeTitle: string;
   complaint: string;
   vehicle: string;
   outcomeTitle: string;

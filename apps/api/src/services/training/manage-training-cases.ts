@@ -115,6 +115,7 @@ export async function listCandidates(actor: Actor): Promise<TrainingCandidate[]>
     caseId: kase.id,
     reference: caseReference(kase.number),
     symptom: kase.symptom,
+    treeTitle: kase.treeVersion ? compiledTreeOf(kase.treeVersion).definition.title : '',
     complaint: kase.complaint,
     vehicle: [kase.vehicle?.make, kase.vehicle?.model, kase.vehicle?.year]
       .filter(Boolean)

@@ -135,10 +135,7 @@ export async function trainingStoryOf(training: LoadedTrainingCase): Promise<Tra
         .map((n) => redact(String((n.payload as { text?: unknown }).text ?? ''))),
       routeLabel: entry.routeLabel,
       next: next ? { nodeId: entry.to, kind: next.kind, title: next.title } : null,
-      why:
-        node && node.kind !== 'outcome' && node.notes
-          ? node.notes
-          : `“${entry.routeLabel}” leads on to “${next?.title ?? entry.to}”.`,
+      why: node && node.kind !== 'outcome' && node.notes ? node.notes : null,
     };
   });
 

@@ -51,12 +51,12 @@ function CandidateChoice({
         value={candidate.caseId}
         checked={checked}
         onChange={onChoose}
-        aria-label={`${candidate.reference}: ${candidate.symptom}`}
+        aria-label={`${candidate.reference}: ${candidate.treeTitle}`}
         className="mt-1 size-6 shrink-0 accent-primary"
       />
       <span className="flex min-w-0 flex-col gap-0.5">
         <span className="font-bold">
-          {candidate.reference} · {candidate.symptom}
+          {candidate.reference} · {candidate.treeTitle}
         </span>
         <span>
           Finding: <span className="font-semibold">{candidate.outcomeTitle}</span>

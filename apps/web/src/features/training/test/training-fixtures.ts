@@ -180,7 +180,8 @@ export const attemptFinished: TrainingAttempt = {
 export const candidate: TrainingCandidate = {
   caseId: '00000000-0000-4000-8000-0000000000c1',
   reference: 'C-00012',
-  symptom: 'Overheats now and then, no fault codes stored',
+  symptom: 'The temperature gauge climbs now and then.',
+  treeTitle: 'Overheats now and then, no fault codes stored',
   complaint: 'Gauge climbs on long climbs.',
   vehicle: 'Corvane Tessel, 2017',
   outcomeTitle: 'Pump shroud stuck',
