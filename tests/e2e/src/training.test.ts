@@ -4,7 +4,6 @@
 // in a course for every apprentice; the apprentice opens the Casebook, predicts through every
 // step to the score; the lead sees the reviewed case and the score under Progress and signs the
 // course off. Screenshots at each stage, on a 1280×800 screen and an 800×1280 tablet.
-import { deflateSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { stuckShroudPath } from '../../../apps/api/src/test/walks';
@@ -57,43 +56,16 @@ async function apiAs(email: string) {
   };
 }
 
-// A small invented photo (a grey frame with a coloured band), written as a PNG by hand so the
-// test needs no image library.
-function crc32(bytes: Buffer): number {
-  let crc = 0xffffffff;
-  for (const byte of bytes) {
-    crc ^= byte;
-    for (let k = 0; k < 8; k += 1) crc = crc & 1 ? (crc >>> 1) ^ 0xedb88320 : crc >>> 1;
-  }
-  return (crc ^ 0xffffffff) >>> 0;
-}
-function testPng(band: [number, number, number], width = 320, height = 240): Buffer {
-  const chunk = (type: string, data: Buffer) => {
-    const body = Buffer.concat([Buffer.from(type, 'ascii'), data]);
-    const out = Buffer.alloc(body.length + 8);
-    out.writeUInt32BE(data.length, 0);
-    body.copy(out, 4);
-    out.writeUInt32BE(crc32(body), body.length + 4);
-    return out;
-  };
-  const header = Buffer.alloc(13);
-  header.writeUInt32BE(width, 0);
-  header.writeUInt32BE(height, 4);
-  header.set([8, 2, 0, 0, 0], 8);
-  const rows = Buffer.alloc((width * 3 + 1) * height);
-  for (let y = 0; y < height; y += 1) {
-    const inBand = y > height * 0.4 && y < height * 0.6;
-    for (let x = 0; x < width; x += 1) {
-      const at = y * (width * 3 + 1) + 1 + x * 3;
-      rows.set(inBand ? band : [120, 124, 128], at);
-    }
-  }
-  return Buffer.concat([
-    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
-    chunk('IHDR', header),
-    chunk('IDAT', deflateSync(rows)),
-    chunk('IEND', Buffer.alloc(0)),
-  ]);
+/** A small invented photo (a grey frame with a coloured band), drawn and captured by chromium. */
+async function testPng(band: readonly [number, number, number]): Promise<Buffer> {
+  const { page, context } = await session.newPage({ width: 320, height: 240 });
+  await page.setContent(
+    `<body style="margin:0;height:240px;display:flex;align-items:center;background:rgb(120,124,128)">` +
+      `<div style="width:100%;height:48px;background:rgb(${band.join(',')})"></div></body>`,
+  );
+  const png = await page.screenshot();
+  await context.close();
+  return png;
 }
 
 /** The technician's case for HL17 KVR, walked to the stuck-shroud finding and diagnosed. */
@@ -126,7 +98,7 @@ async function finishedCase(): Promise<{ caseId: string; reference: string }> {
   ] as const) {
     const form = new FormData();
     form.set('nodeId', 'shroud-inspection');
-    form.set('file', new Blob([new Uint8Array(testPng([...band]))], { type: 'image/png' }), name);
+    form.set('file', new Blob([new Uint8Array(await testPng(band))], { type: 'image/png' }), name);
     await tech('POST', `/api/cases/${kase.id}/attachments`, form);
   }
   await tech('POST', `/api/cases/${kase.id}/notes`, {
