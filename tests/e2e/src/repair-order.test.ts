@@ -7,7 +7,8 @@ import { join } from 'node:path';
 import { deflateSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { stuckShroudPath } from '../../../apps/api/src/test/walks';
-import { baseUrl, demoPassword, launch, screenshot, signIn } from './browser';
+import { launch, screenshot, signIn } from './browser';
+import { apiAs } from './api-client';
 import type { BrowserSession } from './browser';
 
 let session: BrowserSession;
@@ -17,37 +18,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await session?.close();
 });
-
-/** A tiny client for the API with one person's session cookie, as the web app sends it. */
-async function apiAs(email: string) {
-  const signIn = await fetch(`${baseUrl}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json', 'X-Heatpath-Client': 'web' },
-    body: JSON.stringify({ email, password: demoPassword }),
-  });
-  if (!signIn.ok) throw new Error(`sign-in for ${email}: ${signIn.status}`);
-  const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0] ?? '';
-  return async <T = Record<string, unknown>>(
-    method: string,
-    path: string,
-    body?: unknown,
-  ): Promise<T> => {
-    const res = await fetch(`${baseUrl}${path}`, {
-      method,
-      headers: {
-        Cookie: cookie,
-        'X-Heatpath-Client': 'web',
-        ...(body instanceof FormData || body === undefined
-          ? {}
-          : { 'Content-Type': 'application/json' }),
-      },
-      body: body instanceof FormData ? body : body === undefined ? undefined : JSON.stringify(body),
-    });
-    const text = await res.text();
-    if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${text}`);
-    return JSON.parse(text) as T;
-  };
-}
 
 // A small invented photo (a grey frame with a teal band), written as a PNG by hand so the test
 // needs no image library.

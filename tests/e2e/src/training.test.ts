@@ -7,7 +7,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { stuckShroudPath } from '../../../apps/api/src/test/walks';
-import { baseUrl, demoPassword, launch, screenshot, signIn } from './browser';
+import { launch, screenshot, signIn } from './browser';
+import { apiAs } from './api-client';
 import type { BrowserSession } from './browser';
 
 let session: BrowserSession;
@@ -24,37 +25,6 @@ const stamp = Date.now().toString(36).slice(-5).toUpperCase();
 const courseTitle = `First month on the cooling system ${stamp}`;
 const teachingNote =
   'A hot radiator inlet with a cold outlet means the coolant is not moving: look at the pump before the thermostat.';
-
-/** A tiny client for the API with one person's session cookie, as the web app sends it. */
-async function apiAs(email: string) {
-  const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json', 'X-Heatpath-Client': 'web' },
-    body: JSON.stringify({ email, password: demoPassword }),
-  });
-  if (!res.ok) throw new Error(`sign-in for ${email}: ${res.status}`);
-  const cookie = (res.headers.get('set-cookie') ?? '').split(';')[0] ?? '';
-  return async <T = Record<string, unknown>>(
-    method: string,
-    path: string,
-    body?: unknown,
-  ): Promise<T> => {
-    const answer = await fetch(`${baseUrl}${path}`, {
-      method,
-      headers: {
-        Cookie: cookie,
-        'X-Heatpath-Client': 'web',
-        ...(body instanceof FormData || body === undefined
-          ? {}
-          : { 'Content-Type': 'application/json' }),
-      },
-      body: body instanceof FormData ? body : body === undefined ? undefined : JSON.stringify(body),
-    });
-    const text = await answer.text();
-    if (!answer.ok) throw new Error(`${method} ${path}: ${answer.status} ${text}`);
-    return JSON.parse(text) as T;
-  };
-}
 
 /** A small invented photo (a grey frame with a coloured band), drawn and captured by chromium. */
 async function testPng(band: readonly [number, number, number]): Promise<Buffer> {
