@@ -22,6 +22,7 @@ export class AppError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string>,
+    readonly reason?: string,
   ) {
     super(message);
     this.name = 'AppError';

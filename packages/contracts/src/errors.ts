@@ -21,6 +21,8 @@ export const errorBodySchema = z.object({
     code: z.enum(errorCodes),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    /** Set where one code covers several situations a screen tells apart (e.g. why a publish was refused). */
+    reason: z.string().optional(),
   }),
 });
 export type ErrorBody = z.infer<typeof errorBodySchema>;

@@ -52,6 +52,7 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
         code: known.code,
         message: known.message,
         ...(known.fields ? { fields: known.fields } : {}),
+        ...(known.reason ? { reason: known.reason } : {}),
       },
     });
     return;

@@ -143,6 +143,12 @@ describe('tree library and drafts', () => {
       .send({ revision: 2, changeNote: 'Broken on purpose' });
     expect(publish.status).toBe(409);
     expect(publish.body.error.message).toMatch(/problem\(s\) to fix/);
+    expect(publish.body.error.reason).toBe('draft_has_problems');
+    const stale = await lead
+      .post(`/api/trees/${treeId}/draft/publish`)
+      .send({ revision: 1, changeNote: 'Reviewed an older revision' });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.reason).toBe('stale_revision');
   });
 
   it('publishes version 2, records who and why, freezes it, diffs it and retires version 1', async () => {
@@ -236,6 +242,7 @@ describe('tree library and drafts', () => {
       .send({ revision: 3, changeNote: 'Shroud path rethought' });
     expect(refused.status).toBe(409);
     expect(refused.body.error.message).toContain(kase.reference);
+    expect(refused.body.error.reason).toBe('regression_outcomes_changed');
     const confirmed = await lead
       .post(`/api/trees/${treeId}/draft/publish`)
       .send({ revision: 3, changeNote: 'Shroud path rethought', confirmChangedOutcomes: true });

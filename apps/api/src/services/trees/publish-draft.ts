@@ -3,13 +3,20 @@
 // recorded with the version. The published version is then frozen by the database.
 import type { PublishDraftRequest } from '@heatpath/contracts';
 import { compileTree } from '@heatpath/fault-tree';
-import { AppError, conflict } from '../../errors';
+import { AppError } from '../../errors';
 import { TreeVersion } from '../../db/models/index';
 import type { PublishConfirmation } from '../../db/models/tree-version';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findDraft, findTree } from './find-tree';
 import { replayRegression } from './replay-regression';
+
+/** Why a publish came back 409, as `error.reason`. */
+export const publishRefusals = {
+  staleRevision: 'stale_revision',
+  draftHasProblems: 'draft_has_problems',
+  outcomesChanged: 'regression_outcomes_changed',
+} as const;
 
 export async function publishDraft(options: {
   actor: Actor;
@@ -24,8 +31,11 @@ export async function publishDraft(options: {
     await findTree({ actor, treeId, transaction, lock: true });
     const draft = await findDraft({ actor, treeId, transaction, lock: true });
     if (draft.revision !== input.revision) {
-      throw conflict(
+      throw new AppError(
+        'conflict',
         `The draft changed after you reviewed it (now revision ${draft.revision}); review it again before publishing.`,
+        undefined,
+        publishRefusals.staleRevision,
       );
     }
     const compiled = compileTree(draft.definition);
@@ -38,6 +48,7 @@ export async function publishDraft(options: {
             .slice(0, 50)
             .map((p, i) => [p.nodeId ? `${p.nodeId}.${i}` : `tree.${i}`, p.message]),
         ),
+        publishRefusals.draftHasProblems,
       );
     }
     const report = await replayRegression({
@@ -56,6 +67,7 @@ export async function publishDraft(options: {
           'conflict',
           `${changed.length} case(s) in the regression set would no longer reach the outcome they reached (${changed.map((c) => c.reference).join(', ')}). Confirm to publish anyway.`,
           Object.fromEntries(changed.map((c) => [c.reference, c.verdict])),
+          publishRefusals.outcomesChanged,
         );
       }
       confirmation = {
