@@ -97,7 +97,7 @@ export interface RegressionResult {
   verdict: RegressionVerdict;
   newOutcome: string | null;
   newOutcomeTitle: string | null;
-  /** Where and why the recorded answers stop fitting the draft. */
+  /** Where and why the replay stops: the answer that no longer fits, or (no-outcome) the step the case never answered. */
   divergence: { step: number; nodeId: string; nodeTitle: string | null; reason: string } | null;
 }
 

@@ -222,6 +222,12 @@ describe('tree library and drafts', () => {
       inRegressionSet: true,
       expectedOutcome: stuckShroudOutcome,
       fromVersion: 1,
+      // Where it stopped: the step after the last recorded answer, the new impeller check.
+      divergence: {
+        step: stuckShroudPath.length + 1,
+        nodeId: 'impeller-inspection',
+        reason: expect.stringMatching(/never answered/),
+      },
     });
     expect(
       report.body.results.find((r: { caseId: string }) => r.caseId === other.id).inRegressionSet,

@@ -78,7 +78,16 @@ export async function replayRegression(options: {
             nodeTitle: titleIn(draft.definition, replay.divergence.nodeId),
             reason: replay.divergence.reason,
           }
-        : null,
+        : !reachedOutcome
+          ? {
+              // Every recorded answer still fits, but the draft asks more than the case answered.
+              step: events.length + 1,
+              nodeId: reached,
+              nodeTitle: titleIn(draft.definition, reached),
+              reason:
+                'Every recorded answer still fits, but the draft asks this step next, which the case never answered, so no finding is reached.',
+            }
+          : null,
     });
   }
   const summary: Record<RegressionVerdict, number> = {
