@@ -1,7 +1,7 @@
 // Builds the one TanStack Query client. Its caches are where "401 anywhere → sign in again" is
 // decided, so no screen has to remember it; the reaction itself (clearing data, navigating) is
 // passed in by the app layer, which owns the router.
-import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
+import { MutationCache, notifyManager, QueryCache, QueryClient } from '@tanstack/react-query';
 import { isApiError, isUnauthenticated } from './api-client';
 
 interface HeatpathMeta extends Record<string, unknown> {
@@ -15,6 +15,11 @@ declare module '@tanstack/react-query' {
     mutationMeta: HeatpathMeta;
   }
 }
+
+// Cache changes reach the screens in the same task as the tap that caused them (a microtask,
+// still batched), not on a later timer: a controlled choice such as °C/°F shows the new value
+// at once instead of flicking back until the timer fires.
+notifyManager.setScheduler(queueMicrotask);
 
 export interface QueryClientOptions {
   onUnauthenticated?: () => void;

@@ -2,7 +2,7 @@
 // for their next visit on any device.
 import type { UnitPreferences } from '@heatpath/contracts';
 import { useMe } from '../../../lib/auth';
-import { useUpdateUnitPreferences } from '../api/update-unit-preferences';
+import { useUpdateUnitPreferences } from '../../../lib/unit-preferences';
 import { displayUnits, type DisplayUnits } from '../units';
 
 export interface UnitsState {

@@ -3,11 +3,11 @@
 import { Alert } from '../../../components/ui/alert';
 import { SegmentedChoice } from '../../../components/ui/segmented-choice';
 import { useMe } from '../../../lib/auth';
-import { useUpdateTemperatureUnit } from '../api/update-temperature-unit';
+import { useUpdateUnitPreferences } from '../../../lib/unit-preferences';
 
 export function TemperatureUnitChoice() {
   const me = useMe();
-  const update = useUpdateTemperatureUnit();
+  const update = useUpdateUnitPreferences();
   return (
     <div className="flex flex-col gap-2">
       <SegmentedChoice
@@ -17,7 +17,7 @@ export function TemperatureUnitChoice() {
           { value: 'F', label: '°F' },
         ]}
         value={me.preferences.units.temperature}
-        onChange={(value) => update.mutate(value)}
+        onChange={(temperature) => update.mutate({ units: { temperature } })}
       />
       {update.error ? (
         <Alert tone="danger" role="alert" title="Unit choice not saved">
