@@ -6,9 +6,8 @@
 // course off. Screenshots at each stage, on a 1280×800 screen and an 800×1280 tablet.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { stuckShroudPath } from '../../../apps/api/src/test/walks';
 import { launch, screenshot, signIn } from './browser';
-import { apiAs } from './api-client';
+import { diagnosedCase } from './diagnosed-case';
 import type { BrowserSession } from './browser';
 
 let session: BrowserSession;
@@ -26,67 +25,22 @@ const courseTitle = `First month on the cooling system ${stamp}`;
 const teachingNote =
   'A hot radiator inlet with a cold outlet means the coolant is not moving: look at the pump before the thermostat.';
 
-/** A small invented photo (a grey frame with a coloured band), drawn and captured by chromium. */
-async function testPng(band: readonly [number, number, number]): Promise<Buffer> {
-  const { page, context } = await session.newPage({ width: 320, height: 240 });
-  await page.setContent(
-    `<body style="margin:0;height:240px;display:flex;align-items:center;background:rgb(120,124,128)">` +
-      `<div style="width:100%;height:48px;background:rgb(${band.join(',')})"></div></body>`,
-  );
-  const png = await page.screenshot();
-  await context.close();
-  return png;
-}
-
-/** The technician's case for HL17 KVR, walked to the stuck-shroud finding and diagnosed. */
-async function finishedCase(): Promise<{ caseId: string; reference: string }> {
-  const tech = await apiAs('tech@harbourlane.test');
-  const { vehicles } = await tech<{ vehicles: { id: string }[] }>('GET', '/api/vehicles?q=HL17');
-  const { trees } = await tech<{ trees: { id: string; key: string }[] }>(
-    'GET',
-    '/api/trees/available',
-  );
-  const tree = trees.find((t) => t.key === 'overheats-intermittent-no-codes');
-  if (!vehicles[0] || !tree) throw new Error('the demo seed has no HL17 KVR or overheating tree');
-  const kase = await tech<{ id: string; reference: string }>('POST', '/api/cases', {
-    vehicleId: vehicles[0].id,
-    complaint: 'Gauge climbs on long climbs with a trailer; no warning light, no stored codes.',
-    mileageAtIntake: 121900,
-    treeId: tree.id,
-  });
-  let position = 0;
-  for (const step of stuckShroudPath) {
-    const res = await tech<{ walk: { position: number } }>('POST', `/api/cases/${kase.id}/walk`, {
-      idempotencyKey: crypto.randomUUID(),
-      event: { ...step.answer, nodeId: step.nodeId, position },
-    });
-    position = res.walk.position;
-  }
-  for (const [name, band] of [
-    ['shroud-stuck-out.png', [11, 90, 81]],
-    ['engine-bay-wide.png', [160, 96, 20]],
-  ] as const) {
-    const form = new FormData();
-    form.set('nodeId', 'shroud-inspection');
-    form.set('file', new Blob([new Uint8Array(await testPng(band))], { type: 'image/png' }), name);
-    await tech('POST', `/api/cases/${kase.id}/attachments`, form);
-  }
-  await tech('POST', `/api/cases/${kase.id}/notes`, {
-    text: 'Shroud stays out with the engine hot; pump body dry.',
-    nodeId: 'shroud-inspection',
-    idempotencyKey: crypto.randomUUID(),
-  });
-  await tech('POST', `/api/cases/${kase.id}/diagnosed`);
-  return { caseId: kase.id, reference: kase.reference };
-}
-
 async function nav(page: Page, name: string) {
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name }).click();
 }
 
 describe('training casebook', () => {
   it('the lead marks a case and builds a course; the apprentice predicts through it; the lead signs off', async () => {
-    const { reference } = await finishedCase();
+    const { reference } = await diagnosedCase({
+      session,
+      complaint: 'Gauge climbs on long climbs with a trailer; no warning light, no stored codes.',
+      mileageAtIntake: 121900,
+      photos: [
+        { name: 'shroud-stuck-out.png', band: [11, 90, 81] },
+        { name: 'engine-bay-wide.png', band: [160, 96, 20] },
+      ],
+      notes: ['Shroud stays out with the engine hot; pump body dry.'],
+    });
 
     // ---- The lead marks the case for training ----
     const lead = await session.newPage(desktop);

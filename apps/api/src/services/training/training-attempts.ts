@@ -3,7 +3,7 @@
 // gets the same answer, a different one for a step already answered is refused.
 import { UniqueConstraintError } from 'sequelize';
 import type { Transaction } from 'sequelize';
-import { scorePrediction } from '@heatpath/fault-tree';
+import { maxScoreOf, scorePrediction } from '@heatpath/fault-tree';
 import type {
   AttemptStep,
   CasebookEntry,
@@ -18,10 +18,6 @@ import { findTrainingCase } from './find-training-case';
 import { concealed, trainingStoryOf } from './training-story';
 import type { TrainingStory } from './training-story';
 import { learnerEntry } from './casebook';
-
-function maxScoreOfStory(story: TrainingStory): number {
-  return story.plans.reduce((sum, plan) => sum + (plan?.maxPoints ?? 0), 0);
-}
 
 /** The first step still waiting for a prediction, or null when every asked step is answered. */
 function currentIndex(story: TrainingStory, predicted: ReadonlySet<number>): number | null {
@@ -123,7 +119,7 @@ export async function startAttempt(options: { actor: Actor; trainingCaseId: stri
   assertCan(actor, 'training.learn');
   const training = await findTrainingCase({ actor, trainingCaseId, forLearner: true });
   const story = await trainingStoryOf(training);
-  const maxScore = maxScoreOfStory(story);
+  const maxScore = maxScoreOf(story.plans);
   const nothingToAsk = currentIndex(story, new Set()) === null;
   const attempt = await TrainingAttempt.create({
     workshopId: actor.workshopId,

@@ -31,7 +31,8 @@ function photoOf(trainingCaseId: string, a: Attachment): TrainingPhoto {
   const base = `/api/training/cases/${trainingCaseId}/photos/${a.id}`;
   return {
     id: a.id,
-    name: a.kind === 'photo' ? `Photo ${a.createdAt.toISOString().slice(0, 10)}` : 'Photo',
+    // The original file name may carry a plate; the date taken says enough.
+    name: `Photo ${a.createdAt.toISOString().slice(0, 10)}`,
     nodeId: a.nodeId,
     url: `${base}/file`,
     thumbnailUrl: a.thumbnailKey ? `${base}/thumbnail` : null,
