@@ -6,10 +6,9 @@ import { useState } from 'react';
 import { useForm, type Path } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { SelectField, TextField } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { useInviteStaffMember } from '../api/invite-staff-member';
-import { roleOptions } from './role-options';
+import { PersonFields } from './person-fields';
 
 const formFields = ['name', 'email', 'role'] as const;
 type FormField = (typeof formFields)[number] & Path<InviteStaffRequest>;
@@ -70,27 +69,17 @@ export function InviteStaffForm() {
         </Alert>
       ) : null}
       <div className="grid gap-5 lg:grid-cols-3">
-        <TextField
-          label="Name"
-          autoComplete="off"
-          error={errors.name?.message}
-          {...form.register('name')}
-        />
-        <TextField
-          label="E-mail address"
-          type="email"
-          inputMode="email"
-          autoCapitalize="none"
-          autoComplete="off"
-          spellCheck={false}
-          error={errors.email?.message}
-          {...form.register('email')}
-        />
-        <SelectField
-          label="Role"
-          options={roleOptions}
-          error={errors.role?.message}
-          {...form.register('role')}
+        <PersonFields
+          register={{
+            name: form.register('name'),
+            email: form.register('email'),
+            role: form.register('role'),
+          }}
+          errors={{
+            name: errors.name?.message,
+            email: errors.email?.message,
+            role: errors.role?.message,
+          }}
         />
       </div>
       <div>
