@@ -3,24 +3,19 @@
 // opened, so two people never overwrite each other unknowingly. "Mark diagnosed" closes the walk.
 import { updateFindingsRequestSchema, type Findings } from '@heatpath/contracts';
 import { useState } from 'react';
-import { useFieldArray, useForm, type Path } from 'react-hook-form';
+import { useForm, type Path } from 'react-hook-form';
+import {
+  FindingsLinesFields,
+  type FindingsFormValues,
+} from '../../../components/findings-lines-fields';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { TextAreaField, TextField } from '../../../components/ui/field';
+import { TextAreaField } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { useMarkDiagnosed } from '../api/mark-diagnosed';
 import { useSaveFindings } from '../api/save-findings';
 import { formatDateTime } from '../case-format';
 import { readNumber } from '../units';
-
-interface FindingsFormValues {
-  concern: string;
-  cause: string;
-  correction: string;
-  parts: { description: string; quantity: string; partNumber: string }[];
-  labour: { operation: string; hours: string }[];
-  followUps: { text: string }[];
-}
 
 function toValues(findings: Findings): FindingsFormValues {
   return {
@@ -58,9 +53,6 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
   const [saved, setSaved] = useState<string | null>(null);
   const form = useForm<FindingsFormValues>({ defaultValues: toValues(findings) });
   const { errors, isDirty } = form.formState;
-  const parts = useFieldArray({ control: form.control, name: 'parts' });
-  const labour = useFieldArray({ control: form.control, name: 'labour' });
-  const followUps = useFieldArray({ control: form.control, name: 'followUps' });
   const newerOnServer = findings.revision !== base;
   const conflict = isApiError(save.error) && save.error.status === 409;
 
@@ -119,7 +111,7 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
       onSubmit={submit}
       noValidate
       aria-labelledby="findings-heading"
-      className="flex flex-col gap-5 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
+      className="@container flex flex-col gap-5 rounded-panel border-2 border-line bg-surface p-4 sm:p-6"
     >
       <div className="flex flex-wrap items-baseline justify-between gap-3">
         <h2 id="findings-heading" className="text-xl font-bold">
@@ -172,111 +164,7 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
         {...form.register('correction')}
       />
 
-      <fieldset className="flex flex-col gap-3">
-        <legend className="mb-2 text-lg font-bold">Parts</legend>
-        {parts.fields.length === 0 ? <p className="text-ink-muted">No parts.</p> : null}
-        {parts.fields.map((field, index) => (
-          <div
-            key={field.id}
-            className="grid gap-3 rounded-control border-2 border-line p-3 md:grid-cols-[minmax(0,1fr)_7rem_10rem_auto] md:items-end"
-          >
-            <TextField
-              label={`Part ${index + 1}`}
-              error={errors.parts?.[index]?.description?.message}
-              {...form.register(`parts.${index}.description`)}
-            />
-            <TextField
-              label={
-                <>
-                  Quantity<span className="sr-only"> of part {index + 1}</span>
-                </>
-              }
-              inputMode="decimal"
-              error={errors.parts?.[index]?.quantity?.message}
-              {...form.register(`parts.${index}.quantity`)}
-            />
-            <TextField
-              label={
-                <>
-                  Part number<span className="sr-only"> of part {index + 1}</span>
-                </>
-              }
-              error={errors.parts?.[index]?.partNumber?.message}
-              {...form.register(`parts.${index}.partNumber`)}
-            />
-            <Button variant="danger" onClick={() => parts.remove(index)}>
-              Remove part {index + 1}
-            </Button>
-          </div>
-        ))}
-        <div>
-          <Button
-            variant="secondary"
-            onClick={() => parts.append({ description: '', quantity: '1', partNumber: '' })}
-          >
-            Add part
-          </Button>
-        </div>
-      </fieldset>
-
-      <fieldset className="flex flex-col gap-3">
-        <legend className="mb-2 text-lg font-bold">Labour</legend>
-        {labour.fields.length === 0 ? <p className="text-ink-muted">No labour lines.</p> : null}
-        {labour.fields.map((field, index) => (
-          <div
-            key={field.id}
-            className="grid gap-3 rounded-control border-2 border-line p-3 md:grid-cols-[minmax(0,1fr)_8rem_auto] md:items-end"
-          >
-            <TextField
-              label={`Operation ${index + 1}`}
-              error={errors.labour?.[index]?.operation?.message}
-              {...form.register(`labour.${index}.operation`)}
-            />
-            <TextField
-              label={
-                <>
-                  Hours<span className="sr-only"> for operation {index + 1}</span>
-                </>
-              }
-              inputMode="decimal"
-              error={errors.labour?.[index]?.hours?.message}
-              {...form.register(`labour.${index}.hours`)}
-            />
-            <Button variant="danger" onClick={() => labour.remove(index)}>
-              Remove operation {index + 1}
-            </Button>
-          </div>
-        ))}
-        <div>
-          <Button variant="secondary" onClick={() => labour.append({ operation: '', hours: '' })}>
-            Add labour line
-          </Button>
-        </div>
-      </fieldset>
-
-      <fieldset className="flex flex-col gap-3">
-        <legend className="mb-2 text-lg font-bold">Follow-ups</legend>
-        {followUps.fields.length === 0 ? <p className="text-ink-muted">No follow-ups.</p> : null}
-        {followUps.fields.map((field, index) => (
-          <div key={field.id} className="grid gap-3 md:grid-cols-[minmax(0,1fr)_auto] md:items-end">
-            <TextAreaField
-              label={`Follow-up ${index + 1}`}
-              rows={2}
-              className="field-sizing-content min-h-24"
-              error={errors.followUps?.[index]?.text?.message}
-              {...form.register(`followUps.${index}.text`)}
-            />
-            <Button variant="danger" onClick={() => followUps.remove(index)}>
-              Remove follow-up {index + 1}
-            </Button>
-          </div>
-        ))}
-        <div>
-          <Button variant="secondary" onClick={() => followUps.append({ text: '' })}>
-            Add follow-up
-          </Button>
-        </div>
-      </fieldset>
+      <FindingsLinesFields form={form} />
 
       {saved && !isDirty ? (
         <p role="status" className="flex items-center gap-2 font-semibold text-ok-ink">

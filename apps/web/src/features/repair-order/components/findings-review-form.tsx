@@ -8,26 +8,20 @@ import {
   type RepairOrderPhoto,
 } from '@heatpath/contracts';
 import { useEffect } from 'react';
-import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
+import { useForm, useWatch, type Path } from 'react-hook-form';
+import {
+  FindingsLinesFields,
+  type FindingsFormValues,
+} from '../../../components/findings-lines-fields';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { TextAreaField, TextField } from '../../../components/ui/field';
+import { TextAreaField } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { useSaveFindingsRevision } from '../api/save-findings-revision';
 import { readNumber } from '../format';
 import { PhotoPicker } from './photo-picker';
 
-interface FormValues {
-  concern: string;
-  cause: string;
-  correction: string;
-  parts: { description: string; quantity: string; partNumber: string }[];
-  labour: { operation: string; hours: string }[];
-  followUps: { text: string }[];
-  photoIds: string[];
-}
-
-function toValues(f: FindingsRevision): FormValues {
+function toValues(f: FindingsRevision): FindingsFormValues {
   return {
     concern: f.concern,
     cause: f.cause,
@@ -59,12 +53,9 @@ export function FindingsReviewForm({
   onReload,
 }: FindingsReviewFormProps) {
   const save = useSaveFindingsRevision();
-  const form = useForm<FormValues>({ defaultValues: toValues(current) });
+  const form = useForm<FindingsFormValues>({ defaultValues: toValues(current) });
   const { errors, isDirty } = form.formState;
-  const parts = useFieldArray({ control: form.control, name: 'parts' });
-  const labour = useFieldArray({ control: form.control, name: 'labour' });
-  const followUps = useFieldArray({ control: form.control, name: 'followUps' });
-  const photoIds = useWatch({ control: form.control, name: 'photoIds' });
+  const photoIds = useWatch({ control: form.control, name: 'photoIds' }) ?? [];
   const conflict = isApiError(save.error) && save.error.status === 409;
 
   useEffect(() => onDirtyChange(isDirty), [isDirty, onDirtyChange]);
@@ -90,7 +81,7 @@ export function FindingsReviewForm({
         const [list, index] = issue.path;
         const followUp = list === 'followUps' && typeof index === 'number';
         const name = followUp ? `followUps.${index}.text` : issue.path.join('.');
-        form.setError(name as Path<FormValues>, {
+        form.setError(name as Path<FindingsFormValues>, {
           message: followUp ? 'Write the follow-up, or remove it.' : issue.message,
         });
       }
@@ -154,122 +145,10 @@ export function FindingsReviewForm({
         {...form.register('correction')}
       />
 
-      <fieldset className="flex flex-col gap-3">
-        <legend className="mb-2 text-lg font-bold">Parts</legend>
-        {parts.fields.length === 0 ? <p className="text-ink-muted">No parts.</p> : null}
-        {parts.fields.map((field, index) => (
-          <div
-            key={field.id}
-            className="grid gap-3 rounded-control border-2 border-line p-3 @lg:grid-cols-[minmax(0,1fr)_6.5rem_9rem] @lg:items-end"
-          >
-            <TextField
-              label={`Part ${index + 1}`}
-              error={errors.parts?.[index]?.description?.message}
-              {...form.register(`parts.${index}.description`)}
-            />
-            <TextField
-              label={
-                <>
-                  Quantity<span className="sr-only"> of part {index + 1}</span>
-                </>
-              }
-              inputMode="decimal"
-              error={errors.parts?.[index]?.quantity?.message}
-              {...form.register(`parts.${index}.quantity`)}
-            />
-            <TextField
-              label={
-                <>
-                  Part number<span className="sr-only"> of part {index + 1}</span>
-                </>
-              }
-              autoCapitalize="characters"
-              spellCheck={false}
-              error={errors.parts?.[index]?.partNumber?.message}
-              {...form.register(`parts.${index}.partNumber`)}
-            />
-            <div className="@lg:col-span-3">
-              <Button variant="quiet" onClick={() => parts.remove(index)}>
-                Remove part {index + 1}
-              </Button>
-            </div>
-          </div>
-        ))}
-        <div>
-          <Button
-            variant="secondary"
-            onClick={() => parts.append({ description: '', quantity: '1', partNumber: '' })}
-          >
-            Add part
-          </Button>
-        </div>
-      </fieldset>
-
-      <fieldset className="flex flex-col gap-3">
-        <legend className="mb-2 text-lg font-bold">Labour</legend>
-        {labour.fields.length === 0 ? <p className="text-ink-muted">No labour lines.</p> : null}
-        {labour.fields.map((field, index) => (
-          <div
-            key={field.id}
-            className="grid gap-3 rounded-control border-2 border-line p-3 @lg:grid-cols-[minmax(0,1fr)_7rem] @lg:items-end"
-          >
-            <TextField
-              label={`Operation ${index + 1}`}
-              error={errors.labour?.[index]?.operation?.message}
-              {...form.register(`labour.${index}.operation`)}
-            />
-            <TextField
-              label={
-                <>
-                  Hours<span className="sr-only"> for operation {index + 1}</span>
-                </>
-              }
-              inputMode="decimal"
-              error={errors.labour?.[index]?.hours?.message}
-              {...form.register(`labour.${index}.hours`)}
-            />
-            <div className="@lg:col-span-2">
-              <Button variant="quiet" onClick={() => labour.remove(index)}>
-                Remove operation {index + 1}
-              </Button>
-            </div>
-          </div>
-        ))}
-        <div>
-          <Button variant="secondary" onClick={() => labour.append({ operation: '', hours: '' })}>
-            Add labour line
-          </Button>
-        </div>
-      </fieldset>
-
-      <fieldset className="flex flex-col gap-3">
-        <legend className="mb-2 text-lg font-bold">Follow-ups</legend>
-        <p className="text-sm text-ink-muted">
-          Keep each follow-up’s caution in its words: the customer reads them in the PDF.
-        </p>
-        {followUps.fields.length === 0 ? <p className="text-ink-muted">No follow-ups.</p> : null}
-        {followUps.fields.map((field, index) => (
-          <div key={field.id} className="flex flex-col gap-2">
-            <TextAreaField
-              label={`Follow-up ${index + 1}`}
-              rows={2}
-              className="field-sizing-content min-h-24"
-              error={errors.followUps?.[index]?.text?.message}
-              {...form.register(`followUps.${index}.text`)}
-            />
-            <div>
-              <Button variant="quiet" onClick={() => followUps.remove(index)}>
-                Remove follow-up {index + 1}
-              </Button>
-            </div>
-          </div>
-        ))}
-        <div>
-          <Button variant="secondary" onClick={() => followUps.append({ text: '' })}>
-            Add follow-up
-          </Button>
-        </div>
-      </fieldset>
+      <FindingsLinesFields
+        form={form}
+        followUpHint="Keep each follow-up’s caution in its words: the customer reads them in the PDF."
+      />
 
       <PhotoPicker
         photos={photos}
