@@ -38,8 +38,10 @@ export type {
   TemperatureDropRule,
   TemperatureDropVerdict,
 } from './temperature-drop.js';
-export { pressureTest } from './pressure-test.js';
+export { pressureHoldRule, pressureTest } from './pressure-test.js';
+export { CAP_RATING_BAND } from './cap-rating.js';
 export type {
+  PressureHoldRule,
   PressureTestOptions,
   PressureTestResult,
   PressureTestRule,

@@ -50,7 +50,7 @@ export const SYSTEM_PRESSURE_TEST: SourceNote = {
 
 export const CAP_RATING_TYPICAL: SourceNote = {
   source:
-    'Rules of thumb of the trade: pressure cap rating typically 0.8–1.2 bar (12–18 psi) gauge',
+    'Rules of thumb of the trade: pressure cap ratings of 1.4–1.6 bar are common on modern cars, 0.9–1.2 bar on older ones (trade-facts.md lists 0.8–1.2 bar, 12–18 psi, for older practice)',
   status: 'common practice',
 };
 

@@ -118,7 +118,7 @@ function PressureResult({ result, units }: { result: PressureTestResult; units: 
           },
           {
             term: 'Counted as no change',
-            value: `within ${show(result.rule.thresholds.readingResolutionBar, 'pressure', units.pressure, 2)}`,
+            value: `within ${show(result.rule.thresholds.noChangeBar, 'pressure', units.pressure, 2)}`,
           },
         ]}
       />
