@@ -36,4 +36,20 @@ export const cautions = {
     hazard: 'road-test',
     text: 'On the road test a second person reads the scan tool; the driver watches the road. Keep to traffic law, and stop safely and switch off if the temperature warning comes on.',
   },
+  boilingWater: {
+    hazard: 'hot-surface',
+    text: 'The thermostat is tested in water brought towards the boil: it scalds, and so do the part and the thermometer when they come out. Use a stable heat source, lift the part with tongs or on a wire, wear gloves and eye protection, and follow the vehicle maker’s procedure.',
+  },
+  openNeckRunning: {
+    hazard: 'hot-pressurised-coolant',
+    text: 'This test runs the engine with the cap off, so start it only on a cold system and never take the cap off a warm one to begin. As the engine warms, coolant can surge and spit from the open neck: keep your face and hands away, keep the tester’s level below the neck, and stop the engine and let it cool well before the thermostat opens. Follow the vehicle maker’s procedure and the test kit’s instructions.',
+  },
+  drainAndRefill: {
+    hazard: 'hot-pressurised-coolant',
+    text: 'This repair drains and refills the cooling system: begin only when the engine is cold, release the pressure slowly under a thick cloth, and never open the cap, a bleed screw or a hose on a hot system. Refill and bleed as the vehicle maker describes.',
+  },
+  scanToolActuation: {
+    hazard: 'fan',
+    text: 'Commanding pumps, valves or fans from the scan tool makes parts move and fans start with no warning: keep hands, hair, tools and leads clear of the fan and the belt drive while a test runs, and follow the vehicle maker’s procedure.',
+  },
 } as const satisfies Record<string, Caution>;
