@@ -223,4 +223,3 @@ export function pressureTest(options: PressureTestOptions): PressureTestResult {
     explanation: `The pressure held within ${R.noChangeBar} bar for ${held}.`,
   };
 }
-
