@@ -5,7 +5,7 @@ import { fail } from './lib/log.mjs';
 import { mustRun, root } from './lib/run.mjs';
 
 const commands = {
-  migrate: ['migrate'],
+  migrate: ['migrate', 'update-shipped-trees'],
   seed: ['seed-demo'],
   reset: ['reset', 'migrate', 'seed-demo'],
 };

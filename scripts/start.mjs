@@ -58,6 +58,14 @@ async function main() {
       { cwd: api, env },
     );
   }
+  // Workshops still on an earlier shipped version of a Heatpath tree get the current one as a
+  // new version; cases pinned to the old version keep it.
+  await mustRun(
+    process.execPath,
+    ['--import', 'tsx', 'src/db/cli.ts', 'update-shipped-trees'],
+    'Updating the shipped trees failed; see the message above.',
+    { cwd: api, env },
+  );
   step('Building the web app…');
   await runPnpm(
     ['--filter', '@heatpath/web', 'build', '--logLevel', 'warn'],

@@ -87,7 +87,7 @@ export type { EvaluationResult, FormulaScope, FormulaValue } from './formula/for
 // Compile and walk
 export { compileTree } from './compile/compile-tree.js';
 export type { CompiledTree, CompileResult } from './compile/compile-tree.js';
-export { fingerprintOf } from './compile/fingerprint.js';
+export { contentFingerprintOf, fingerprintOf } from './compile/fingerprint.js';
 export { OUTCOME_TAG } from './walk/walk-machine.js';
 export type { WalkMachine } from './walk/walk-machine.js';
 export {

@@ -1,10 +1,12 @@
 // Database chores for the bootstrap scripts: `migrate`, `seed-demo` (only on an empty
-// database) and `reset` (drop everything; development and test only).
+// database), `update-shipped-trees` (publish Heatpath's current trees where a workshop still
+// has an earlier shipped version) and `reset` (drop everything; development and test only).
 import { loadConfig } from '../config';
 import { initModels } from './models/index';
 import { migrateUp } from './migrator';
 import { createSequelize } from './sequelize';
 import { seedDemo } from './seeders/demo';
+import { updateShippedTrees } from '../services/trees/update-shipped-trees';
 
 const command = process.argv[2];
 const config = loadConfig();
@@ -29,6 +31,21 @@ async function main(): Promise<void> {
       );
       break;
     }
+    case 'update-shipped-trees': {
+      const changes = await updateShippedTrees({ sequelize });
+      const updated = changes.filter((c) => c.change === 'updated' || c.change === 'installed');
+      const kept = changes.filter((c) => c.change === 'kept-lead-edits');
+      console.log(
+        updated.length
+          ? `✓ Shipped trees brought up to date: ${updated.map((c) => (c.change === 'updated' ? `${c.treeKey} v${c.version}` : `${c.treeKey} installed`)).join(', ')}.`
+          : '✓ Shipped trees are up to date.',
+      );
+      if (kept.length)
+        console.log(
+          `  ${kept.length} tree(s) edited by a workshop lead were left as they are; the lead can compare them with Heatpath’s current trees.`,
+        );
+      break;
+    }
     case 'reset': {
       if (config.env === 'production') throw new Error('Refusing to reset a production database.');
       await sequelize.query('DROP SCHEMA public CASCADE; CREATE SCHEMA public;');
@@ -36,7 +53,9 @@ async function main(): Promise<void> {
       break;
     }
     default:
-      throw new Error(`Unknown command "${command}". Use migrate, seed-demo or reset.`);
+      throw new Error(
+        `Unknown command "${command}". Use migrate, seed-demo, update-shipped-trees or reset.`,
+      );
   }
 }
 

@@ -14,3 +14,22 @@ export function fingerprintOf(value: unknown): string {
   }
   return (a >>> 0).toString(16).padStart(8, '0') + (b >>> 0).toString(16).padStart(8, '0');
 }
+
+/**
+ * The same fingerprint over a canonical form of the value: object keys sorted at every depth.
+ * A definition read back from a jsonb column has its keys reordered by PostgreSQL, so this is
+ * the one to compare stored content with content in code. Arrays keep their order.
+ */
+export function contentFingerprintOf(value: unknown): string {
+  return fingerprintOf(sortKeysDeep(value));
+}
+
+function sortKeysDeep(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(sortKeysDeep);
+  if (value === null || typeof value !== 'object') return value;
+  return Object.fromEntries(
+    Object.keys(value)
+      .sort()
+      .map((key) => [key, sortKeysDeep((value as Record<string, unknown>)[key])]),
+  );
+}

@@ -1,6 +1,7 @@
 // Gives a workshop its own editable copies of the trees Heatpath ships, each published as
 // version 1 so cases can start at once.
 import type { Transaction } from 'sequelize';
+import type { TreeDefinition } from '@heatpath/fault-tree';
 import { shippedTrees } from '@heatpath/fault-tree/trees';
 import { Tree, TreeVersion } from '../../db/models/index';
 
@@ -8,10 +9,12 @@ export async function installShippedTrees(options: {
   workshopId: string;
   userId: string | null;
   transaction?: Transaction;
+  /** Only these shipped trees; all of them when left out. */
+  definitions?: readonly TreeDefinition[];
 }) {
   const { workshopId, userId, transaction } = options;
   const installed: TreeVersion[] = [];
-  for (const definition of shippedTrees) {
+  for (const definition of options.definitions ?? shippedTrees) {
     const [tree] = await Tree.findOrCreate({
       where: { workshopId, key: definition.id },
       defaults: {
