@@ -140,6 +140,13 @@ function TreeCard({ entry }: { entry: TreeLibraryEntry }) {
                       {formatWhen(version.publishedAt)}
                     </span>
                   </>
+                ) : version.publishedAt ? (
+                  <>
+                    Heatpath
+                    <span className="block text-sm text-ink-muted">
+                      {formatWhen(version.publishedAt)}
+                    </span>
+                  </>
                 ) : (
                   '—'
                 )}

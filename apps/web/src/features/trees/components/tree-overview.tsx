@@ -189,6 +189,12 @@ function VersionRow({
             {version.publishedBy.name}
             <span className="block text-sm text-ink-muted">{formatWhen(version.publishedAt)}</span>
           </>
+        ) : version.publishedAt ? (
+          // Published by Heatpath itself when it moved the workshop to a newer shipped tree.
+          <>
+            Heatpath
+            <span className="block text-sm text-ink-muted">{formatWhen(version.publishedAt)}</span>
+          </>
         ) : (
           <span className="text-ink-muted">Saved {formatWhen(version.updatedAt)}</span>
         )}
