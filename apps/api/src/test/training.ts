@@ -21,7 +21,16 @@ export const personal = {
 
 export const hiddenNoteText = 'Only for the lead: checked the heater valve on the side.';
 
-export async function finishedPersonalCase(app: ReturnType<typeof testApp>) {
+/** Free text to write on the case instead of the usual complaint, and extra notes. */
+export interface PersonalCaseText {
+  complaint?: string;
+  notes?: string[];
+}
+
+export async function finishedPersonalCase(
+  app: ReturnType<typeof testApp>,
+  text: PersonalCaseText = {},
+) {
   const w = await createWorkshopWithTrees();
   const customer = await Customer.create({
     workshopId: w.workshop.id,
@@ -46,7 +55,8 @@ export async function finishedPersonalCase(app: ReturnType<typeof testApp>) {
   const created = await tech.post('/api/cases').send({
     vehicleId: vehicle.id,
     customerId: customer.id,
-    complaint: `${personal.name} (call ${personal.phone}) says the gauge climbs on hills.`,
+    complaint:
+      text.complaint ?? `${personal.name} (call ${personal.phone}) says the gauge climbs on hills.`,
     mileageAtIntake: 88100,
     treeId: w.trees[overheatingTreeKey],
   });
@@ -61,6 +71,7 @@ export async function finishedPersonalCase(app: ReturnType<typeof testApp>) {
   };
   await note('hose-temps', `Hoses read on ${personal.plate}; mail ${personal.email} the figures.`);
   await note('pump-removal', hiddenNoteText);
+  for (const extra of text.notes ?? []) await note('hose-temps', extra);
   const upload = async (nodeId: string, filename: string) => {
     const res = await tech
       .post(`/api/cases/${caseId}/attachments`)

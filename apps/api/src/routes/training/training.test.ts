@@ -153,6 +153,50 @@ describe('personal data and the apprentice', () => {
     expect(replay.steps.some((s: { cautions: unknown[] }) => s.cautions.length > 0)).toBe(true);
   });
 
+  it('hides a plate or VIN however the technician spaced or dashed it, and the plate’s parts', async () => {
+    // personal.plate is "TR19 WNX"; the VIN is KX1HT84A0JB123457.
+    const { lead, apprentice, caseId } = await finishedPersonalCase(app, {
+      complaint: 'TR19-WNX (T R 1 9 W N X on the job card) climbs on hills.',
+      notes: [
+        'VIN KX1 HT8 4A0 JB1 234 57 read off the screen; serial 123457 matches.',
+        'Booked in as TR19, the WNX one. Could see steam at the cap.',
+        'tr19wnx again, KX1-HT84A0-JB123457 on the invoice.',
+      ],
+    });
+    const trainingCaseId = await markForTraining(lead, caseId);
+    const responses: unknown[] = [];
+    const get = async (path: string) => {
+      const res = await apprentice.get(path);
+      expect(res.status, `${path}: ${res.text}`).toBe(200);
+      responses.push(res.body);
+      return res.body;
+    };
+    await get('/api/training/casebook');
+    const replay = await get(`/api/training/cases/${trainingCaseId}/replay`);
+    const final = await predictThrough(apprentice, trainingCaseId, fixedChoice, responses);
+    await get(`/api/training/attempts/${final.id}`);
+
+    // Separators and case ignored, as the vehicle search compares them.
+    const key = (text: string) => text.replace(/[^\p{L}\p{N}]/gu, '').toUpperCase();
+    const strings = responses.flatMap((body) => stringsIn(body));
+    const leaks = strings.filter(({ text }) =>
+      ['TR19WNX', 'KX1HT84A0JB123457', '123457'].some((secret) => key(text).includes(secret)),
+    );
+    expect(leaks).toEqual([]);
+    const parts = strings.filter(({ text }) => /\bTR19\b|\bWNX\b/i.test(text));
+    expect(parts).toEqual([]);
+
+    expect(replay.trainingCase.complaint).toBe(
+      '[hidden] ([hidden] on the job card) climbs on hills.',
+    );
+    const hoseStep = replay.steps.find((s: { nodeId: string }) => s.nodeId === 'hose-temps');
+    expect(hoseStep.notes.slice(1)).toEqual([
+      'VIN [hidden] read off the screen; serial [hidden] matches.',
+      'Booked in as [hidden], the [hidden] one. Could see steam at the cap.',
+      '[hidden] again, [hidden] on the invoice.',
+    ]);
+  });
+
   it('leaves the technician’s notes out when the lead hides them', async () => {
     const { lead, apprentice, caseId } = await finishedPersonalCase(app);
     const trainingCaseId = await markForTraining(lead, caseId, { hideNotes: true });

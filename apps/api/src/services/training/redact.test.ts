@@ -35,4 +35,29 @@ describe('redacting personal data from free text', () => {
   it('takes the whole name before its parts, and skips parts under three letters', () => {
     expect(secretsOf({ customerName: 'Jo Penhallow' })).toEqual(['Jo Penhallow', 'Penhallow']);
   });
+
+  it('finds a plate or VIN however it is spaced or dashed, as the vehicle search does', () => {
+    const car = redacter({ plate: 'UX64 SEE', vin: 'WVWZZZ1JZ3W386752' });
+    expect(car('Plate UX64-SEE, also ux64see and U X 6 4 S E E.')).toBe(
+      'Plate [hidden], also [hidden] and [hidden].',
+    );
+    expect(car('VIN WVW ZZZ 1JZ 3W3 867 52 / WVW-ZZZ1JZ3W-386752 checked')).toBe(
+      'VIN [hidden] / [hidden] checked',
+    );
+    const spaced = redacter({ plate: 'QF19 6PF' });
+    expect(spaced('Q F 1 9 6 P F in bay 2; QF19 6 PF out')).toBe('[hidden] in bay 2; [hidden] out');
+  });
+
+  it('takes the plate’s parts and the VIN’s serial, but leaves words that match a part', () => {
+    const car = redacter({ plate: 'UX64 SEE', vin: 'WVWZZZ1JZ3W386752' });
+    expect(car('Booked as UX64, the SEE one; serial 386752')).toBe(
+      'Booked as [hidden], the [hidden] one; serial [hidden]',
+    );
+    expect(car('Could see steam at the cap, 64 °C, seen twice')).toBe(
+      'Could see steam at the cap, 64 °C, seen twice',
+    );
+    expect(car('Part UX640 and 3867521 are other numbers')).toBe(
+      'Part UX640 and 3867521 are other numbers',
+    );
+  });
 });
