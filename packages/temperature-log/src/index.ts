@@ -31,17 +31,24 @@ export type { Delimiter } from './format/detect-layout.js';
 export type { DecimalMark } from './format/number-value.js';
 export type { TimeFormat } from './format/time-value.js';
 
-export { analyseTemperatureLog } from './analysis/analyse-temperature-log.js';
+export { analyseTemperatureLog, ANALYSIS_VERSION } from './analysis/analyse-temperature-log.js';
 export type {
   AnalysableSeries,
   TemperatureLogAnalysis,
 } from './analysis/analyse-temperature-log.js';
-export { DEFAULT_ANALYSIS_OPTIONS } from './analysis/analysis-options.js';
+export {
+  DEFAULT_ANALYSIS_OPTIONS,
+  MAP_CONTROLLED_OVER_TEMPERATURE_C,
+} from './analysis/analysis-options.js';
 export type {
   AnalyseTemperatureLogOptions,
+  EngineFacts,
   ResolvedAnalysisOptions,
 } from './analysis/analysis-options.js';
-export { TYPICAL_OPENING_C } from './analysis/result-basis.js';
+export { MAP_CONTROLLED_PART_LOAD_C, TYPICAL_OPENING_C } from './analysis/result-basis.js';
+export { engineFactsFromDescription } from './analysis/engine-facts.js';
+export { STOPPED_BELOW_RPM } from './analysis/engine-running.js';
+export type { ShroudReleaseReading, ShroudReleaseResult } from './analysis/shroud-release.js';
 export type { ResultBasis } from './analysis/result-basis.js';
 export type { NotFound, OpeningResult, RiseRateResult, WarmUpResult } from './analysis/warm-up.js';
 export type {

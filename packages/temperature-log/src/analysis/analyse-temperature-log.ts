@@ -3,6 +3,8 @@
 import { TemperatureLogError } from '../errors.js';
 import { resolveAnalysisOptions } from './analysis-options.js';
 import type { AnalyseTemperatureLogOptions, ResolvedAnalysisOptions } from './analysis-options.js';
+import { engineRunning, runningOnGrid } from './engine-running.js';
+import { heatSoakNotes } from './heat-soak.js';
 import { findAmbient, findPeak, findSettled, findTimeToTarget } from './log-readings.js';
 import type {
   AmbientResult,
@@ -12,6 +14,8 @@ import type {
 } from './log-readings.js';
 import { findOverTemperature } from './over-temperature.js';
 import type { OverTemperatureResult } from './over-temperature.js';
+import { readStalls } from './shroud-release.js';
+import type { ShroudReleaseResult } from './shroud-release.js';
 import { findSwings } from './swings.js';
 import type { SwingResult } from './swings.js';
 import { medianInterval, uniformGrid } from './uniform-grid.js';
@@ -24,9 +28,19 @@ export interface AnalysableSeries {
   readonly coolantC: readonly number[];
   readonly ambientC?: readonly (number | null)[] | null;
   readonly fanDuty?: readonly (number | null)[] | null;
+  /** Engine speed, rpm: tells running from switched off (heat soak is left out of episodes). */
+  readonly engineSpeedRpm?: readonly (number | null)[] | null;
 }
 
+/**
+ * Bumped whenever the analysis rules change what it finds, so a stored analysis from before can
+ * be recognised and worked out again (1: before this field; 2: opening only inside a warm-up,
+ * shroud release, map-controlled thermostat, engine speed).
+ */
+export const ANALYSIS_VERSION = 2;
+
 export interface TemperatureLogAnalysis {
+  readonly version: number;
   readonly log: {
     readonly readings: number;
     readonly durationSeconds: number;
@@ -36,6 +50,8 @@ export interface TemperatureLogAnalysis {
   readonly warmUp: WarmUpResult;
   readonly opening: OpeningResult;
   readonly riseRate: RiseRateResult;
+  /** A switchable pump's shroud releasing (a stall in the warm-up), as far as the log shows it. */
+  readonly shroudRelease: ShroudReleaseResult;
   readonly timeToTarget: TimeToTargetResult;
   readonly settled: SettledResult;
   readonly overTemperature: OverTemperatureResult;
@@ -83,9 +99,23 @@ export function analyseTemperatureLog(
   const o = resolveAnalysisOptions(options);
   const { times, coolantC } = series;
   const grid = uniformGrid(times, coolantC);
+  const running = engineRunning(times.length, series.engineSpeedRpm);
   const warm = analyseWarmUp(grid, o);
-  const overTemperature = findOverTemperature(grid, times, coolantC, o);
+  const overTemperature = findOverTemperature(
+    grid,
+    times,
+    coolantC,
+    o,
+    running.known ? runningOnGrid(times, running, grid.start, grid.step, grid.values.length) : null,
+  );
   const openedAt = warm.opening.found ? warm.opening.atSeconds : null;
+  const stalls = readStalls({
+    stalls: warm.stalls,
+    timeAt: (index) => grid.start + index * grid.step,
+    switchablePump: o.switchablePump,
+    openingC: warm.opening.found ? warm.opening.temperatureC : null,
+    warmUpFound: warm.warmUp.found,
+  });
   const fan = series.fanDuty ?? null;
   const swings = findSwings(
     grid,
@@ -100,18 +130,30 @@ export function analyseTemperatureLog(
       `Readings are ${Math.round(interval)} s apart: short over-temperature episodes and fast swings can fall between them.`,
     );
   }
+  notes.push(...stalls.notes);
+  notes.push(
+    ...heatSoakNotes({
+      times,
+      coolantC,
+      running,
+      episodes: overTemperature.episodes,
+      thresholdC: overTemperature.thresholdC,
+    }),
+  );
   return {
+    version: ANALYSIS_VERSION,
     log: {
       readings: times.length,
       durationSeconds: (times[times.length - 1] ?? 0) - (times[0] ?? 0),
       medianIntervalSeconds: interval,
     },
-    peak: findPeak(times, coolantC),
+    peak: findPeak(times, coolantC, running),
     warmUp: warm.warmUp,
     opening: warm.opening,
     riseRate: warm.riseRate,
+    shroudRelease: stalls.shroudRelease,
     timeToTarget: findTimeToTarget(times, coolantC, o),
-    settled: findSettled(times, coolantC, openedAt, overTemperature.episodes, o),
+    settled: findSettled(times, coolantC, openedAt, overTemperature.episodes, o, running),
     overTemperature,
     swings,
     ambient: findAmbient(series.ambientC),

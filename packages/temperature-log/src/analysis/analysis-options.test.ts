@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { TemperatureLogError } from '../errors.js';
 import { analyseTemperatureLog } from './analyse-temperature-log.js';
-import { DEFAULT_ANALYSIS_OPTIONS } from './analysis-options.js';
+import { DEFAULT_ANALYSIS_OPTIONS, MAP_CONTROLLED_OVER_TEMPERATURE_C } from './analysis-options.js';
 
 const SERIES = { times: [0, 1, 2, 3], coolantC: [20, 21, 22, 23] };
 
@@ -13,7 +13,35 @@ describe('analysis options', () => {
     expect(DEFAULT_ANALYSIS_OPTIONS.minEpisodeSeconds).toBe(30);
   });
 
+  it('leaves the engine facts unknown unless told, and takes true, false or null', () => {
+    expect(DEFAULT_ANALYSIS_OPTIONS.switchablePump).toBeNull();
+    expect(DEFAULT_ANALYSIS_OPTIONS.mapControlledThermostat).toBeNull();
+    expect(analyseTemperatureLog(SERIES, { switchablePump: true }).options.switchablePump).toBe(
+      true,
+    );
+    expect(
+      analyseTemperatureLog(SERIES, { mapControlledThermostat: null }).options
+        .mapControlledThermostat,
+    ).toBeNull();
+  });
+
+  it('raises the default threshold for a map-controlled thermostat, but not a chosen one', () => {
+    // Such engines hold 100–110 °C at part load (cooling-diagnosis.md, traps; common practice).
+    expect(
+      analyseTemperatureLog(SERIES, { mapControlledThermostat: true }).options.overTemperatureC,
+    ).toBe(MAP_CONTROLLED_OVER_TEMPERATURE_C);
+    expect(
+      analyseTemperatureLog(SERIES, { mapControlledThermostat: true, overTemperatureC: 108 })
+        .options.overTemperatureC,
+    ).toBe(108);
+    expect(
+      analyseTemperatureLog(SERIES, { mapControlledThermostat: false }).options.overTemperatureC,
+    ).toBe(110);
+  });
+
   it.each([
+    [{ switchablePump: 'yes' } as unknown as Record<string, number>],
+    [{ mapControlledThermostat: 1 } as unknown as Record<string, number>],
     [{ minEpisodeSeconds: -1 }],
     [{ smoothingSeconds: 0 }],
     [{ overTemperatureC: Number.NaN }],

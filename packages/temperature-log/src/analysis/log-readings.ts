@@ -1,6 +1,9 @@
 // Values read off the log directly: the peak, when the coolant first reached a target
-// temperature, the settled temperature after the opening, and the ambient temperature.
+// temperature, the settled temperature after the opening, and the ambient temperature. With an
+// engine-speed channel, the peak and the settled temperature use only readings while the engine
+// runs: heat soak after switch-off is not the engine running hot (cooling-diagnosis.md, traps).
 import type { ResolvedAnalysisOptions } from './analysis-options.js';
+import type { EngineRunning } from './engine-running.js';
 import type { OverTemperatureEpisode } from './over-temperature.js';
 import { STATUS } from './result-basis.js';
 import type { ResultBasis } from './result-basis.js';
@@ -46,10 +49,21 @@ function round1(v: number): number {
   return Math.round(v * 10) / 10;
 }
 
-export function findPeak(times: readonly number[], coolantC: readonly number[]): PeakResult {
-  let best = 0;
-  for (let i = 1; i < coolantC.length; i += 1) {
-    if ((coolantC[i] ?? Number.NEGATIVE_INFINITY) > (coolantC[best] ?? Number.NEGATIVE_INFINITY)) {
+export function findPeak(
+  times: readonly number[],
+  coolantC: readonly number[],
+  running: EngineRunning,
+): PeakResult {
+  // A log with the engine stopped throughout still has a highest reading.
+  const anyRunning = running.atReading.some(Boolean);
+  const counts = (i: number): boolean => !anyRunning || running.atReading[i] !== false;
+  let best = -1;
+  for (let i = 0; i < coolantC.length; i += 1) {
+    if (
+      counts(i) &&
+      (best === -1 ||
+        (coolantC[i] ?? Number.NEGATIVE_INFINITY) > (coolantC[best] ?? Number.NEGATIVE_INFINITY))
+    ) {
       best = i;
     }
   }
@@ -57,7 +71,9 @@ export function findPeak(times: readonly number[], coolantC: readonly number[]):
     valueC: coolantC[best] ?? Number.NaN,
     atSeconds: times[best] ?? Number.NaN,
     basis: {
-      method: 'The highest coolant reading in the log, and its time.',
+      method: running.known
+        ? 'The highest coolant reading while the engine runs (engine-speed channel), and its time; heat soak after switch-off is left out.'
+        : 'The highest coolant reading in the log, and its time.',
       status: STATUS.readFromLog,
     },
   };
@@ -111,9 +127,10 @@ export function findSettled(
   fromSeconds: number | null,
   episodes: readonly OverTemperatureEpisode[],
   o: ResolvedAnalysisOptions,
+  running: EngineRunning,
 ): SettledResult {
   const basis: ResultBasis = {
-    method: `The median coolant reading from ${o.settleDelaySeconds} s after the thermostat opened to the end of the log, leaving out over-temperature episodes; it needs at least ${o.minSettledSeconds / 60} minutes of log after the opening.`,
+    method: `The median coolant reading from ${o.settleDelaySeconds} s after the thermostat opened to the end of the log, leaving out over-temperature episodes${running.known ? ' and readings with the engine stopped' : ''}; it needs at least ${o.minSettledSeconds / 60} minutes of log after the opening.`,
     status: `${STATUS.heatpathMethod} The log does not say whether the car was driven steadily; check the chart.`,
   };
   if (fromSeconds === null) {
@@ -136,7 +153,7 @@ export function findSettled(
   let e = 0;
   for (let i = 0; i < times.length; i += 1) {
     const t = times[i] ?? 0;
-    if (t < start) {
+    if (t < start || running.atReading[i] === false) {
       continue;
     }
     while (e < episodes.length && (episodes[e]?.endSeconds ?? 0) < t) {

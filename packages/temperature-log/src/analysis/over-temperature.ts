@@ -5,6 +5,9 @@
 // coolant falls a hysteresis below the threshold, so hovering at the threshold does not split
 // one episode into many; its end is the last crossing back under the threshold. The peak is the
 // highest raw reading within the episode: what the live data showed.
+// With an engine-speed channel, only running counts: an episode ends at switch-off and none
+// starts while the engine is stopped, because heat soak after switch-off raises the coolant
+// without the engine running hot (cooling-diagnosis.md, traps; common practice).
 import type { ResolvedAnalysisOptions } from './analysis-options.js';
 import { STATUS } from './result-basis.js';
 import type { ResultBasis } from './result-basis.js';
@@ -62,6 +65,8 @@ export function findOverTemperature(
   times: readonly number[],
   coolantC: readonly number[],
   o: ResolvedAnalysisOptions,
+  /** Per grid point, 1 while the engine runs; null without an engine-speed channel. */
+  running: Uint8Array | null = null,
 ): OverTemperatureResult {
   const threshold = o.overTemperatureC;
   const release = threshold - o.episodeHysteresisK;
@@ -72,6 +77,19 @@ export function findOverTemperature(
   let lastAbove = 0;
   for (let k = 0; k < s.length; k += 1) {
     const v = s[k] ?? Number.NaN;
+    if (running !== null && running[k] === 0) {
+      if (start !== null) {
+        // Switched off during the episode: it ends there, and what follows is heat soak.
+        const a = lastAbove;
+        const end =
+          a === k - 1
+            ? timeAt(k)
+            : crossing(timeAt(a), s[a] ?? v, timeAt(a + 1), s[a + 1] ?? v, threshold);
+        spans.push({ start, end, ongoing: false });
+        start = null;
+      }
+      continue;
+    }
     if (start === null) {
       if (v >= threshold) {
         start =
@@ -112,8 +130,11 @@ export function findOverTemperature(
     minEpisodeSeconds: o.minEpisodeSeconds,
     episodes,
     basis: {
-      method: `Stretches where ${smoothing} is at or above ${threshold} °C for at least ${o.minEpisodeSeconds} s; an episode ends when it falls below ${release} °C (a ${o.episodeHysteresisK} K hysteresis), at its last crossing back under ${threshold} °C. Start and end are interpolated; the peak is the highest single reading in the episode.`,
-      status: STATUS.heatpathThreshold,
+      method: `Stretches where ${smoothing} is at or above ${threshold} °C for at least ${o.minEpisodeSeconds} s; an episode ends when it falls below ${release} °C (a ${o.episodeHysteresisK} K hysteresis), at its last crossing back under ${threshold} °C. Start and end are interpolated; the peak is the highest single reading in the episode.${running === null ? '' : ' Only while the engine runs (engine-speed channel): heat soak after switch-off is left out.'}`,
+      status:
+        o.mapControlledThermostat === true
+          ? STATUS.heatpathThresholdMapControlled
+          : STATUS.heatpathThreshold,
     },
   };
 }

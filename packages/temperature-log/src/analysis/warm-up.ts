@@ -1,22 +1,17 @@
-// Warm-up, thermostat opening and rate of rise, from one search for the moment the rise flattens.
-//
-// Method (Heatpath's): the coolant series is put on an even step and smoothed with a centred
-// moving average (30 s). At each moment the rise rate over the window before (60 s) is compared
-// with the rate over the window after. The thermostat is taken to open at the first moment where
-// - the rate before is at least 1 K/min (the engine is warming),
-// - the rate after is below 30 % of the rate before (the rise has flattened),
-// - the coolant has risen at least 15 K from its coldest reading so far (a real warm-up),
-// refined to the moment of the sharpest change (rate before minus rate after, largest) within
-// two windows, and kept only if the rise does not resume by more than 6 K within two windows
-// (a driver stopping for a minute flattens the curve too). For a rise that stops sharply the
-// smoothed rate halves exactly at the knee, so this finds the knee without bias; the smoothed
-// temperature there lies below the true opening temperature by about rate × window / 8
-// (0.4 K at 6 K/min and 30 s).
+// Warm-up, thermostat opening and rate of rise, from one search for the moment the warm-up's
+// rise levels off (opening-search.ts has the rules: only inside a warm-up the log contains,
+// never at or above the over-temperature threshold, stalls after which the climb resumes left
+// out). For a rise that stops sharply the smoothed rate halves exactly at the knee, so the time
+// has no bias; the smoothed temperature there lies below the true opening temperature by about
+// rate × window / 8 (0.4 K at 6 K/min and 30 s).
 // The warm-up starts where the rise leaves the coldest reading: the last moment within 1 K of
 // it, extrapolated back along the local rise to the coldest level, so a flat lead-in with the
 // engine off is not counted.
 import type { ResolvedAnalysisOptions } from './analysis-options.js';
-import { STATUS, TYPICAL_OPENING_C } from './result-basis.js';
+import { compareOpening } from './opening-comparison.js';
+import { curveRates, searchOpening } from './opening-search.js';
+import type { NoOpeningCause, Stall } from './opening-search.js';
+import { STATUS } from './result-basis.js';
 import type { ResultBasis } from './result-basis.js';
 import { halfWidthFor, movingAverage } from './uniform-grid.js';
 import type { UniformGrid } from './uniform-grid.js';
@@ -46,6 +41,10 @@ export type OpeningResult =
       readonly atSeconds: number;
       readonly typicalRangeC: { readonly min: number; readonly max: number };
       readonly comparedWithTypical: 'below' | 'within' | 'above';
+      /** 'gradual': the rise levelled off slowly and the opening is where it slowed most. */
+      readonly shape: 'sharp' | 'gradual';
+      /** What the comparison means for this engine, when it needs saying; null otherwise. */
+      readonly note: string | null;
       readonly basis: ResultBasis;
     }
   | NotFound;
@@ -67,6 +66,8 @@ export interface WarmUpAnalysis {
   readonly warmUp: WarmUpResult;
   readonly opening: OpeningResult;
   readonly riseRate: RiseRateResult;
+  /** Stalls in the warm-up after which the climb resumed: not the opening. */
+  readonly stalls: readonly Stall[];
 }
 
 const WITHIN_OF_COLDEST_K = 1;
@@ -76,7 +77,7 @@ function basisTexts(o: ResolvedAnalysisOptions): {
   opening: ResultBasis;
   rise: ResultBasis;
 } {
-  const knee = `the first moment the smoothed coolant temperature (${o.smoothingSeconds} s moving average) stops rising: the rate over the next ${o.slopeWindowSeconds} s falls below ${Math.round(o.openingSlopeFraction * 100)} % of the rate over the ${o.slopeWindowSeconds} s before, after a rise of at least ${o.minWarmUpRiseK} K at ${o.minWarmUpRateKPerMin} K/min or more`;
+  const knee = `the first moment the smoothed coolant temperature (${o.smoothingSeconds} s moving average) levels off in a warm-up that starts below ${o.coldStartBelowC} °C and climbs at least ${o.minWarmUpRiseK} K: where the rate over the next ${o.slopeWindowSeconds} s falls below ${Math.round(o.openingSlopeFraction * 100)} % of the rate over the ${o.slopeWindowSeconds} s before, or, for a gradual levelling-off, where it slowed most before the climb fell under ${o.minWarmUpRateKPerMin} K/min. Never at or above ${o.overTemperatureC} °C, and not a stall after which the climb resumes within ${Math.round(o.resumeWindowSeconds / 60)} minutes`;
   return {
     warmUp: {
       method: `From the moment the rise leaves the coldest reading to ${knee}.`,
@@ -84,13 +85,33 @@ function basisTexts(o: ResolvedAnalysisOptions): {
     },
     opening: {
       method: `The smoothed temperature at ${knee}. Reads up to about half a kelvin low on a fast warm-up.`,
-      status: `${STATUS.heatpathMethod} Usual opening temperatures are ${TYPICAL_OPENING_C.min}–${TYPICAL_OPENING_C.max} °C (published trade textbook site; medium confidence); the thermostat's stamped figure overrides.`,
+      status: `${STATUS.heatpathMethod} Usual opening temperatures are 82–91 °C (published trade textbook site; medium confidence); map-controlled thermostats hold 100–110 °C at part load (common practice). The thermostat’s stamped figure overrides.`,
     },
     rise: {
       method: `Average: the rise from the coldest reading to the opening divided by the warm-up time. Fastest: the largest rise over ${o.slopeWindowSeconds} s during the warm-up, per minute.`,
       status: STATUS.heatpathMethod,
     },
   };
+}
+
+function noOpeningReason(
+  cause: NoOpeningCause,
+  o: ResolvedAnalysisOptions,
+  first: number,
+  last: number,
+): string {
+  switch (cause) {
+    case 'starts-warm':
+      return `The log starts with the engine already warm (${round(first, 1)} °C; a warm-up has to start below ${o.coldStartBelowC} °C), so the thermostat opening is not in this log.`;
+    case 'no-rise':
+      return `The coolant never rose ${o.minWarmUpRiseK} K above its coldest reading (it started at ${round(first, 1)} °C), so there is no warm-up in this log.`;
+    case 'over-threshold':
+      return `The coolant reached ${o.overTemperatureC} °C before its rise levelled off, so the log shows no clear opening; a level at or above ${o.overTemperatureC} °C is an over-temperature episode, not an opening.`;
+    case 'still-rising':
+      return `The coolant was still rising when the log ended (${round(last, 1)} °C): the thermostat had not opened yet.`;
+    case 'unclear':
+      return 'Heatpath found no clear point where the rise levels off; read the warm-up from the chart.';
+  }
 }
 
 function round(value: number, places: number): number {
@@ -104,71 +125,21 @@ export function analyseWarmUp(grid: UniformGrid, o: ResolvedAnalysisOptions): Wa
   const s = movingAverage(grid.values, halfWidthFor(o.smoothingSeconds, step));
   const n = s.length;
   const l = Math.max(1, Math.round(o.slopeWindowSeconds / step));
-  const window = l * step;
-  const minRate = o.minWarmUpRateKPerMin / 60;
+  const curve = { s, l, step };
+  const { at, before } = curveRates(curve);
+  const search = searchOpening(curve, o);
 
-  const prefixMin = new Float64Array(n);
-  let low = Number.POSITIVE_INFINITY;
-  for (let i = 0; i < n; i += 1) {
-    low = Math.min(low, s[i] ?? low);
-    prefixMin[i] = low;
-  }
-  const at = (i: number): number => s[i] ?? Number.NaN;
-  const before = (i: number): number => (at(i) - at(i - l)) / window;
-  const after = (i: number): number => (at(i + l) - at(i)) / window;
-  const flattens = (i: number): boolean => {
-    const b = before(i);
-    return (
-      b >= minRate &&
-      after(i) <= o.openingSlopeFraction * b &&
-      at(i) - (prefixMin[i] ?? 0) >= o.minWarmUpRiseK
-    );
-  };
-
-  let knee = -1;
-  for (let i = l; i < n - l; i += 1) {
-    if (!flattens(i)) {
-      continue;
-    }
-    let best = i;
-    for (let j = i; j <= Math.min(n - 1 - l, i + 2 * l); j += 1) {
-      if (before(j) - after(j) > before(best) - after(best)) {
-        best = j;
-      }
-    }
-    let highest = at(best);
-    for (let j = best; j <= Math.min(n - 1, best + 2 * l); j += 1) {
-      highest = Math.max(highest, at(j));
-    }
-    if (highest - at(best) <= o.resumeRiseK) {
-      knee = best;
-      break;
-    }
-    i = best + 2 * l;
-  }
-
-  if (knee === -1) {
-    let rise = 0;
-    for (let i = 0; i < n; i += 1) {
-      rise = Math.max(rise, at(i) - (prefixMin[i] ?? 0));
-    }
-    let reason: string;
-    if (rise < o.minWarmUpRiseK) {
-      reason = `The coolant never rose ${o.minWarmUpRiseK} K above its coldest reading (it started at ${round(at(0), 1)} °C), so there is no warm-up in this log.`;
-    } else if (n > l && before(n - 1) >= minRate) {
-      reason = `The coolant was still rising when the log ended (${round(at(n - 1), 1)} °C): the thermostat had not opened yet.`;
-    } else {
-      reason =
-        'Heatpath found no clear point where the rise flattens; read the warm-up from the chart.';
-    }
+  if (!search.found) {
+    const reason = noOpeningReason(search.cause, o, at(0), at(n - 1));
     return {
       warmUp: { found: false, reason, basis: basis.warmUp },
       opening: { found: false, reason, basis: basis.opening },
       riseRate: { found: false, reason, basis: basis.rise },
+      stalls: search.stalls,
     };
   }
 
-  const coldest = prefixMin[knee] ?? at(0);
+  const { knee, coldestC: coldest } = search;
   let leave = 0;
   for (let j = knee; j >= 0; j -= 1) {
     if (at(j) <= coldest + WITHIN_OF_COLDEST_K) {
@@ -190,12 +161,7 @@ export function analyseWarmUp(grid: UniformGrid, o: ResolvedAnalysisOptions): Wa
     maxRate = Math.max(maxRate, before(j));
   }
   const seconds = openingSeconds - startSeconds;
-  let compared: 'below' | 'within' | 'above' = 'within';
-  if (openingC < TYPICAL_OPENING_C.min) {
-    compared = 'below';
-  } else if (openingC > TYPICAL_OPENING_C.max) {
-    compared = 'above';
-  }
+  const comparison = compareOpening(openingC, o);
   return {
     warmUp: {
       found: true,
@@ -209,8 +175,10 @@ export function analyseWarmUp(grid: UniformGrid, o: ResolvedAnalysisOptions): Wa
       found: true,
       temperatureC: openingC,
       atSeconds: openingSeconds,
-      typicalRangeC: TYPICAL_OPENING_C,
-      comparedWithTypical: compared,
+      typicalRangeC: comparison.typicalRangeC,
+      comparedWithTypical: comparison.comparedWithTypical,
+      shape: search.shape,
+      note: comparison.note,
       basis: basis.opening,
     },
     riseRate: {
@@ -221,5 +189,6 @@ export function analyseWarmUp(grid: UniformGrid, o: ResolvedAnalysisOptions): Wa
       toSeconds: openingSeconds,
       basis: basis.rise,
     },
+    stalls: search.stalls,
   };
 }

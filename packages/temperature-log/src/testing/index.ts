@@ -8,6 +8,9 @@ export type {
   SyntheticLog,
   SyntheticLogSpec,
   SyntheticRegulation,
+  SyntheticSettle,
+  SyntheticShroud,
+  SyntheticSwitchOff,
   SyntheticTruth,
 } from './synthetic-log.js';
 export { logCsv } from './log-csv.js';

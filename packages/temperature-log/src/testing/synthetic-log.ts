@@ -14,7 +14,20 @@
 // peak, a hold, and a ramp down, placed so the coolant is at or above the threshold exactly from
 // `startSeconds` for `durationSeconds`. Seeded Gaussian noise and rounding (a sensor that
 // reports whole degrees) come last.
+// Scenario shapes (scenario-shapes.ts): a switchable pump's shroud releasing during the warm-up
+// (a dip, then a slower climb), a gradual settle after the opening, heat soak after switch-off
+// (with an engine-speed channel), and a logger started late so the log begins warm.
+import {
+  settleAt,
+  soakAt,
+  warmUpModel,
+  type SyntheticSettle,
+  type SyntheticShroud,
+  type SyntheticSwitchOff,
+} from './scenario-shapes.js';
 import { gaussian, seededRandom } from './seeded-random.js';
+
+export type { SyntheticSettle, SyntheticShroud, SyntheticSwitchOff } from './scenario-shapes.js';
 
 export interface SyntheticEpisode {
   /** When the coolant reaches the threshold, s. */
@@ -59,6 +72,16 @@ export interface SyntheticLogSpec {
   readonly fan?: 'follows-swings' | 'off' | 'none';
   /** Ambient channel at this constant temperature, °C; default absent. */
   readonly ambientC?: number;
+  /** A switchable pump whose shroud releases during the warm-up. */
+  readonly shroud?: SyntheticShroud;
+  /** A gradual climb after the opening before the coolant levels. */
+  readonly settle?: SyntheticSettle;
+  /** The engine is switched off and the coolant soaks up heat. */
+  readonly switchOff?: SyntheticSwitchOff;
+  /** Write an engine-speed channel (0 in the lead-in and after switch-off). Default: with a switch-off. */
+  readonly engineSpeed?: boolean;
+  /** The logger was started this long into the model (a log that begins warm); times restart at 0. */
+  readonly startLoggingAtSeconds?: number;
 }
 
 export interface SyntheticTruth {
@@ -72,6 +95,10 @@ export interface SyntheticTruth {
   readonly episodes: readonly { startSeconds: number; durationSeconds: number; peakC: number }[];
   readonly swing: { amplitudeK: number; periodSeconds: number } | null;
   readonly regulatedC: number;
+  /** The shroud's release, when the spec has one (times in the log's own seconds). */
+  readonly shroudRelease: { seconds: number; c: number } | null;
+  /** Whether the opening happens after the logger started. */
+  readonly openingInLog: boolean;
 }
 
 export interface SyntheticLog {
@@ -79,8 +106,12 @@ export interface SyntheticLog {
   readonly coolantC: number[];
   readonly fanDuty: (number | null)[] | null;
   readonly ambientC: (number | null)[] | null;
+  readonly engineSpeedRpm: (number | null)[] | null;
   readonly truth: SyntheticTruth;
 }
+
+// Engine speed while running in the synthetic logs, rpm: an invented steady part-load figure.
+const RUNNING_RPM = 1800;
 
 const RISE_FRACTION = 2 / 3;
 
@@ -106,7 +137,8 @@ export function syntheticLog(spec: SyntheticLogSpec): SyntheticLog {
   const interval = spec.sampleIntervalSeconds ?? 1;
   const leadIn = spec.leadInSeconds ?? 0;
   const threshold = spec.overTemperatureC ?? 110;
-  const { startC: t0, closedAsymptoteC: tInf, timeConstantSeconds: tau, openingC } = spec;
+  const skip = spec.startLoggingAtSeconds ?? 0;
+  const { startC: t0, closedAsymptoteC: tInf, openingC } = spec;
   if (!(tInf > openingC && openingC > t0)) {
     throw new Error('The model needs start < opening < closed-thermostat asymptote.');
   }
@@ -119,40 +151,40 @@ export function syntheticLog(spec: SyntheticLogSpec): SyntheticLog {
   const fanMode =
     spec.fan ??
     (regulation.shape === 'fan-sawtooth' && regulation.amplitudeK > 0 ? 'follows-swings' : 'none');
-  const openAfter = tau * Math.log((tInf - t0) / (tInf - openingC));
+  const warmUp = warmUpModel({
+    startC: t0,
+    closedAsymptoteC: tInf,
+    timeConstantSeconds: spec.timeConstantSeconds,
+    openingC,
+    ...(spec.shroud === undefined ? {} : { shroud: spec.shroud }),
+  });
+  const openAfter = warmUp.openAfter;
   const openingSeconds = leadIn + openAfter;
   const episodes = (spec.episodes ?? []).map((e) => ({ ...e, rate: (e.rampKPerMin ?? 3) / 60 }));
   const lowestRegulated = openingC + regulation.offsetK - regulation.amplitudeK;
+  const settleRise = spec.settle?.riseK ?? 0;
   for (const e of episodes) {
     if (e.startSeconds - (threshold - lowestRegulated) / e.rate < openingSeconds) {
       throw new Error('An episode must start its ramp after the thermostat has opened.');
     }
-    if (lowestRegulated + 2 * regulation.amplitudeK >= threshold) {
+    if (lowestRegulated + 2 * regulation.amplitudeK + settleRise >= threshold) {
       throw new Error('The regulated level must stay below the over-temperature threshold.');
     }
   }
 
-  const random = seededRandom(spec.seed);
-  const times: number[] = [];
-  const coolantC: number[] = [];
-  const fanDuty: (number | null)[] = [];
-  const ambientC: (number | null)[] = [];
-  const count = Math.floor(spec.durationSeconds / interval) + 1;
-  for (let k = 0; k < count; k += 1) {
-    const t = k * interval;
-    let value: number;
-    let fanOn = false;
+  /** The noiseless model with the engine running, and whether the fan is on. */
+  const runningAt = (t: number): { value: number; fanOn: boolean } => {
     if (t < leadIn) {
-      value = t0;
-    } else if (t < openingSeconds) {
-      value = tInf - (tInf - t0) * Math.exp(-(t - leadIn) / tau);
-    } else {
-      const swing = swingAt(t - openingSeconds, regulation);
-      value = openingC + regulation.offsetK + swing.value;
-      fanOn = swing.falling;
+      return { value: t0, fanOn: false };
     }
+    if (t < openingSeconds) {
+      return { value: warmUp.valueAt(t - leadIn), fanOn: false };
+    }
+    const u = t - openingSeconds;
+    const swing = swingAt(u, regulation);
+    let value = openingC + regulation.offsetK + settleAt(spec.settle, u) + swing.value;
     // Episodes are laid over the regulated part only; their ramps start from it.
-    for (const e of t < openingSeconds ? [] : episodes) {
+    for (const e of episodes) {
       const ramp = Math.min(
         e.peakC,
         threshold + e.rate * (t - e.startSeconds),
@@ -160,14 +192,37 @@ export function syntheticLog(spec: SyntheticLogSpec): SyntheticLog {
       );
       value = Math.max(value, ramp);
     }
-    value += gaussian(random, spec.noiseK ?? 0);
+    return { value, fanOn: swing.falling };
+  };
+  const switchOff = spec.switchOff;
+  const atSwitchOff = switchOff === undefined ? 0 : runningAt(switchOff.atSeconds).value;
+  const withRpm = spec.engineSpeed ?? switchOff !== undefined;
+
+  const random = seededRandom(spec.seed);
+  const times: number[] = [];
+  const coolantC: number[] = [];
+  const fanDuty: (number | null)[] = [];
+  const ambientC: (number | null)[] = [];
+  const engineSpeedRpm: (number | null)[] = [];
+  const count = Math.floor(spec.durationSeconds / interval) + 1;
+  for (let k = 0; k < count; k += 1) {
+    const t = k * interval;
+    const stopped = switchOff !== undefined && t >= switchOff.atSeconds;
+    const model = stopped
+      ? { value: atSwitchOff + soakAt(switchOff, t - switchOff.atSeconds), fanOn: false }
+      : runningAt(t);
+    let value = model.value + gaussian(random, spec.noiseK ?? 0);
     if (spec.quantiseK !== undefined && spec.quantiseK > 0) {
       value = Math.round(value / spec.quantiseK) * spec.quantiseK;
     }
-    times.push(t);
+    if (t < skip) {
+      continue; // The logger was not running yet (the noise is still drawn, so seeds agree).
+    }
+    times.push(t - skip);
     coolantC.push(value);
-    fanDuty.push(fanMode === 'follows-swings' ? (fanOn ? 100 : 0) : 0);
+    fanDuty.push(fanMode === 'follows-swings' ? (model.fanOn ? 100 : 0) : 0);
     ambientC.push(spec.ambientC ?? null);
+    engineSpeedRpm.push(stopped || t < leadIn ? 0 : RUNNING_RPM);
   }
 
   return {
@@ -175,15 +230,16 @@ export function syntheticLog(spec: SyntheticLogSpec): SyntheticLog {
     coolantC,
     fanDuty: fanMode === 'none' ? null : fanDuty,
     ambientC: spec.ambientC === undefined ? null : ambientC,
+    engineSpeedRpm: withRpm ? engineSpeedRpm : null,
     truth: {
-      warmUpStartSeconds: leadIn,
-      openingSeconds,
+      warmUpStartSeconds: leadIn - skip,
+      openingSeconds: openingSeconds - skip,
       openingC,
       warmUpSeconds: openAfter,
       averageRiseKPerMin: ((openingC - t0) / openAfter) * 60,
-      initialRiseKPerMin: ((tInf - t0) / tau) * 60,
+      initialRiseKPerMin: ((tInf - t0) / spec.timeConstantSeconds) * 60,
       episodes: episodes.map((e) => ({
-        startSeconds: e.startSeconds,
+        startSeconds: e.startSeconds - skip,
         durationSeconds: e.durationSeconds,
         peakC: Math.min(e.peakC, threshold + (e.rate * e.durationSeconds) / 2),
       })),
@@ -191,7 +247,12 @@ export function syntheticLog(spec: SyntheticLogSpec): SyntheticLog {
         regulation.amplitudeK > 0
           ? { amplitudeK: 2 * regulation.amplitudeK, periodSeconds: regulation.periodSeconds }
           : null,
-      regulatedC: openingC + regulation.offsetK,
+      regulatedC: openingC + regulation.offsetK + settleRise,
+      shroudRelease:
+        warmUp.release === null
+          ? null
+          : { seconds: leadIn + warmUp.release.after - skip, c: warmUp.release.c },
+      openingInLog: openingSeconds >= skip,
     },
   };
 }
