@@ -260,7 +260,7 @@ export const slowWarmUpDefinition = {
       kind: 'measurement',
       title: 'Is the temperature sensor telling the truth?',
       prompt:
-        'Start from cold and idle with the scan tool connected. When live data shows 60–75 °C (or the highest it gets after 20 minutes), read the sensor’s housing (thermostat housing or head outlet, next to the sensor) with a contact probe, at the same moment as the live-data figure. Enter both.',
+        'Start from cold (the next morning, or once the engine has cooled well below 60 °C) and idle with the scan tool connected. When live data shows 60–75 °C (or the highest it gets after 20 minutes), read the sensor’s housing (thermostat housing or head outlet, next to the sensor) with a contact probe, at the same moment as the live-data figure. Enter both.',
       tools: ['Scan tool', 'Contact thermometer (or IR thermometer on a dull, painted spot)'],
       hazards: ['hot-pressurised-coolant', 'fan', 'hot-surface'],
       cautions: [cautions.keepClosedWhenHot, cautions.fan, cautions.hotSurface],
@@ -398,7 +398,7 @@ export const slowWarmUpDefinition = {
       cautions: [cautions.scanToolActuation, cautions.hotSurface],
       estimatedMinutes: 20,
       notes:
-        'The shroud is pushed over the impeller only while the valve is energised; a valve that is never energised gives a pump that never covers: a slower warm-up, no overheating (cooling-diagnosis brief, common practice). Check the command and the circuit before any test that depends on them, and long before a belt-drive job.',
+        'The shroud is pushed over the impeller only while the valve is energised; a valve that is never energised gives a pump that never covers: a slower warm-up, no overheating (cooling-diagnosis brief, common practice). Check the command and the circuit before the release test, which depends on them, and long before a belt-drive job: if they cannot be checked, the walk stops at “needs further checks” rather than guess at the pump.',
       choices: [
         {
           id: 'commanded-and-powered',
@@ -418,7 +418,8 @@ export const slowWarmUpDefinition = {
         {
           id: 'could-not-check',
           label: 'Could not check the command or the circuit',
-          to: 'shroud-actuation-test',
+          to: 'needs-further-checks',
+          hint: 'Without knowing the valve is energised, a release test cannot tell a stuck shroud from a valve that is never switched.',
         },
       ],
     },

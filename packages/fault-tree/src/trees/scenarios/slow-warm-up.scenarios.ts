@@ -406,10 +406,11 @@ export const slowWarmUpScenarios = scenarioBank({
       },
     },
     {
-      name: 'No live-data command shown: unplug release test finds no change',
+      name: 'Leaking valve seat: powered and clicking, but the pressure bleeds away',
       story:
-        'A 2015 Quenby 1.2 turbo hatchback; the workshop scan tool cannot show the valve command. The release test by unplugging the valve shows the same 5 K per three minutes before and after: the shroud never holds.',
+        'A 2015 Quenby 1.2 turbo hatchback with a switchable pump; 30 minutes to warm in mild weather. The valve is commanded, supplied and clicks, but its seat leaks so the shroud is never pushed out: the release test shows the same 5 K per three minutes before and after.',
       expect: 'shroud-never-deploys',
+      mustNotReach: ['shroud-valve-circuit-fault'],
       answers: {
         ...quietStart(),
         ...coldCheck(8, 8),
@@ -417,7 +418,7 @@ export const slowWarmUpScenarios = scenarioBank({
         ...sensorCheck(64, 65),
         ...inletHose(25),
         'pump-has-shroud': 'switchable',
-        'shroud-valve-check': 'could-not-check',
+        'shroud-valve-check': 'commanded-and-powered',
         ...releaseTest(34, 39, 44),
       },
     },
@@ -742,6 +743,22 @@ export const slowWarmUpScenarios = scenarioBank({
         ...inletHose(27),
         'pump-has-shroud': 'switchable',
         'shroud-valve-check': 'not-commanded',
+      },
+    },
+    {
+      name: 'Valve circuit could not be checked: no release test, no pump',
+      story:
+        'A 2016 Corvane 1.4 turbo estate with a switchable pump, slow to warm. The scan tool shows no valve command and there is no wiring diagram for the valve today. A release test now could not tell a stuck shroud from a valve never switched, so the walk stops short of the pump.',
+      expect: 'needs-further-checks',
+      mustNotReach: ['shroud-never-deploys'],
+      answers: {
+        ...quietStart(),
+        ...coldCheck(11, 10),
+        ...warmUp(28, 90, 10),
+        ...sensorCheck(66, 67),
+        ...inletHose(27),
+        'pump-has-shroud': 'switchable',
+        'shroud-valve-check': 'could-not-check',
       },
     },
     {
