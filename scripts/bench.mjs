@@ -1,5 +1,5 @@
-// `npm run bench:step-save`: a fresh benchmark cluster in .data/bench-pg (normal durability,
-// unlike the test cluster), then the named benchmark with DATABASE_URL pointing at it.
+// `npm run bench:step-save`: a fresh benchmark cluster in a private temporary directory (normal
+// durability, unlike the test cluster), then the named benchmark with DATABASE_URL pointing at it.
 import { join } from 'node:path';
 import { startCluster } from './lib/postgres.mjs';
 import { installDependencies } from './lib/install.mjs';
@@ -19,7 +19,7 @@ async function main() {
     dataDir: join(root, '.data', 'bench-pg'),
     port: Number(process.env.PGPORT_BENCH ?? 54349),
     database: 'heatpath_bench',
-    fresh: true,
+    scratch: true,
   });
   try {
     await mustRun(

@@ -65,8 +65,30 @@ async function vitest(stage, projects, env = {}) {
 function freePort(start) {
   return (async () => {
     for (let p = start; p < start + 200; p += 1) if (await portIsFree(p)) return p;
-    throw new BootstrapError(`No free port found near ${start}: free one or set E2E_PORT.`);
+    throw new BootstrapError(`No free port found near ${start}: free one or choose the port.`);
   })();
+}
+
+// A throw-away cluster in a new private directory on PGPORT_TEST, or on the first free port
+// from 54339 when that is not set, so two runs on one machine never break each other. Another
+// run can take the port between the check and the start: then the next free one is tried.
+async function startTestCluster() {
+  const fixed = process.env.PGPORT_TEST ? Number(process.env.PGPORT_TEST) : null;
+  let port = fixed ?? (await freePort(54339));
+  for (let attempt = 1; ; attempt += 1) {
+    try {
+      return await startCluster({
+        dataDir: join(root, '.data', `test-pg-${port}`),
+        port,
+        database: 'heatpath_test',
+        scratch: true,
+        fast: true,
+      });
+    } catch (error) {
+      if (fixed || attempt >= 5 || !(error instanceof BootstrapError)) throw error;
+      port = await freePort(port + 1);
+    }
+  }
 }
 
 async function main() {
@@ -75,15 +97,7 @@ async function main() {
   const chromium = wanted('e2e') ? await ensureChromium() : null;
   if (wanted('unit')) await ensureIapws();
 
-  // Data directory named by port, so two runs on different ports never share a cluster.
-  const testPort = Number(process.env.PGPORT_TEST ?? 54339);
-  const db = await startCluster({
-    dataDir: join(root, '.data', `test-pg-${testPort}`),
-    port: testPort,
-    database: 'heatpath_test',
-    fresh: true,
-    fast: true,
-  });
+  const db = await startTestCluster();
   process.once('exit', () => {
     db.stop();
     db.remove();

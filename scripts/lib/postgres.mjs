@@ -1,20 +1,24 @@
 // A private PostgreSQL cluster for Heatpath: Debian's server binaries, a data directory inside
 // the project, bound to 127.0.0.1 on its own port. The binaries refuse to run as root, so as root
-// they run as the `postgres` OS user on a directory that user owns.
+// they run as the `postgres` OS user on a directory that user owns. When that user cannot enter
+// the project (a clone in root's home, mode 700), the cluster lives in a private directory of its
+// own under /var/lib/heatpath instead; the person's folders are never opened up to it.
 import {
   chmodSync,
   chownSync,
   existsSync,
   mkdirSync,
+  mkdtempSync,
   readFileSync,
   readdirSync,
   rmSync,
   statfsSync,
   writeFileSync,
 } from 'node:fs';
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import { createServer } from 'node:net';
-import { join } from 'node:path';
+import { tmpdir } from 'node:os';
+import { basename, dirname, join } from 'node:path';
 import { capture, isRoot } from './run.mjs';
 import { aptInstall } from './install.mjs';
 import { BootstrapError, ok, step } from './log.mjs';
@@ -51,6 +55,47 @@ function postgresIds() {
   return { uid: Number(r.stdout.trim()), gid: Number(g.stdout.trim()) };
 }
 
+/** Whether the postgres OS user can enter `dir` (and so every folder above it). */
+function postgresCanEnter(dir) {
+  return capture('runuser', ['-u', 'postgres', '--', 'test', '-x', dir]).status === 0;
+}
+
+/** A directory only the postgres OS user (and root) can enter: mode 700, owned by postgres. */
+function privateDir(path, ids) {
+  mkdirSync(path, { recursive: true, mode: 0o700 });
+  chmodSync(path, 0o700);
+  if (ids) chownSync(path, ids.uid, ids.gid);
+  return path;
+}
+
+/**
+ * Where the cluster's files go. `dataDir` as asked, unless running as root and the postgres user
+ * cannot reach it: then a private directory under /var/lib/heatpath named after the clone and the
+ * data directory (so each clone and each cluster keeps its own), or a fresh temporary one for a
+ * throw-away cluster. A cluster already made at `dataDir` keeps its place so its data stays.
+ */
+function placeCluster(dataDir, scratch) {
+  const ids = isRoot() ? postgresIds() : null;
+  const inPlace = () => ({ dataDir, home: null, ids });
+  if (scratch) {
+    // A new directory per run: two `npm test` runs on one machine never share files.
+    const home = mkdtempSync(join(tmpdir(), `heatpath-${basename(dataDir)}-`));
+    privateDir(home, ids);
+    return { dataDir: join(home, 'data'), home, ids };
+  }
+  mkdirSync(dirname(dataDir), { recursive: true });
+  if (!ids || existsSync(join(dataDir, 'PG_VERSION')) || postgresCanEnter(dirname(dataDir)))
+    return inPlace();
+  // Short enough that the socket path stays under the kernel's 107-byte limit.
+  const slug = basename(dirname(dirname(dataDir)))
+    .replace(/[^A-Za-z0-9_.-]/g, '_')
+    .slice(0, 32);
+  const hash = createHash('sha256').update(dataDir).digest('hex').slice(0, 12);
+  mkdirSync('/var/lib/heatpath', { recursive: true, mode: 0o755 });
+  const home = privateDir(join('/var/lib/heatpath', `${slug}-${hash}`), ids);
+  return { dataDir: join(home, basename(dataDir)), home, ids };
+}
+
 /** Run a PostgreSQL binary as the right OS user. */
 function pgRun(bin, tool, args, options = {}) {
   const cmd = join(bin, tool);
@@ -84,13 +129,20 @@ function ensureDiskSpace(dir) {
  * Create the cluster on first use (or afresh when `fresh`), start it unless already running,
  * and make sure `database` exists. Returns connection settings and a stop function.
  */
-export async function startCluster({ dataDir, port, database, fresh = false, fast = false }) {
+export async function startCluster({
+  dataDir: wanted,
+  port,
+  database,
+  fresh = false,
+  fast = false,
+  scratch = false,
+}) {
   const bin = await ensurePostgresBinaries();
-  const parent = join(dataDir, '..');
-  mkdirSync(parent, { recursive: true });
+  const { dataDir, home, ids } = placeCluster(wanted, scratch);
+  const parent = dirname(dataDir);
   ensureDiskSpace(parent);
   const passwordFile = `${dataDir}.password`;
-  const socketDir = `/tmp/heatpath-pg-${port}`;
+  const socketDir = home ? join(home, 'socket') : `/tmp/heatpath-pg-${port}`;
 
   if (fresh) {
     if (existsSync(join(dataDir, 'postmaster.pid')))
@@ -99,13 +151,14 @@ export async function startCluster({ dataDir, port, database, fresh = false, fas
     rmSync(passwordFile, { force: true });
   }
 
-  const ids = isRoot() ? postgresIds() : null;
   const giveToPostgres = (path) => {
     if (ids) chownSync(path, ids.uid, ids.gid);
   };
 
   if (!existsSync(join(dataDir, 'PG_VERSION'))) {
     step(`Creating a private PostgreSQL cluster in ${dataDir.replace(`${process.cwd()}/`, '')}…`);
+    if (home && !scratch)
+      step(`(outside the project: the postgres OS user cannot enter ${dirname(wanted)})`);
     rmSync(dataDir, { recursive: true, force: true });
     mkdirSync(dataDir, { recursive: true, mode: 0o700 });
     giveToPostgres(dataDir);
@@ -217,7 +270,12 @@ export async function startCluster({ dataDir, port, database, fresh = false, fas
       if (!startedHere) return;
       pgRun(bin, 'pg_ctl', ['-D', dataDir, '-m', 'fast', '-w', 'stop']);
     },
+    dataDir,
     remove() {
+      if (home) {
+        rmSync(home, { recursive: true, force: true });
+        return;
+      }
       rmSync(dataDir, { recursive: true, force: true });
       rmSync(passwordFile, { force: true });
       rmSync(`${dataDir}.log`, { force: true });
