@@ -15,7 +15,12 @@ initModels(sequelize);
 const app = createApp({
   config: {
     ...config,
-    signInLimits: { perAccount: 100_000, perAddress: 100_000, windowMinutes: 1 },
+    signInLimits: {
+      perAccount: 100_000,
+      perDevice: 100_000,
+      perAddress: 100_000,
+      windowMinutes: 1,
+    },
   },
   sequelize,
   logger: createLogger('silent'),

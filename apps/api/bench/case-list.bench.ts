@@ -81,7 +81,10 @@ await sequelize.query('ANALYZE');
 console.log(`seeded ${2 * perWorkshop} cases in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
 
 const app = createApp({
-  config: { ...config, signInLimits: { perAccount: 1e6, perAddress: 1e6, windowMinutes: 1 } },
+  config: {
+    ...config,
+    signInLimits: { perAccount: 1e6, perDevice: 1e6, perAddress: 1e6, windowMinutes: 1 },
+  },
   sequelize,
   logger: createLogger('silent'),
 });

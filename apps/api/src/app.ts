@@ -9,6 +9,9 @@ import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import { systemClock } from './lib/clock';
+import type { Clock } from './lib/clock';
+import { createDeviceSigner } from './lib/device-token';
 import { createSessionSigner } from './lib/session-token';
 import { authenticate } from './middlewares/authenticate';
 import { crossSiteGuard } from './middlewares/cross-site-guard';
@@ -34,12 +37,16 @@ export interface AppDeps {
   logger: Logger;
   store?: FileStore;
   mail?: MailContext;
+  /** "Now" for sessions and sign-in limits; tests move it on instead of sleeping. */
+  clock?: Clock;
 }
 
 export function createApp(deps: AppDeps): express.Express {
   const { config, sequelize, logger } = deps;
   const store = deps.store ?? createDiskFileStore(config.uploadDir);
-  const signer = createSessionSigner(config.sessionSecret, config.sessionTtlHours);
+  const clock = deps.clock ?? systemClock;
+  const signer = createSessionSigner(config.sessionSecret, config.sessionTtlHours, clock);
+  const devices = createDeviceSigner(config.sessionSecret, config.signInDeviceDays, clock);
   const mail =
     deps.mail ??
     createMailContext({ publicUrl: config.mail.publicUrl, secret: config.sessionSecret });
@@ -56,6 +63,7 @@ export function createApp(deps: AppDeps): express.Express {
           'upgrade-insecure-requests': config.cookieSecure ? [] : null,
         },
       },
+      // Secure cookies mean Heatpath is served over HTTPS: browsers should never try plain http.
       strictTransportSecurity: config.cookieSecure,
     }),
   );
@@ -70,8 +78,8 @@ export function createApp(deps: AppDeps): express.Express {
     next();
   });
   api.use('/health', healthRouter({ sequelize }));
-  api.use('/auth', authRouter({ config, sequelize, signer, mail }));
-  api.use(authenticate(signer));
+  api.use('/auth', authRouter({ config, sequelize, signer, devices, clock, mail }));
+  api.use(authenticate(signer, clock));
   api.use('/me', meRouter());
   api.use('/staff', staffRouter({ config, mail }));
   api.use('/vehicles', vehiclesRouter());

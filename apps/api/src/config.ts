@@ -26,15 +26,18 @@ const envSchema = z
       .positive()
       .max(24 * 30)
       .default(12),
-    COOKIE_SECURE: bool.default(false),
+    // Unset: Secure cookies and HSTS in production. Only a plain-http loopback start sets false.
+    COOKIE_SECURE: bool.optional(),
     TRUST_PROXY: bool.default(false),
     HEATPATH_DEMO: bool.default(false),
     WEB_DIST: z.string().optional(),
     UPLOAD_DIR: z.string().default('.data/uploads'),
     BODY_LIMIT: z.string().default('200kb'),
     SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
+    SIGN_IN_LIMIT_PER_DEVICE: z.coerce.number().int().min(1).default(8),
     SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(40),
     SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+    SIGN_IN_DEVICE_DAYS: z.coerce.number().int().min(1).max(730).default(180),
     // E-mail: any SMTP server. npm start runs a local fake on loopback and points these at it.
     SMTP_HOST: z.string().min(1).default('127.0.0.1'),
     SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
@@ -107,7 +110,7 @@ const envSchema = z
       dbPoolMax: env.DB_POOL_MAX,
       sessionSecret: secret,
       sessionTtlHours: env.SESSION_TTL_HOURS,
-      cookieSecure: env.COOKIE_SECURE,
+      cookieSecure: env.COOKIE_SECURE ?? env.NODE_ENV === 'production',
       trustProxy: env.TRUST_PROXY,
       demo: env.HEATPATH_DEMO,
       webDist: env.WEB_DIST,
@@ -115,9 +118,11 @@ const envSchema = z
       bodyLimit: env.BODY_LIMIT,
       signInLimits: {
         perAccount: env.SIGN_IN_LIMIT_PER_ACCOUNT,
+        perDevice: env.SIGN_IN_LIMIT_PER_DEVICE,
         perAddress: env.SIGN_IN_LIMIT_PER_ADDRESS,
         windowMinutes: env.SIGN_IN_WINDOW_MINUTES,
       },
+      signInDeviceDays: env.SIGN_IN_DEVICE_DAYS,
       logLevel: env.LOG_LEVEL,
       mail: {
         host: env.SMTP_HOST,

@@ -41,12 +41,18 @@ export const outboxStatusLabels: Record<OutboxStatus, string> = {
   failed: 'Gave up',
 };
 
-export const outboxKinds = ['repair-order', 'invitation', 'password-reset'] as const;
+export const outboxKinds = [
+  'repair-order',
+  'invitation',
+  'password-reset',
+  'sign-in-unlock',
+] as const;
 export type OutboxKind = (typeof outboxKinds)[number];
 export const outboxKindLabels: Record<OutboxKind, string> = {
   'repair-order': 'Repair order',
   invitation: 'Staff invitation',
   'password-reset': 'Password reset',
+  'sign-in-unlock': 'Sign-in unlock',
 };
 
 export const outboxMessageSchema = z.object({
@@ -122,3 +128,8 @@ export type AccountTokenInfo = z.infer<typeof accountTokenInfoSchema>;
 
 export const setPasswordRequestSchema = z.object({ token: tokenSchema, password: passwordSchema });
 export type SetPasswordRequest = z.infer<typeof setPasswordRequestSchema>;
+
+/** The link from a "sign-in was paused" e-mail. */
+export const unlockSignInRequestSchema = z.object({ token: tokenSchema });
+export type UnlockSignInRequest = z.infer<typeof unlockSignInRequestSchema>;
+export const unlockSignInResponseSchema = z.object({ message: z.string() });

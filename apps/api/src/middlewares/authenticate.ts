@@ -1,7 +1,9 @@
-// Reads the session cookie, loads the person afresh and puts the actor on res.locals.
+// Reads the session cookie, checks its session row and loads the person afresh, and puts the
+// actor on res.locals.
 import type { RequestHandler, Response } from 'express';
 import type { User } from '../db/models/index';
 import { AppError } from '../errors';
+import type { Clock } from '../lib/clock';
 import { sessionCookieName } from '../lib/session-token';
 import type { SessionSigner } from '../lib/session-token';
 import type { Actor } from '../policies/permissions';
@@ -12,12 +14,12 @@ export interface AuthLocals {
   user: User;
 }
 
-export function authenticate(signer: SessionSigner): RequestHandler {
+export function authenticate(signer: SessionSigner, clock: Clock): RequestHandler {
   return async (req, res, next) => {
     const cookies = req.cookies as Record<string, string | undefined>;
     const claims = await signer.verify(cookies[sessionCookieName]);
     if (!claims) throw new AppError('unauthenticated', 'Please sign in to continue.');
-    const user = await findSessionUser(claims);
+    const user = await findSessionUser({ ...claims, now: clock() });
     if (!user)
       throw new AppError('unauthenticated', 'Your session has ended. Please sign in again.');
     res.locals.user = user;

@@ -7,6 +7,7 @@ import { loadConfig } from '../config';
 import type { Config } from '../config';
 import { initModels } from '../db/models/index';
 import { createSequelize } from '../db/sequelize';
+import type { Clock } from '../lib/clock';
 import { createLogger } from '../lib/logger';
 
 let shared: Sequelize | null = null;
@@ -30,14 +31,18 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
   const base = loadConfig({ ...process.env, NODE_ENV: 'test', LOG_LEVEL: 'silent' });
   return {
     ...base,
-    signInLimits: { perAccount: 1000, perAddress: 100_000, windowMinutes: 15 },
+    signInLimits: { perAccount: 1000, perDevice: 1000, perAddress: 100_000, windowMinutes: 15 },
     ...overrides,
   };
 }
 
-export function testApp(overrides: Partial<Config> = {}, sequelize: Sequelize = testSequelize()) {
+export function testApp(
+  overrides: Partial<Config> = {},
+  sequelize: Sequelize = testSequelize(),
+  clock?: Clock,
+) {
   const config = testConfig(overrides);
-  return createApp({ config, sequelize, logger: createLogger('silent') });
+  return createApp({ config, sequelize, logger: createLogger('silent'), clock });
 }
 
 export const clientHeaders = { 'X-Heatpath-Client': 'web' } as const;

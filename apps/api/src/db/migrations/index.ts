@@ -7,6 +7,7 @@ import * as m0003 from './0003-tree-authoring';
 import * as m0004 from './0004-repair-orders-and-mail';
 import * as m0005 from './0005-temperature-logs';
 import * as m0006 from './0006-training-casebook';
+import * as m0007 from './0007-sessions';
 
 export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0001-foundation', ...m0001 },
@@ -15,4 +16,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0004-repair-orders-and-mail', ...m0004 },
   { name: '0005-temperature-logs', ...m0005 },
   { name: '0006-training-casebook', ...m0006 },
+  { name: '0007-sessions', ...m0007 },
 ].map(({ name, up, down }) => ({ name, up, down }));

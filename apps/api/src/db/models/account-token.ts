@@ -1,5 +1,5 @@
-// A single-use, expiring token behind an invitation or a password reset. Only its SHA-256 is
-// stored; the token itself exists in the e-mail alone.
+// A single-use, expiring token behind an invitation, a password reset or a sign-in unlock. Only
+// its SHA-256 is stored; the token itself exists in the e-mail alone.
 import { DataTypes, Model } from 'sequelize';
 import type {
   CreationOptional,
@@ -12,7 +12,7 @@ import type {
 import type { User } from './user';
 import type { Workshop } from './workshop';
 
-export const accountTokenPurposes = ['invitation', 'password-reset'] as const;
+export const accountTokenPurposes = ['invitation', 'password-reset', 'sign-in-unlock'] as const;
 export type AccountTokenPurpose = (typeof accountTokenPurposes)[number];
 
 export class AccountToken extends Model<

@@ -10,6 +10,8 @@ import { FindingsRevision } from './findings-revision';
 import { OutboxAttachment } from './outbox-attachment';
 import { OutboxMessage } from './outbox-message';
 import { RegressionCase } from './regression-case';
+import { Session } from './session';
+import { SignInDevice } from './sign-in-device';
 import { TemperatureLog } from './temperature-log';
 import { TemperatureLogMapping } from './temperature-log-mapping';
 import { TemperatureLogUpload } from './temperature-log-upload';
@@ -36,6 +38,8 @@ export {
   OutboxAttachment,
   OutboxMessage,
   RegressionCase,
+  Session,
+  SignInDevice,
   TemperatureLog,
   TemperatureLogMapping,
   TemperatureLogUpload,
@@ -69,6 +73,8 @@ export function initModels(sequelize: Sequelize): void {
     OutboxMessage,
     OutboxAttachment,
     AccountToken,
+    Session,
+    SignInDevice,
     TemperatureLogMapping,
     TemperatureLogUpload,
     TemperatureLog,
@@ -127,6 +133,9 @@ export function initModels(sequelize: Sequelize): void {
   AccountToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   AccountToken.belongsTo(Workshop, fk('workshopId'));
   AccountToken.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  Session.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  Session.belongsTo(Workshop, fk('workshopId'));
+  SignInDevice.belongsTo(Workshop, fk('workshopId'));
   TemperatureLogMapping.belongsTo(Workshop, fk('workshopId'));
   TemperatureLogMapping.belongsTo(User, { foreignKey: 'confirmedBy', as: 'confirmer' });
   TemperatureLogUpload.belongsTo(DiagnosticCase, { foreignKey: 'caseId', as: 'case' });

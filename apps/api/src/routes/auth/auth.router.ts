@@ -1,17 +1,29 @@
 // POST /api/auth/sign-in, POST /api/auth/sign-out; "forgot password" (POST
-// /api/auth/password-reset) and the page an invitation or reset link opens (POST
-// /api/auth/set-password/check, POST /api/auth/set-password).
+// /api/auth/password-reset), the page an invitation or reset link opens (POST
+// /api/auth/set-password/check, POST /api/auth/set-password) and the link that lifts a pause on
+// sign-in (POST /api/auth/unlock).
+import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
-import type { Request } from 'express';
+import type { Request, Response } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Sequelize } from 'sequelize';
-import type { SetPasswordRequest, SignInRequest } from '@heatpath/contracts';
+import { unlockSignInRequestSchema } from '@heatpath/contracts';
+import type { SetPasswordRequest, SignInRequest, UnlockSignInRequest } from '@heatpath/contracts';
 import type { Config } from '../../config';
+import type { User } from '../../db/models/index';
 import { AppError } from '../../errors';
+import type { Clock } from '../../lib/clock';
+import { deviceCookieName } from '../../lib/device-token';
+import type { DeviceSigner } from '../../lib/device-token';
 import { PostgresRateLimitStore } from '../../lib/postgres-rate-limit-store';
 import { sessionCookieName } from '../../lib/session-token';
 import type { SessionSigner } from '../../lib/session-token';
 import type { MailContext } from '../../lib/mail/mail-context';
+import { unlockSignIn } from '../../services/accounts/unlock-sign-in';
+import { endSession } from '../../services/auth/end-session';
+import { rememberDevice } from '../../services/auth/remember-device';
+import { SignInPaused } from '../../services/auth/sign-in-user';
+import { startSession } from '../../services/auth/start-session';
 import { findAccountToken } from '../../services/accounts/find-account-token';
 import { requestPasswordReset } from '../../services/accounts/request-password-reset';
 import { setPasswordWithToken } from '../../services/accounts/set-password-with-token';
@@ -40,6 +52,8 @@ const tooManyResets = new AppError(
   'Too many requests for a new password. Wait a few minutes and try again.',
 );
 
+export const signInUnlockedMessage = 'The pause is lifted: you can sign in from any browser again.';
+
 /** The one answer to "forgot password", whether or not an account uses the address. */
 export const passwordResetAnswer = (ttlMinutes: number) =>
   `If an active account uses that address, a link to set a new password is on its way. It works once, for ${ttlMinutes} minutes.`;
@@ -48,31 +62,13 @@ export function authRouter(deps: {
   config: Config;
   sequelize: Sequelize;
   signer: SessionSigner;
+  devices: DeviceSigner;
+  clock: Clock;
   mail: MailContext;
 }) {
-  const { config, sequelize, signer } = deps;
+  const { config, sequelize, signer, devices, clock } = deps;
   const windowMs = config.signInLimits.windowMinutes * 60_000;
   const handler = (_req: Request, _res: unknown, next: (error: unknown) => void) => next(tooMany);
-  const perAddress = rateLimit({
-    windowMs,
-    limit: config.signInLimits.perAddress,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    store: new PostgresRateLimitStore(sequelize, 'sign-in-address'),
-    keyGenerator: (req) => ipKeyGenerator(req.ip ?? '0.0.0.0'),
-    handler,
-  });
-  // Failed attempts per account: a correct password clears nothing but does not count.
-  const perAccount = rateLimit({
-    windowMs,
-    limit: config.signInLimits.perAccount,
-    standardHeaders: false,
-    legacyHeaders: false,
-    skipSuccessfulRequests: true,
-    store: new PostgresRateLimitStore(sequelize, 'sign-in-account'),
-    keyGenerator: emailOf,
-    handler,
-  });
 
   const router = Router();
   const cookieOptions = {
@@ -81,20 +77,56 @@ export function authRouter(deps: {
     secure: config.cookieSecure,
     path: '/',
   };
+  // The device cookie is only ever read by sign-in, so it goes nowhere else.
+  const deviceCookieOptions = {
+    httpOnly: true,
+    sameSite: 'strict' as const,
+    secure: config.cookieSecure,
+    path: '/api/auth',
+    maxAge: devices.ttlMs,
+  };
+  const cookiesOf = (req: Request) => req.cookies as Record<string, string | undefined>;
 
-  router.post(
-    '/sign-in',
-    perAddress,
-    perAccount,
-    validate('body', signInRequestSchema),
-    async (_req, res) => {
-      const input = res.locals.body as SignInRequest;
-      const user = await signInUser(input);
-      const token = await signer.sign({ userId: user.id, workshopId: user.workshopId });
-      res.cookie(sessionCookieName, token, { ...cookieOptions, maxAge: signer.ttlMs });
+  /** Starts a session row and hands the browser its cookies. */
+  async function signIn(res: Response, user: User, deviceId: string, now: Date) {
+    const session = await startSession({
+      userId: user.id,
+      workshopId: user.workshopId,
+      ttlMs: signer.ttlMs,
+      now,
+    });
+    const token = await signer.sign(
+      { userId: user.id, workshopId: user.workshopId, sessionId: session.id },
+      session.expiresAt,
+    );
+    res.cookie(sessionCookieName, token, { ...cookieOptions, maxAge: signer.ttlMs });
+    res.cookie(deviceCookieName, await devices.sign(deviceId), deviceCookieOptions);
+  }
+
+  router.post('/sign-in', validate('body', signInRequestSchema), async (req, res) => {
+    const input = res.locals.body as SignInRequest;
+    const now = clock();
+    try {
+      const { user, deviceId } = await signInUser({
+        ...input,
+        deviceId: await devices.verify(cookiesOf(req)[deviceCookieName]),
+        address: ipKeyGenerator(req.ip ?? '0.0.0.0'),
+        limits: config.signInLimits,
+        now,
+        mail: deps.mail,
+        unlockTtlMinutes: config.accountTokens.passwordResetTtlMinutes,
+      });
+      await signIn(res, user, deviceId, now);
       res.json({ me: presentMe(user) });
-    },
-  );
+    } catch (error) {
+      if (error instanceof SignInPaused)
+        res.set(
+          'Retry-After',
+          String(Math.max(1, Math.ceil((error.until.getTime() - now.getTime()) / 1000))),
+        );
+      throw error;
+    }
+  });
 
   // "Forgot password" is limited like sign-in, per address and per account; the account count
   // runs whether or not the account exists, so even a 429 reveals nothing.
@@ -157,17 +189,35 @@ export function authRouter(deps: {
     '/set-password',
     linkPerAddress,
     validate('body', setPasswordRequestSchema),
-    async (_req, res) => {
+    async (req, res) => {
       const input = res.locals.body as SetPasswordRequest;
       const user = await setPasswordWithToken(input);
-      // The link proved the address: the person is signed in at once.
-      const token = await signer.sign({ userId: user.id, workshopId: user.workshopId });
-      res.cookie(sessionCookieName, token, { ...cookieOptions, maxAge: signer.ttlMs });
+      // The link proved the address and the new password ended every other session: the
+      // person is signed in here at once, and this browser becomes one they have signed in on.
+      const now = clock();
+      const deviceId = (await devices.verify(cookiesOf(req)[deviceCookieName])) ?? randomUUID();
+      await rememberDevice({ deviceId, user, now });
+      await signIn(res, user, deviceId, now);
       res.json({ me: presentMe(user) });
     },
   );
 
-  router.post('/sign-out', (_req, res) => {
+  router.post(
+    '/unlock',
+    linkPerAddress,
+    validate('body', unlockSignInRequestSchema),
+    async (_req, res) => {
+      const { token } = res.locals.body as UnlockSignInRequest;
+      await unlockSignIn({ token });
+      res.json({ message: signInUnlockedMessage });
+    },
+  );
+
+  // Ends this browser's session for every API process; the device cookie stays, so the
+  // browser is still one the person has signed in on.
+  router.post('/sign-out', async (req, res) => {
+    const claims = await signer.verify(cookiesOf(req)[sessionCookieName]);
+    if (claims) await endSession({ sessionId: claims.sessionId, now: clock() });
     res.clearCookie(sessionCookieName, cookieOptions);
     res.status(204).end();
   });

@@ -1,8 +1,9 @@
-// Sign-in, sign-out, the session cookie and the sign-in rate limits, against real PostgreSQL.
+// Sign-in and its cookies, against real PostgreSQL. Sessions ending: sessions.test.ts; the
+// sign-in limits: sign-in-limits.test.ts; Secure cookies and HSTS: cookie-security.test.ts.
 import { randomUUID } from 'node:crypto';
 import supertest from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { agentFor, clientHeaders, testApp } from '../../test/context';
+import { agentFor, testApp } from '../../test/context';
 import { createUser, createWorkshop, testPassword } from '../../test/factories';
 import { signInFailedMessage } from '../../services/auth/sign-in-user';
 
@@ -25,6 +26,12 @@ describe('POST /api/auth/sign-in', () => {
     expect(cookie).toMatch(/heatpath_session=/);
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/SameSite=Lax/i);
+    // The browser is remembered as one this person signed in on, for sign-in's eyes only.
+    const setCookies = res.headers['set-cookie'] as unknown as string[];
+    const device = setCookies.find((c) => c.startsWith('heatpath_device='));
+    expect(device).toMatch(/Path=\/api\/auth;/);
+    expect(device).toMatch(/HttpOnly/);
+    expect(device).toMatch(/SameSite=Strict/);
     const me = await agent.get('/api/me');
     expect(me.status).toBe(200);
     expect(me.body).toMatchObject({
@@ -76,99 +83,5 @@ describe('POST /api/auth/sign-in', () => {
       .send({ email: people.lead.email, password: testPassword });
     expect(res.status).toBe(403);
     expect(res.body.error.message).toMatch(/Heatpath app/);
-  });
-});
-
-describe('sign-in rate limits', () => {
-  it('stops repeated failures for one account, even when the right password follows', async () => {
-    const app = testApp({
-      signInLimits: { perAccount: 3, perAddress: 100_000, windowMinutes: 15 },
-    });
-    const { people } = await createWorkshop();
-    for (let i = 0; i < 3; i += 1) {
-      const res = await agentFor(app)
-        .post('/api/auth/sign-in')
-        .send({ email: people.lead.email, password: 'nope-nope' });
-      expect(res.status).toBe(401);
-    }
-    const blocked = await agentFor(app)
-      .post('/api/auth/sign-in')
-      .send({ email: people.lead.email, password: testPassword });
-    expect(blocked.status).toBe(429);
-    expect(blocked.body.error).toEqual({
-      code: 'rate_limited',
-      message: expect.stringMatching(/Too many sign-in attempts/),
-    });
-    // Another account from the same address is unaffected.
-    const other = await agentFor(app)
-      .post('/api/auth/sign-in')
-      .send({ email: people.technician.email, password: testPassword });
-    expect(other.status).toBe(200);
-  });
-
-  it('stops too many attempts from one address', async () => {
-    const app = testApp({
-      trustProxy: true,
-      signInLimits: { perAccount: 1000, perAddress: 4, windowMinutes: 15 },
-    });
-    const { people } = await createWorkshop();
-    const address = `203.0.113.${Math.floor(Math.random() * 250) + 1}`;
-    const send = () =>
-      supertest(app)
-        .post('/api/auth/sign-in')
-        .set(clientHeaders)
-        .set('X-Forwarded-For', address)
-        .send({ email: people.advisor.email, password: testPassword });
-    for (let i = 0; i < 4; i += 1) expect((await send()).status).toBe(200);
-    expect((await send()).status).toBe(429);
-  });
-});
-
-describe('POST /api/auth/sign-out', () => {
-  it('clears the session', async () => {
-    const app = testApp();
-    const { people } = await createWorkshop();
-    const agent = agentFor(app);
-    await agent
-      .post('/api/auth/sign-in')
-      .send({ email: people.advisor.email, password: testPassword });
-    expect((await agent.get('/api/me')).status).toBe(200);
-    const out = await agent.post('/api/auth/sign-out');
-    expect(out.status).toBe(204);
-    const me = await agent.get('/api/me');
-    expect(me.status).toBe(401);
-    expect(me.body.error.code).toBe('unauthenticated');
-  });
-});
-
-describe('sessions', () => {
-  const app = testApp();
-
-  it('rejects a forged cookie', async () => {
-    const res = await supertest(app)
-      .get('/api/me')
-      .set('Cookie', 'heatpath_session=eyJhbGciOiJIUzI1NiJ9.e30.abc');
-    expect(res.status).toBe(401);
-  });
-
-  it('ends the session of a person the lead deactivates', async () => {
-    const { people } = await createWorkshop();
-    const agent = agentFor(app);
-    await agent
-      .post('/api/auth/sign-in')
-      .send({ email: people.technician.email, password: testPassword });
-    await people.technician.update({ active: false });
-    expect((await agent.get('/api/me')).status).toBe(401);
-  });
-
-  it('expires', async () => {
-    const shortLived = testApp({ sessionTtlHours: 1 / 3600 });
-    const { people } = await createWorkshop();
-    const agent = agentFor(shortLived);
-    await agent
-      .post('/api/auth/sign-in')
-      .send({ email: people.lead.email, password: testPassword });
-    await new Promise((r) => setTimeout(r, 2100));
-    expect((await agent.get('/api/me')).status).toBe(401);
   });
 });

@@ -10,6 +10,8 @@ export async function findAccountToken(options: { token: string }): Promise<Acco
   const row = await AccountToken.findOne({
     where: {
       tokenHash: hashToken(options.token),
+      // An unlock link is not a set-password link.
+      purpose: ['invitation', 'password-reset'],
       usedAt: { [Op.is]: null },
       expiresAt: { [Op.gt]: new Date() },
     },
@@ -24,6 +26,7 @@ export async function findAccountToken(options: { token: string }): Promise<Acco
   });
   const user = row?.user;
   if (!row || !user?.workshop) throw new AppError('not_found', tokenNoLongerValid);
+  if (row.purpose === 'sign-in-unlock') throw new AppError('not_found', tokenNoLongerValid);
   return {
     purpose: row.purpose,
     name: user.name,

@@ -53,3 +53,28 @@ export function passwordResetMessage(options: {
     ].join('\n'),
   };
 }
+
+export function signInUnlockMessage(options: {
+  name: string;
+  workshopName: string;
+  ttlMinutes: number;
+}) {
+  return {
+    subject: headerSafe('Sign-in to your Heatpath account was paused'),
+    text: [
+      `Hello ${options.name},`,
+      '',
+      'Someone typed wrong passwords for your Heatpath account several times, from a browser you have not signed in on before, so Heatpath has paused sign-in to your account from new browsers for a while.',
+      'Browsers you have signed in on before are not affected.',
+      '',
+      'If it was you, open this link to lift the pause now:',
+      '',
+      linkPlaceholder,
+      '',
+      `The link works once and for ${hours(options.ttlMinutes)}.`,
+      'If it was not you, your password was not accepted and nothing else has changed. If you think someone knows your password, choose a new one with "Forgot your password?" on the sign-in page.',
+      '',
+      `Heatpath for ${options.workshopName}`,
+    ].join('\n'),
+  };
+}

@@ -1,10 +1,13 @@
 // Sets a password from an invitation or reset link. The token is spent by one conditional
 // UPDATE (unused and unexpired), so two tabs racing with the same link cannot both succeed;
-// every other open link of the person stops working too.
+// every other open link of the person stops working too. The new password ends every session
+// and forgets every browser of the person (migration 0007's trigger), and, since the link
+// proved the mailbox, lifts a pause on sign-in from unknown browsers.
 import { Op, QueryTypes } from 'sequelize';
 import { AccountToken, User, Workshop } from '../../db/models/index';
 import { AppError } from '../../errors';
 import { hashPassword } from '../../lib/passwords';
+import { allowanceKeys, clearAllowance } from '../auth/sign-in-allowance';
 import { hashToken, tokenNoLongerValid } from './account-tokens';
 
 export async function setPasswordWithToken(options: {
@@ -17,7 +20,8 @@ export async function setPasswordWithToken(options: {
   return sequelize.transaction(async (transaction) => {
     const spent = await sequelize.query<{ user_id: string }>(
       `UPDATE account_tokens SET used_at = now()
-        WHERE token_hash = $1 AND used_at IS NULL AND expires_at > now()
+        WHERE token_hash = $1 AND purpose IN ('invitation', 'password-reset')
+          AND used_at IS NULL AND expires_at > now()
       RETURNING user_id`,
       { bind: [hashToken(options.token)], type: QueryTypes.SELECT, transaction },
     );
@@ -36,6 +40,7 @@ export async function setPasswordWithToken(options: {
       { usedAt: new Date() },
       { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction },
     );
+    await clearAllowance(allowanceKeys.account(user.email), transaction);
     return user;
   });
 }

@@ -1,14 +1,30 @@
-// Resolves a session to its person, re-read on every request so a role change or a
-// deactivation takes effect at once.
-import { User, Workshop } from '../../db/models/index';
+// Resolves a session to its person, re-read on every request so that signing out, a new
+// password, a deactivation or a role change takes effect at once in every API process.
+import { Op } from 'sequelize';
+import { Session, User, Workshop } from '../../db/models/index';
 
 export async function findSessionUser(options: {
+  sessionId: string;
   userId: string;
   workshopId: string;
+  now: Date;
 }): Promise<User | null> {
-  const user = await User.findOne({
-    where: { id: options.userId, workshopId: options.workshopId, active: true },
-    include: [{ model: Workshop, as: 'workshop' }],
+  const session = await Session.findOne({
+    where: {
+      id: options.sessionId,
+      userId: options.userId,
+      workshopId: options.workshopId,
+      endedAt: { [Op.is]: null },
+      expiresAt: { [Op.gt]: options.now },
+    },
+    include: [
+      {
+        model: User,
+        as: 'user',
+        where: { active: true, workshopId: options.workshopId },
+        include: [{ model: Workshop, as: 'workshop' }],
+      },
+    ],
   });
-  return user;
+  return session?.user ?? null;
 }
