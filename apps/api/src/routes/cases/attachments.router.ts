@@ -16,6 +16,9 @@ import { attachmentFieldsSchema, attachmentParamsSchema } from './cases.schema';
 
 const upload = multer({
   storage: multer.memoryStorage(),
+  // Browsers send a file's name as raw UTF-8; busboy's default (latin1) turns "Kühler" into
+  // "KÃ¼hler".
+  defParamCharset: 'utf8',
   limits: { fileSize: attachmentLimits.maxBytes, files: 1, fields: 5, fieldSize: 1024 },
 });
 
@@ -87,12 +90,18 @@ export function attachmentsRouter(deps: { store: FileStore }) {
       const stream = await deps.store.get(key);
       res.set('Content-Type', which === 'file' ? a.mediaType : 'image/webp');
       res.set('X-Content-Type-Options', 'nosniff');
-      res.set('Cache-Control', 'private, max-age=86400');
+      // Photos of customers' cars must not outlive sign-out in a shared workshop PC's cache.
+      res.set('Cache-Control', 'no-store');
       if (which === 'file') {
         const disposition = a.kind === 'photo' ? 'inline' : 'attachment';
+        // An ASCII fallback, and the name as written for browsers that read RFC 6266's filename*.
+        const utf8 = encodeURIComponent(a.originalName).replace(
+          /['()*]/g,
+          (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`,
+        );
         res.set(
           'Content-Disposition',
-          `${disposition}; filename="${a.originalName.replace(/[^\w.-]+/g, '_')}"`,
+          `${disposition}; filename="${a.originalName.replace(/[^\w.-]+/g, '_')}"; filename*=UTF-8''${utf8}`,
         );
       }
       stream.pipe(res);

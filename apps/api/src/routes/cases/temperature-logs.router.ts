@@ -29,6 +29,9 @@ const maxMegabytes = temperatureLogMaxBytes / 1024 / 1024;
 
 const upload = multer({
   storage: multer.memoryStorage(),
+  // Browsers send a file's name as raw UTF-8; busboy's default (latin1) turns "Kühler" into
+  // "KÃ¼hler".
+  defParamCharset: 'utf8',
   limits: { fileSize: temperatureLogMaxBytes, files: 1, fields: 5, fieldSize: 4096 },
 });
 

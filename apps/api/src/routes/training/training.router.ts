@@ -226,7 +226,8 @@ export function trainingRouter(deps: { store: FileStore }) {
     const stream = await deps.store.get(key);
     res.set('Content-Type', which === 'file' ? photo.mediaType : 'image/webp');
     res.set('X-Content-Type-Options', 'nosniff');
-    res.set('Cache-Control', 'private, max-age=86400');
+    // Photos of customers' cars must not outlive sign-out in a shared workshop PC's cache.
+    res.set('Cache-Control', 'no-store');
     stream.pipe(res);
   };
   router.get(

@@ -14,6 +14,11 @@ import { findCase } from '../cases/find-case';
 export const attachmentLimits = {
   maxBytes: 12 * 1024 * 1024,
   maxPerCase: 60,
+  // 50 megapixels: above the 48–50 MP of the largest phone and camera photos a workshop takes
+  // (12 MP is the usual), and at 4 bytes a pixel a 200 MB decode at most. A few kilobytes of
+  // compressed PNG can claim 40000 × 40000 pixels; such a file is refused from its header
+  // before any pixel is decoded.
+  maxPixels: 50_000_000,
 } as const;
 
 const imageTypes = new Set(['image/jpeg', 'image/png', 'image/webp', 'image/heic', 'image/avif']);
@@ -55,6 +60,30 @@ async function sniff(file: UploadedFile): Promise<{ mediaType: string; isImage: 
   );
 }
 
+/** Reads only the image's header: its claimed size is checked before anything is decoded. */
+async function assertDecodableSize(bytes: Buffer): Promise<void> {
+  const size = await sharp(bytes, { limitInputPixels: false })
+    .metadata()
+    .then((meta) => ({
+      width: meta.width ?? 0,
+      height: meta.pageHeight && meta.pages ? meta.pageHeight * meta.pages : (meta.height ?? 0),
+    }))
+    .catch(() => {
+      throw new AppError(
+        'unsupported_media_type',
+        'That image could not be read; it may be damaged.',
+      );
+    });
+  const { width, height } = size;
+  if (width * height > attachmentLimits.maxPixels) {
+    const megapixels = Math.round((width * height) / 1_000_000);
+    throw new AppError(
+      'payload_too_large',
+      `This image is ${width} × ${height} pixels (${megapixels} megapixels); Heatpath takes photos up to ${attachmentLimits.maxPixels / 1_000_000} megapixels. Send it at a smaller size.`,
+    );
+  }
+}
+
 export async function addAttachment(options: {
   actor: Actor;
   caseId: string;
@@ -81,6 +110,8 @@ export async function addAttachment(options: {
     );
   }
 
+  if (isImage && mediaType !== 'image/heic') await assertDecodableSize(file.bytes);
+
   const id = randomUUID();
   const storageKey = `${actor.workshopId}/${kase.id}/${id}`;
   let thumbnailKey: string | null = null;
@@ -91,7 +122,10 @@ export async function addAttachment(options: {
     await store.put(storageKey, file.bytes, mediaType);
     stored.push(storageKey);
     if (isImage && mediaType !== 'image/heic') {
-      const image = sharp(file.bytes, { failOn: 'error' }).rotate();
+      const image = sharp(file.bytes, {
+        failOn: 'error',
+        limitInputPixels: attachmentLimits.maxPixels,
+      }).rotate();
       const meta = await image.metadata();
       width = meta.autoOrient?.width ?? meta.width ?? null;
       height = meta.autoOrient?.height ?? meta.height ?? null;
@@ -153,6 +187,12 @@ export async function addAttachment(options: {
     });
   } catch (error) {
     await Promise.all(stored.map((key) => store.remove(key).catch(() => undefined)));
+    if (error instanceof Error && /pixel limit/i.test(error.message)) {
+      throw new AppError(
+        'payload_too_large',
+        `That image is larger than ${attachmentLimits.maxPixels / 1_000_000} megapixels; send it at a smaller size.`,
+      );
+    }
     if (error instanceof Error && /unsupported image format|Input buffer/i.test(error.message)) {
       throw new AppError(
         'unsupported_media_type',
