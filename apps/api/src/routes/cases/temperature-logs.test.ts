@@ -75,7 +75,7 @@ async function openCase() {
     .post('/api/cases')
     .send({ vehicleId: vehicle.id, complaint: 'Overheats', treeId: w.trees[overheatingTreeKey] });
   expect(res.status, res.text).toBe(201);
-  return { ...w, tech, caseId: res.body.id as string };
+  return { ...w, tech, vehicle, caseId: res.body.id as string };
 }
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -192,6 +192,61 @@ describe('uploading a log that reads itself', () => {
     expect(refused.body.error.fields.threshold).toMatch(/temperature in °C/);
     const backwards = await tech.get(`/api/cases/${caseId}/logs/${stored.log.id}?from=50&to=10`);
     expect(backwards.status).toBe(400);
+  });
+});
+
+describe('the engine the case’s vehicle has, and analyses stored by older rules', () => {
+  it('reads a stall at 70 °C as the shroud releasing when the vehicle names a switchable pump', async () => {
+    // The shroud releasing is a stall in the warm-up, not the thermostat opening
+    // (cooling-diagnosis.md, switchable main pump; common practice).
+    const { tech, caseId, vehicle } = await openCase();
+    await vehicle.update({ engine: '1.4 turbo petrol, switchable coolant pump' });
+    const shroudLog = syntheticLog({
+      seed: 1207,
+      durationSeconds: 2400,
+      startC: 20,
+      closedAsymptoteC: 125,
+      timeConstantSeconds: 400,
+      openingC: 88,
+      noiseK: 0.3,
+      shroud: { releaseC: 70, timeConstantAfterSeconds: 900 },
+    });
+    const res = await upload(tech, caseId, Buffer.from(logCsv(shroudLog)));
+    expect(res.status, res.text).toBe(201);
+    const { analysis } = (res.body as LogStored).log;
+    expect(analysis.options.switchablePump).toBe(true);
+    expect(analysis.shroudRelease.found && analysis.shroudRelease.reading).toBe('shroud-release');
+    expect(analysis.opening.found && Math.abs(analysis.opening.temperatureC - 88)).toBeLessThan(2);
+
+    // The description changes: the log is worked out again with both readings.
+    await vehicle.update({ engine: '1.4 turbo petrol' });
+    const detail = await tech.get(`/api/cases/${caseId}/logs/${(res.body as LogStored).log.id}`);
+    expect(detail.body.analysis.options.switchablePump).toBeNull();
+    expect(detail.body.analysis.shroudRelease.reading).toBe('shroud-release-or-early-opening');
+  });
+
+  it('works out again, and stores back, an analysis made before the current rules', async () => {
+    const { tech, caseId } = await openCase();
+    const stored = (await upload(tech, caseId, goodCsv)).body as LogStored;
+    // What an analysis from before looked like: no version, no shroud release, and an opening
+    // read off an over-temperature plateau.
+    const { version: _version, shroudRelease: _shroud, ...legacy } = stored.log.analysis;
+    await TemperatureLog.update(
+      {
+        analysis: {
+          ...legacy,
+          opening: { ...legacy.opening, found: true, temperatureC: 117.95, atSeconds: 2450 },
+        } as unknown as TemperatureLog['analysis'],
+      },
+      { where: { id: stored.log.id } },
+    );
+    const detail = await tech.get(`/api/cases/${caseId}/logs/${stored.log.id}`);
+    expect(detail.status, detail.text).toBe(200);
+    expect(detail.body.analysis).toEqual(stored.log.analysis);
+    const row = await TemperatureLog.findByPk(stored.log.id);
+    expect(row?.analysis.version).toBe(stored.log.analysis.version);
+    const list = await tech.get(`/api/cases/${caseId}/logs`);
+    expect(list.body.logs[0].headline.openingC).toBeLessThan(90);
   });
 });
 

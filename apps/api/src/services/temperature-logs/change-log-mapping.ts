@@ -2,7 +2,6 @@
 // automatically may not suit this export): the series and analysis are replaced in one
 // transaction, and the new mapping is remembered for the source. The original file is unchanged.
 import type { TemperatureLogDetail } from '@heatpath/contracts';
-import { analyseTemperatureLog } from '@heatpath/temperature-log';
 import type { ColumnMapping } from '@heatpath/temperature-log';
 import { TemperatureLog } from '../../db/models/index';
 import { AppError } from '../../errors';
@@ -13,6 +12,7 @@ import { presentLogDetail } from '../../presenters/temperature-log.presenter';
 import { chartSeries } from './chart-series';
 import { findTemperatureLog } from './find-temperature-log';
 import { readLogFile, readStoredBytes } from './read-log-file';
+import { analyseCaseLog, engineFactsForCase } from './log-analysis';
 import { rememberMapping } from './remembered-mappings';
 import { seriesColumns } from './series-columns';
 
@@ -33,7 +33,7 @@ export async function changeLogMapping(options: {
     throw new AppError('validation_failed', message, { mapping: message });
   }
   const { series } = result;
-  const analysis = analyseTemperatureLog(series);
+  const analysis = analyseCaseLog(series, await engineFactsForCase({ actor, caseId }));
   const sequelize = TemperatureLog.sequelize;
   if (!sequelize) throw new Error('Models are not initialised.');
   await sequelize.transaction(async (transaction) => {

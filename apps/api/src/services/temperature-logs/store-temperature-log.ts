@@ -2,7 +2,6 @@
 // bytes are already in storage), the case event, the log with its series and analysis, and the
 // confirmed mapping for its source. Either all of it is written or none of it is.
 import type { MappingSource } from '@heatpath/contracts';
-import { analyseTemperatureLog } from '@heatpath/temperature-log';
 import type { CandidateColumn, TemperatureSeries } from '@heatpath/temperature-log';
 import {
   Attachment,
@@ -15,6 +14,7 @@ import { AppError } from '../../errors';
 import type { Actor } from '../../policies/permissions';
 import { attachmentLimits } from '../attachments/add-attachment';
 import { findCase } from '../cases/find-case';
+import { analyseCaseLog, engineFactsForCase } from './log-analysis';
 import { rememberMapping } from './remembered-mappings';
 import { seriesColumns } from './series-columns';
 
@@ -40,7 +40,7 @@ export async function storeTemperatureLog(options: {
 }): Promise<{ log: TemperatureLog; attachment: Attachment }> {
   const { actor, caseId, nodeId, file, series } = options;
   // Outside the transaction: the analysis is the slow part and needs no lock.
-  const analysis = analyseTemperatureLog(series);
+  const analysis = analyseCaseLog(series, await engineFactsForCase({ actor, caseId }));
   const columns = seriesColumns(series);
   const sequelize = TemperatureLog.sequelize;
   if (!sequelize) throw new Error('Models are not initialised.');

@@ -3,6 +3,7 @@
 // package words it. None of these is a maker's figure.
 import type { ResultBasis, SwingEpisode, TemperatureLogDetail } from '@heatpath/contracts';
 import type { ReactNode } from 'react';
+import { openingDetail, shroudReleaseCard } from '../analysis-words';
 import { atMoment, formatClock, formatDuration, type TemperatureDisplay } from '../log-format';
 
 const swingWords: Record<SwingEpisode['suggestion'], string> = {
@@ -10,8 +11,6 @@ const swingWords: Record<SwingEpisode['suggestion'], string> = {
   'thermostat-hunting': 'Suggests the thermostat hunting',
   'fan-or-thermostat': 'Fan cycling or thermostat hunting',
 };
-
-const comparedWords = { below: 'below', within: 'within', above: 'above' } as const;
 
 function Basis({ basis }: { basis: ResultBasis }) {
   return (
@@ -64,6 +63,7 @@ export function LogResults({
 }) {
   const a = log.analysis;
   const episodes = a.overTemperature.episodes;
+  const shroud = shroudReleaseCard(a, display);
   return (
     <section aria-labelledby="log-results-heading" className="flex flex-col gap-4">
       <h2 id="log-results-heading" className="text-xl font-bold">
@@ -89,7 +89,7 @@ export function LogResults({
           <ResultCard
             title="Thermostat opening (estimated)"
             figure={display.format(a.opening.temperatureC)}
-            detail={`${atMoment(a.opening.atSeconds)}; ${comparedWords[a.opening.comparedWithTypical]} the usual ${display.format(a.opening.typicalRangeC.min, 0)}–${display.format(a.opening.typicalRangeC.max, 0)}.`}
+            detail={openingDetail(a.opening, display)}
             basis={a.opening.basis}
           />
         ) : (
@@ -100,6 +100,15 @@ export function LogResults({
             missing
           />
         )}
+        {shroud ? (
+          <ResultCard
+            title={shroud.title}
+            figure={shroud.figure}
+            detail={shroud.detail}
+            basis={a.shroudRelease.basis}
+            missing={shroud.missing}
+          />
+        ) : null}
         <ResultCard
           title="Peak temperature"
           figure={display.format(a.peak.valueC)}
