@@ -851,6 +851,8 @@ export const coolantLevelDroppingDefinition = {
         'Set the level to MAX on a cold engine and clean off the residue so a real leak would show.',
       labour: [{ operation: 'Set coolant level and clean residue', hours: 0.2 }],
       followUps: [localFollowUps.markAndRecheck, followUps.tellAdvisor],
+      hazards: ['hot-pressurised-coolant', 'glycol'],
+      cautions: [cautions.coldSystemOnly, cautions.glycol],
     },
     'heater-core-leak': {
       kind: 'outcome',
