@@ -29,6 +29,8 @@ async function main() {
     DATABASE_URL: db.url,
     SESSION_SECRET: 'heatpath-bench-editor-session-secret-0123456789',
     HEATPATH_DEMO: 'true',
+    // Plain http on loopback, like npm start: no Secure cookies, no HSTS.
+    COOKIE_SECURE: 'false',
     PORT: String(port),
     LOG_LEVEL: 'warn',
     UPLOAD_DIR: join(root, '.data', 'bench-editor-uploads'),

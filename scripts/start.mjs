@@ -39,6 +39,9 @@ async function main() {
     DATABASE_URL: db.url,
     SESSION_SECRET: process.env.SESSION_SECRET ?? ensureSecret(join(dataRoot, 'session-secret')),
     HEATPATH_DEMO: process.env.HEATPATH_DEMO ?? 'true',
+    // Production mode, but plain http on loopback: a Secure cookie would never come back, and
+    // HSTS would pin 127.0.0.1 to https. Behind HTTPS leave COOKIE_SECURE unset (secure).
+    COOKIE_SECURE: process.env.COOKIE_SECURE ?? 'false',
     PORT: String(port),
     UPLOAD_DIR: process.env.UPLOAD_DIR ?? join(dataRoot, 'uploads'),
   };

@@ -130,6 +130,8 @@ async function main() {
       DATABASE_URL: e2eUrl,
       SESSION_SECRET: 'heatpath-e2e-session-secret-0123456789abcdef',
       HEATPATH_DEMO: 'true',
+      // Plain http on loopback, like npm start: no Secure cookies, no HSTS.
+      COOKIE_SECURE: 'false',
       PORT: String(port),
       LOG_LEVEL: 'warn',
       UPLOAD_DIR: join(root, '.data', 'test-uploads'),
