@@ -224,6 +224,22 @@ describe('heat soak after switch-off', () => {
     const a = analyseTemperatureLog({ times: log.times, coolantC: log.coolantC });
     expect(a.overTemperature.episodes).toHaveLength(1);
   });
+
+  it('says it cannot tell when a log without engine speed ends hot', () => {
+    // Ends 200 s after switch-off, with the soak at 92 + 24.6 K.
+    const cut = syntheticLog({
+      ...COLD_START,
+      durationSeconds: 2000,
+      openingC: 92,
+      switchOff: { atSeconds: 1800, soakRiseK: 25, soakPeakAfterSeconds: 240 },
+    });
+    const a = analyseTemperatureLog({ times: cut.times, coolantC: cut.coolantC });
+    expect(a.overTemperature.episodes.at(-1)?.ongoingAtEnd).toBe(true);
+    expect(a.notes.some((n) => /cannot tell whether the engine was still running/.test(n))).toBe(
+      true,
+    );
+    expect(analyse(cut).overTemperature.episodes).toEqual([]);
+  });
 });
 
 describe('gradual settle after the opening', () => {
