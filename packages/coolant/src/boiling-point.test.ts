@@ -100,11 +100,15 @@ describe('boilingPoint — worked examples in trade-facts.md (computed there wit
     expect(Object.keys(r)).not.toContain('mixCelsius');
   });
 
-  it('warns on vacuum and on pressures beyond any cap, refuses below the triple point', () => {
+  it('warns on vacuum and above the usual caps, refuses a 30 bar "cap" and below the triple point', () => {
     expect(boilingPoint({ gaugeBar: -0.5 }).warnings.map((w) => w.code)).toEqual(['vacuum']);
-    expect(boilingPoint({ gaugeBar: 4 }).warnings.map((w) => w.code)).toEqual([
+    // Common practice: 1.4–1.6 bar caps are common; Heatpath warns above 2.0 bar, refuses above 3.
+    expect(boilingPoint({ gaugeBar: 1.6 }).warnings).toEqual([]);
+    expect(boilingPoint({ gaugeBar: 2.5 }).warnings.map((w) => w.code)).toEqual([
       'above-usual-cap-pressure',
     ]);
+    expect(() => boilingPoint({ gaugeBar: 30 })).toThrow(/No road-vehicle pressure cap/);
+    expect(() => boilingPoint({ gaugeBar: 4 })).toThrow(CoolantInputError);
     expect(() => boilingPoint({ gaugeBar: -1.01 })).toThrow(CoolantInputError);
     expect(() => boilingPoint({ gaugeBar: -2 })).toThrow(CoolantInputError);
     expect(() => boilingPoint({ gaugeBar: '2 kg' })).toThrow(CoolantInputError);

@@ -1,5 +1,6 @@
 // Boiling point of water under the pressure cap, for the "boiling margin" check: how close the
 // running temperature is to flashing to steam at the cap's rating.
+import { CAP_RATING_BAND, checkCapRating } from './cap-rating.js';
 import { CoolantInputError } from './errors.js';
 import { IAPWS_IF97_SATURATION } from './sources.js';
 import type { SourceNote } from './sources.js';
@@ -70,6 +71,11 @@ export function boilingPointOf(gaugeBar: number): BoilingPointResult {
       `${gaugeBar} bar gauge is outside the range of the water saturation equation (${(P_MIN_MPA * 10 - STANDARD_ATMOSPHERE_BAR).toFixed(4)} to ${(P_MAX_MPA * 10 - STANDARD_ATMOSPHERE_BAR).toFixed(1)} bar gauge).`,
     );
   }
+  if (gaugeBar > CAP_RATING_BAND.refuseAboveBar) {
+    // Above any cap a road vehicle carries: a misreading (psi typed as bar?), not a figure to
+    // compute a boiling point for.
+    checkCapRating(gaugeBar, 'gaugeBar');
+  }
   const warnings: CoolantWarning[] = [];
   if (gaugeBar < 0) {
     warnings.push(
@@ -78,11 +84,11 @@ export function boilingPointOf(gaugeBar: number): BoilingPointResult {
         'A negative gauge pressure is a partial vacuum: water boils below 100 °C here.',
       ),
     );
-  } else if (gaugeBar > 3) {
+  } else if (gaugeBar > CAP_RATING_BAND.usualMaxBar) {
     warnings.push(
       warning(
         'above-usual-cap-pressure',
-        'Above 3 bar gauge is far beyond any usual pressure-cap rating (typically 0.8–1.2 bar, common practice); check the reading.',
+        `Above ${CAP_RATING_BAND.usualMaxBar} bar gauge is beyond the usual pressure-cap ratings (1.4–1.6 bar common on modern cars; common practice); check the reading.`,
       ),
     );
   }

@@ -5,8 +5,9 @@ import { CoolantInputError } from './errors.js';
 import { readBasis, readGlycol } from './glycol-options.js';
 import { GLYCOL_CURVES, GLYCOL_NAMES } from './glycol-tables.js';
 import type { Basis, Glycol } from './glycol-tables.js';
+import { formatFigure } from './display-rounding.js';
 import { invertMonotone } from './monotone-interpolation.js';
-import { concentrationWarnings } from './recommended-concentration.js';
+import { advisedRange, concentrationWarnings } from './recommended-concentration.js';
 import { ASHRAE_GLYCOL_TABLE } from './sources.js';
 import type { SourceNote } from './sources.js';
 import { toCanonical } from './units.js';
@@ -43,7 +44,7 @@ export function concentrationForFreezePoint(
     const max = curves.maxPercent;
     throw new CoolantInputError(
       'celsius',
-      `No ${GLYCOL_NAMES[glycol]} mix protects to ${target.toFixed(1)} °C. The handbook table's coldest point is ${curves.coldestCelsius} °C at ${max.mass} mass % (${max.volume} vol %), and richer mixes protect less, not more.`,
+      `No ${GLYCOL_NAMES[glycol]} mix protects to ${formatFigure(target, 'temperature')}. The handbook table's coldest point is ${curves.coldestCelsius} °C at ${max.mass} mass % (${max.volume} vol %), and richer mixes protect less, not more.`,
     );
   }
   if (target >= 0) {
@@ -54,7 +55,7 @@ export function concentrationForFreezePoint(
       warnings: [
         warning(
           'no-glycol-needed',
-          `Water alone does not freeze above 0 °C, so no glycol is needed for ${target.toFixed(1)} °C; the coolant still needs its 40–60 vol % for corrosion and boil protection (ASTM D3306).`,
+          `Water alone does not freeze above 0 °C, so no glycol is needed for ${formatFigure(target, 'temperature')}; the coolant still needs ${advisedRange(glycol)} for corrosion and boil protection (ASTM D3306: 40–60 vol %).`,
         ),
       ],
       source: ASHRAE_GLYCOL_TABLE,
@@ -67,7 +68,7 @@ export function concentrationForFreezePoint(
     percent: basis === 'mass' ? massPercent : volumePercent,
     massPercent,
     volumePercent,
-    warnings: concentrationWarnings(volumePercent),
+    warnings: concentrationWarnings(glycol, volumePercent),
     source: ASHRAE_GLYCOL_TABLE,
   };
 }

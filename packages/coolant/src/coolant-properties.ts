@@ -1,44 +1,37 @@
-// Density and specific heat of coolant for heat-flow estimates, limited to the points the cited
-// tables give: ethylene glycol at 40, 50 and 60 vol % (50 % across 80–90 °C, the others at 85 °C
-// only) and water at 85 °C. Outside that, Heatpath refuses rather than guessing.
+// Density and specific heat of coolant for heat-flow estimates, read from the tables in
+// property-tables.ts: water 0–120 °C (IAPWS-IF97), ethylene and propylene glycol 10–60 vol % at
+// 0–100 °C (ASHRAE). Between rows and columns values are interpolated linearly — the tables step
+// 5 K and 10 vol %, and both properties are smooth and nearly straight over such steps. Above the
+// glycol tables' 100 °C the last 5 K of each column is carried on in a straight line to 120 °C,
+// with a warning (see EXTRAPOLATION_NOTE).
+import { formatFigure, roundForDisplay } from './display-rounding.js';
 import { CoolantInputError } from './errors.js';
-import { ASHRAE_GLYCOL_TABLE, IAPWS_IF97_WATER_85C } from './sources.js';
+import type { Glycol } from './glycol-tables.js';
+import {
+  ETHYLENE_GLYCOL_PROPERTIES,
+  PROPYLENE_GLYCOL_PROPERTIES,
+  WATER_PROPERTIES,
+} from './property-tables.js';
+import type { PropertyGrid } from './property-tables.js';
 import type { SourceNote } from './sources.js';
 import { at } from './table-access.js';
 import { warning } from './warnings.js';
 import type { CoolantWarning } from './warnings.js';
 
-interface PropertyPoint {
-  readonly celsius: number;
-  readonly density: number;
-  readonly cp: number;
-}
+export const PROPERTY_TEMPERATURE_RANGE = { min: 0, max: 120 } as const;
+export const PROPERTY_MAX_VOLUME_PERCENT = 60;
 
-/** 50 vol % ethylene glycol, ASHRAE Handbook—Fundamentals (Source A). */
-export const EG50_BY_TEMPERATURE: readonly PropertyPoint[] = [
-  { celsius: 80, density: 1038.5, cp: 3512 },
-  { celsius: 85, density: 1034.8, cp: 3532 },
-  { celsius: 90, density: 1031.0, cp: 3551 },
-];
+const GRIDS: Record<Glycol, PropertyGrid> = {
+  ethylene: ETHYLENE_GLYCOL_PROPERTIES,
+  propylene: PROPYLENE_GLYCOL_PROPERTIES,
+};
 
-interface ConcentrationPoint {
-  readonly volumePercent: number;
-  readonly density: number;
-  readonly cp: number;
-}
-
-/** Ethylene glycol at 85 °C by vol %, ASHRAE Handbook—Fundamentals (Source A). */
-export const EG_AT_85C: readonly ConcentrationPoint[] = [
-  { volumePercent: 40, density: 1023.1, cp: 3686 },
-  { volumePercent: 50, density: 1034.8, cp: 3532 },
-  { volumePercent: 60, density: 1045.6, cp: 3367 },
-];
-
-/** Water at 85 °C, 0.2 MPa (IAPWS-IF97). */
-export const WATER_AT_85C = { density: 968.67, cp: 4199.8 } as const;
-
-export const PROPERTY_TEMPERATURE_RANGE = { min: 80, max: 90 } as const;
-const TABLE_TEMPERATURE = 85;
+// Why a straight line above 100 °C is fair: carried the same way from the table's 75–80 °C rows
+// to its 100 °C row (20 K, as far as 100 → 120 °C), the line misses the printed figure by at most
+// 0.13 % (density) and 0.12 % (cp) in every column of both tables — far inside the ±1 % the
+// sources differ by. coolant-properties.test.ts repeats that check.
+const EXTRAPOLATION_NOTE =
+  "The handbook tables for glycol stop at 100 °C; above that, density and specific heat are carried on in a straight line from the table's last 5 K (the same straight line, tried on the table over 80–100 °C, stays within 0.15 % of its printed figures).";
 
 export interface CoolantProperties {
   /** kg/m³ */
@@ -49,99 +42,95 @@ export interface CoolantProperties {
   readonly sources: readonly SourceNote[];
 }
 
-function linear<T>(
-  points: readonly T[],
-  x: number,
-  key: (p: T) => number,
-  value: (p: T) => number,
-): number {
-  for (let i = 0; i < points.length - 1; i++) {
-    const a = at(points, i);
-    const b = at(points, i + 1);
-    if (x >= key(a) && x <= key(b)) {
-      const t = (x - key(a)) / (key(b) - key(a));
-      return value(a) + t * (value(b) - value(a));
-    }
+interface Pair {
+  readonly density: number;
+  readonly cp: number;
+}
+
+/** Index i with xs[i] ≤ x ≤ xs[i+1], clamped to the last interval for x past the end. */
+function segment(xs: readonly number[], x: number): number {
+  for (let i = 0; i < xs.length - 2; i++) {
+    if (x <= at(xs, i + 1)) return i;
   }
-  throw new RangeError(`${x} lies outside the property table.`);
+  return xs.length - 2;
+}
+
+function lerp(x: number, x0: number, x1: number, y0: number, y1: number): number {
+  return y0 + ((x - x0) / (x1 - x0)) * (y1 - y0);
+}
+
+/** Linear in x along an evenly sampled series; past the end the last segment carries on. */
+function along(xs: readonly number[], ys: readonly number[], x: number): number {
+  const i = segment(xs, x);
+  return lerp(x, at(xs, i), at(xs, i + 1), at(ys, i), at(ys, i + 1));
+}
+
+function water(celsius: number): Pair {
+  const w = WATER_PROPERTIES;
+  return { density: along(w.celsius, w.density, celsius), cp: along(w.celsius, w.cp, celsius) };
+}
+
+function glycolColumn(grid: PropertyGrid, column: number, celsius: number): Pair {
+  const density = grid.density.map((row) => at(row, column));
+  const cp = grid.cp.map((row) => at(row, column));
+  return { density: along(grid.celsius, density, celsius), cp: along(grid.celsius, cp, celsius) };
+}
+
+function glycol(grid: PropertyGrid, volumePercent: number, celsius: number): Pair {
+  const columns = grid.volumePercents;
+  // Below the first column (10 vol %) the line runs from plain water to that column.
+  if (volumePercent < at(columns, 0)) {
+    const w = water(celsius);
+    const first = glycolColumn(grid, 0, celsius);
+    const c0 = at(columns, 0);
+    return {
+      density: lerp(volumePercent, 0, c0, w.density, first.density),
+      cp: lerp(volumePercent, 0, c0, w.cp, first.cp),
+    };
+  }
+  const i = segment(columns, volumePercent);
+  const a = glycolColumn(grid, i, celsius);
+  const b = glycolColumn(grid, i + 1, celsius);
+  const c0 = at(columns, i);
+  const c1 = at(columns, i + 1);
+  return {
+    density: lerp(volumePercent, c0, c1, a.density, b.density),
+    cp: lerp(volumePercent, c0, c1, a.cp, b.cp),
+  };
 }
 
 /**
- * Properties of ethylene glycol at `volumePercent` (0 for water, or 40–60) and `meanCelsius`
- * (80–90 °C). Between the table's rows values are interpolated linearly; where the table has no
- * temperature series the 50 % series' change with temperature is borrowed, with a warning.
+ * Properties of water (`volumePercent` 0) or `glycol` at 0–60 vol %, at `meanCelsius` 0–120 °C.
+ * Refuses outside those ranges: no cited figure exists there.
  */
-export function coolantProperties(volumePercent: number, meanCelsius: number): CoolantProperties {
-  if (
-    meanCelsius < PROPERTY_TEMPERATURE_RANGE.min ||
-    meanCelsius > PROPERTY_TEMPERATURE_RANGE.max
-  ) {
+export function coolantProperties(
+  glycolKind: Glycol,
+  volumePercent: number,
+  meanCelsius: number,
+): CoolantProperties {
+  const { min, max } = PROPERTY_TEMPERATURE_RANGE;
+  if (meanCelsius < min || meanCelsius > max) {
     throw new CoolantInputError(
       'inletCelsius',
-      `The mean coolant temperature is ${meanCelsius.toFixed(1)} °C; the cited density and specific-heat figures cover only 80–90 °C, so no heat flow is computed outside that.`,
+      `The mean of the two readings is ${formatFigure(meanCelsius, 'temperature')}; Heatpath's cited density and specific-heat figures cover a mean of ${min}–${max} °C, so no heat flow is worked out outside that.`,
     );
   }
-  const offTableTemperature = meanCelsius !== TABLE_TEMPERATURE;
-  if (volumePercent === 0) {
-    return {
-      density: WATER_AT_85C.density,
-      cp: WATER_AT_85C.cp,
-      warnings: offTableTemperature
-        ? [
-            warning(
-              'properties-approximated',
-              `Water's density and specific heat are taken at 85 °C (the only point cited) for the mean ${meanCelsius.toFixed(1)} °C; over 80–90 °C they change by well under 1 % (about 0.3 % for density; from memory).`,
-            ),
-          ]
-        : [],
-      sources: [IAPWS_IF97_WATER_85C],
-    };
-  }
-  if (volumePercent < 40 || volumePercent > 60) {
+  if (volumePercent > PROPERTY_MAX_VOLUME_PERCENT) {
     throw new CoolantInputError(
       'percent',
-      `Density and specific heat are cited for ethylene glycol at 40, 50 and 60 vol % (and for plain water); ${volumePercent.toFixed(1)} vol % is outside that, so no heat flow is computed.`,
+      `The handbook density and specific-heat tables stop at ${PROPERTY_MAX_VOLUME_PERCENT} vol %; ${roundForDisplay(volumePercent, 'concentration')} vol % is richer than any advised mix, so no heat flow is worked out.`,
     );
   }
-  const density85 = linear(
-    EG_AT_85C,
-    volumePercent,
-    (p) => p.volumePercent,
-    (p) => p.density,
-  );
-  const cp85 = linear(
-    EG_AT_85C,
-    volumePercent,
-    (p) => p.volumePercent,
-    (p) => p.cp,
-  );
-  const densityShift =
-    linear(
-      EG50_BY_TEMPERATURE,
-      meanCelsius,
-      (p) => p.celsius,
-      (p) => p.density,
-    ) - at(EG_AT_85C, 1).density;
-  const cpShift =
-    linear(
-      EG50_BY_TEMPERATURE,
-      meanCelsius,
-      (p) => p.celsius,
-      (p) => p.cp,
-    ) - at(EG_AT_85C, 1).cp;
-  const warnings: CoolantWarning[] = [];
-  if (offTableTemperature && volumePercent !== 50) {
-    warnings.push(
-      warning(
-        'properties-approximated',
-        `The table gives ${volumePercent.toFixed(1)} vol % only at 85 °C; its change with temperature to ${meanCelsius.toFixed(1)} °C is borrowed from the 50 vol % series (a shift of under 0.6 %).`,
-      ),
-    );
+  if (volumePercent === 0) {
+    return { ...water(meanCelsius), warnings: [], sources: [WATER_PROPERTIES.source] };
   }
-  return {
-    density: density85 + densityShift,
-    cp: cp85 + cpShift,
-    warnings,
-    sources: [ASHRAE_GLYCOL_TABLE],
-  };
+  const grid = GRIDS[glycolKind];
+  const lastRow = at(grid.celsius, grid.celsius.length - 1);
+  const warnings =
+    meanCelsius > lastRow ? [warning('properties-extrapolated', EXTRAPOLATION_NOTE)] : [];
+  const sources =
+    volumePercent < at(grid.volumePercents, 0)
+      ? [grid.source, WATER_PROPERTIES.source]
+      : [grid.source];
+  return { ...glycol(grid, volumePercent, meanCelsius), warnings, sources };
 }

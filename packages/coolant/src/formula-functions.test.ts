@@ -41,6 +41,10 @@ describe('formulaFunctions', () => {
     expect(formulaFunctions.waterBoilingPoint(1.4)).toBeCloseTo(126.25, 2);
   });
 
+  it('waterBoilingPoint refuses a 30 bar "cap" rather than give a figure (no vehicle cap is rated above 3 bar; common practice)', () => {
+    expect(() => formulaFunctions.waterBoilingPoint(30)).toThrow(CoolantInputError);
+  });
+
   it('temperatureDrop is inlet − outlet in K', () => {
     expect(formulaFunctions.temperatureDrop(95, 88.5)).toBeCloseTo(6.5, 12);
     expect(() => formulaFunctions.temperatureDrop(-300, 20)).toThrow(CoolantInputError);

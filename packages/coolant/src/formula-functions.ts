@@ -29,7 +29,7 @@ export interface CoolantFormulaFunctions {
   readonly egFreezePoint: (volPercent: number) => number;
   /** Freezing point in °C of propylene glycol at `volPercent` vol %; throws above 60 vol %. */
   readonly pgFreezePoint: (volPercent: number) => number;
-  /** Water's boiling point in °C at `gaugeBar` bar gauge (IAPWS-IF97). */
+  /** Water's boiling point in °C at `gaugeBar` bar gauge (IAPWS-IF97); throws above 3 bar gauge. */
   readonly waterBoilingPoint: (gaugeBar: number) => number;
   /** `inletCelsius − outletCelsius` in K (positive when the coolant cools across the part). */
   readonly temperatureDrop: (inletCelsius: number, outletCelsius: number) => number;

@@ -84,16 +84,66 @@ describe('freezePoint — past the table (trade-facts.md: above about 60 mass % 
       const r = freezePoint({ glycol, percent, basis });
       expect(r.celsius).toBeNull();
       expect(r.warnings.map((w) => w.code)).toContain('over-concentrated');
-      expect(r.warnings[0]?.message).toMatch(
-        /over-concentrated, protection falls again; use 40–60 %/i,
+      expect(r.warnings[0]?.message).toMatch(/over-concentrated, protection falls again/i);
+      expect(r.warnings[0]?.message).toContain(
+        glycol === 'ethylene' ? 'use 40–55 vol %' : 'use 40–60 vol %',
       );
     },
   );
 
-  it('warns below the 40–60 vol % of ASTM D3306 but still gives the figure', () => {
+  // Heatpath's judgement (recommended-concentration.ts): the cited EG table ends at 57.8 vol %,
+  // so the advice for EG is 40–55 vol % and every advised mix has a figure.
+  it.each([40, 45, 50, 55])(
+    'ethylene glycol: every advised mix has a figure (%d vol %%)',
+    (vol) => {
+      const r = freezePoint({ glycol: 'ethylene', percent: vol, basis: 'volume' });
+      expect(r.celsius).not.toBeNull();
+      expect(r.warnings).toEqual([]);
+    },
+  );
+
+  it('ethylene glycol at 56–57.8 vol % keeps its figure but is above the advised 40–55 vol %', () => {
+    const r = freezePoint({ glycol: 'ethylene', percent: 57, basis: 'volume' });
+    expect(r.celsius).not.toBeNull();
+    expect(r.warnings.map((w) => w.code)).toEqual(['above-recommended-concentration']);
+    expect(r.warnings[0]?.message).toContain('40–55 vol %');
+  });
+
+  it('propylene glycol: the whole ASTM D3306 range 40–60 vol % has a figure', () => {
+    for (const vol of [40, 50, 60]) {
+      const r = freezePoint({ glycol: 'propylene', percent: vol, basis: 'volume' });
+      expect(r.celsius).not.toBeNull();
+      expect(r.warnings).toEqual([]);
+    }
+  });
+
+  it('warns below the advised 40 vol % (ASTM D3306) but still gives the figure', () => {
     const r = freezePoint({ glycol: 'ethylene', percent: 30, basis: 'volume' });
     expect(r.celsius).not.toBeNull();
     expect(r.warnings.map((w) => w.code)).toEqual(['below-recommended-concentration']);
+  });
+});
+
+// ASHRAE's EG table in 1-mass-% steps, as reproduced in CoolProp's source data
+// (dev/incompressible_liquids/CPIncomp/data/SecCool/xVolume/"ASHRAE, Ethylene Glycol_TFreeze.txt"):
+// rows between the 5 % rows Heatpath stores, so they check the interpolation, not the stored rows.
+// [vol %, freezing point °C]
+const ASHRAE_EG_FINE: readonly (readonly [number, number])[] = [
+  [22, -10.2],
+  [30.6, -16.2],
+  [36.5, -21.3],
+  [40.5, -25.3],
+  [45.5, -31.1],
+  [49.6, -36.4],
+  [50.6, -37.9],
+  [54.7, -44.2],
+  [56.8, -47.1],
+];
+
+describe('freezePoint — between the stored rows, against ASHRAE’s 1 % rows (CoolProp reproduction, ±0.3 K)', () => {
+  it.each(ASHRAE_EG_FINE)('%d vol %% freezes at %d °C', (vol, celsius) => {
+    const r = freezePoint({ glycol: 'ethylene', percent: vol, basis: 'volume' });
+    expect(Math.abs((r.celsius ?? NaN) - celsius)).toBeLessThanOrEqual(SAME_SOURCE_K);
   });
 });
 

@@ -4,7 +4,7 @@ import { convertPercent } from './concentration-basis.js';
 import { readBasis, readGlycol } from './glycol-options.js';
 import { GLYCOL_CURVES, GLYCOL_NAMES } from './glycol-tables.js';
 import type { Basis, Glycol } from './glycol-tables.js';
-import { concentrationWarnings } from './recommended-concentration.js';
+import { advisedRange, concentrationWarnings } from './recommended-concentration.js';
 import { ASHRAE_GLYCOL_TABLE } from './sources.js';
 import type { SourceNote } from './sources.js';
 import { toCanonical } from './units.js';
@@ -32,7 +32,7 @@ export function overConcentratedWarning(glycol: Glycol): CoolantWarning {
   const max = GLYCOL_CURVES[glycol].maxPercent;
   return warning(
     'over-concentrated',
-    `Over-concentrated, protection falls again; use 40–60 %. The handbook table for ${GLYCOL_NAMES[glycol]} ends at ${max.mass} mass % (${max.volume} vol %) and published figures beyond it disagree, so no freezing point is given.`,
+    `Over-concentrated, protection falls again at richer mixes; use ${advisedRange(glycol)} for ${GLYCOL_NAMES[glycol]}. The handbook table ends at ${max.mass} mass % (${max.volume} vol %) and published figures beyond it disagree, so no freezing point is given.`,
   );
 }
 
@@ -61,7 +61,7 @@ export function freezePointOf(glycol: Glycol, percent: number, basis: Basis): Fr
     celsius: curves.freezeByMass(massPercent),
     massPercent,
     volumePercent,
-    warnings: concentrationWarnings(volumePercent),
+    warnings: concentrationWarnings(glycol, volumePercent),
     source: ASHRAE_GLYCOL_TABLE,
   };
 }

@@ -4,8 +4,11 @@
 import { convertPercent } from './concentration-basis.js';
 import { coolantProperties } from './coolant-properties.js';
 import { CoolantInputError } from './errors.js';
+import { formatFigure, roundForDisplay } from './display-rounding.js';
+import { freezePointOf } from './freeze-point.js';
 import { readBasis, readGlycol } from './glycol-options.js';
 import type { Basis, Glycol } from './glycol-tables.js';
+import { GLYCOL_NAMES } from './glycol-tables.js';
 import type { SourceNote } from './sources.js';
 import { toCanonical } from './units.js';
 import type { QuantityInput } from './units.js';
@@ -35,28 +38,70 @@ export interface HeatFlowResult {
   readonly sources: readonly SourceNote[];
 }
 
+/**
+ * Limits of what a road vehicle's cooling circuit can show (common practice). A car's main pump
+ * moves roughly 50–250 L/min at high engine speed and a heavy truck's a few hundred; 1,000 L/min
+ * is beyond any vehicle pump, so a larger figure is a misreading or the wrong unit. Liquid coolant
+ * under a cap of at most 3 bar (the largest rating Heatpath accepts) boils below about 150 °C
+ * even as a rich glycol mix, so a hotter reading is not liquid coolant.
+ */
+export const HEAT_FLOW_LIMITS = {
+  maxLitresPerMinute: 1000,
+  maxReadingCelsius: 150,
+} as const;
+
+function readTemperature(
+  value: QuantityInput,
+  field: string,
+  freezeCelsius: number | null,
+  mixName: string,
+): number {
+  const celsius = toCanonical(value, 'temperature', field);
+  if (celsius > HEAT_FLOW_LIMITS.maxReadingCelsius) {
+    throw new CoolantInputError(
+      field,
+      `${formatFigure(celsius, 'temperature')} is hotter than liquid coolant gets under any pressure cap; check the reading and the unit.`,
+    );
+  }
+  if (freezeCelsius !== null && celsius < freezeCelsius) {
+    throw new CoolantInputError(
+      field,
+      `${mixName} freezes at about ${formatFigure(freezeCelsius, 'freezePoint')}, so at ${formatFigure(celsius, 'temperature')} it would not flow; check the reading, the unit and the mix.`,
+    );
+  }
+  return celsius;
+}
+
 /** Heat flow in kW with properties at the mean of inlet and outlet temperatures. */
 export function heatFlow(options: HeatFlowOptions): HeatFlowResult {
   const glycol = readGlycol(options.glycol);
   const basis = readBasis(options.basis);
   const percent = toCanonical(options.percent, 'percent', 'percent');
   const flow = toCanonical(options.litresPerMinute, 'volumeFlow', 'litresPerMinute');
-  const inlet = toCanonical(options.inletCelsius, 'temperature', 'inletCelsius');
-  const outlet = toCanonical(options.outletCelsius, 'temperature', 'outletCelsius');
-
-  if (glycol === 'propylene' && percent > 0) {
+  if (flow > HEAT_FLOW_LIMITS.maxLitresPerMinute) {
     throw new CoolantInputError(
-      'glycol',
-      'No cited density and specific-heat table for propylene glycol is in Heatpath yet, so no heat flow is computed for it.',
+      'litresPerMinute',
+      `${flow.toPrecision(3)} L/min is more than any vehicle coolant pump moves (a car's moves roughly 50–250 L/min); check the flow meter's reading and unit.`,
     );
   }
   const volumePercent = convertPercent(glycol, percent, basis, 'volume');
   if (volumePercent === null) {
-    throw new CoolantInputError('percent', `${percent} ${basis} % is beyond the handbook table.`);
+    throw new CoolantInputError(
+      'percent',
+      `${percent} ${basis} % ${GLYCOL_NAMES[glycol]} is richer than the handbook tables reach; no advised mix is that strong.`,
+    );
   }
+  const mixName =
+    volumePercent === 0
+      ? 'Water'
+      : `${roundForDisplay(volumePercent, 'concentration')} vol % ${GLYCOL_NAMES[glycol]}`;
+  const freezeCelsius = freezePointOf(glycol, volumePercent, 'volume').celsius;
+  const inlet = readTemperature(options.inletCelsius, 'inletCelsius', freezeCelsius, mixName);
+  const outlet = readTemperature(options.outletCelsius, 'outletCelsius', freezeCelsius, mixName);
+
   const meanCelsius = (inlet + outlet) / 2;
-  const props = coolantProperties(volumePercent, meanCelsius);
-  // L/min → m³/s, then kg/s.
+  const props = coolantProperties(glycol, volumePercent, meanCelsius);
+  // L/min → m³/s, then kg/s. The flow meter reads volume at the coolant's own temperature.
   const massFlow = (props.density * flow) / 60_000;
   const drop = inlet - outlet;
   return {

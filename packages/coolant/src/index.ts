@@ -47,3 +47,16 @@ export type {
   PressureTestRule,
   PressureTestVerdict,
 } from './pressure-test.js';
+export { MAX_SYSTEM_LITRES } from './mix-adjustment.js';
+export { HEAT_FLOW_LIMITS } from './heat-flow.js';
+export { PROPERTY_MAX_VOLUME_PERCENT, PROPERTY_TEMPERATURE_RANGE } from './coolant-properties.js';
+export { advisedRange, RECOMMENDED_VOLUME_PERCENT } from './recommended-concentration.js';
+export {
+  formatFigure,
+  formatSignificant,
+  QUANTITY_FIGURES,
+  roundForDisplay,
+  roundSignificant,
+  SIGNIFICANT_FIGURES,
+} from './display-rounding.js';
+export type { FigureKind, QuantityFigure, SignificantFigure } from './display-rounding.js';

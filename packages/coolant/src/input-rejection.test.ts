@@ -162,3 +162,51 @@ describe('bad input is refused with CoolantInputError and its field', () => {
     expect(fieldOf(run)).toBe(field);
   });
 });
+
+// Values that can be typed but no road vehicle can show (issue 13). The limits are Heatpath's,
+// from common practice: caps 0.9–1.6 bar, car systems 5–15 L, car pumps roughly 50–250 L/min.
+describe('figures no vehicle can show are refused, not computed', () => {
+  it.each<[string, () => unknown, string]>([
+    [
+      'a 30 bar cap in the pressure test',
+      () => pressureTest({ startBar: 30, endBar: 30, minutes: 15, capRatingBar: 30 }),
+      'capRatingBar',
+    ],
+    ['a 30 bar cap in the boiling point', () => boilingPoint({ gaugeBar: 30 }), 'gaugeBar'],
+    [
+      'a 5,000 L system',
+      () =>
+        mixAdjustment({
+          glycol: 'ethylene',
+          systemLitres: 5000,
+          currentPercent: 30,
+          targetPercent: 50,
+        }),
+      'systemLitres',
+    ],
+    ['1,000,000 L/min', () => heatFlow({ ...heat, litresPerMinute: 1_000_000 }), 'litresPerMinute'],
+    ['a 400 °C coolant reading', () => heatFlow({ ...heat, inletCelsius: 400 }), 'inletCelsius'],
+    [
+      'a 2.5 bar test on a 1.0 bar system',
+      () => pressureTest({ startBar: 2.5, endBar: 2.5, minutes: 15, capRatingBar: 1.0 }),
+      'startBar',
+    ],
+  ])('%s', (_label, run, field) => {
+    expect(fieldOf(run)).toBe(field);
+  });
+
+  it('keeps what a real vehicle can show: a 1.4 bar cap, a 120 L truck system, 300 L/min', () => {
+    expect(
+      pressureTest({ startBar: 1.4, endBar: 1.4, minutes: 15, capRatingBar: 1.4 }).verdict,
+    ).toBe('holds');
+    expect(
+      mixAdjustment({
+        glycol: 'ethylene',
+        systemLitres: 120,
+        currentPercent: 30,
+        targetPercent: 50,
+      }).drainLitres,
+    ).toBeGreaterThan(0);
+    expect(heatFlow({ ...heat, litresPerMinute: 300 }).kilowatts).toBeGreaterThan(0);
+  });
+});

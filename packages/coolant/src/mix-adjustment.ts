@@ -42,6 +42,10 @@ export interface MixAdjustmentResult {
   readonly rule: string;
 }
 
+// Common practice: cars hold about 5–15 L, heavy trucks and coaches up to about 100–150 L. 500 L
+// leaves room for the largest vehicles a workshop sees while refusing a misread figure.
+export const MAX_SYSTEM_LITRES = 500;
+
 const RULE =
   'Volume balance: drain x litres of the present mix (c %) from a system of V litres and refill with x litres at a %; the result is (c·(V − x) + a·x) / V. Percentages are by volume, and mixing is taken as adding volumes (real glycol–water mixes shrink slightly).';
 
@@ -55,6 +59,12 @@ export function mixAdjustment(options: MixAdjustmentOptions): MixAdjustmentResul
     throw new CoolantInputError(
       'systemLitres',
       'Enter the system capacity; it must be more than 0 litres.',
+    );
+  }
+  if (system > MAX_SYSTEM_LITRES) {
+    throw new CoolantInputError(
+      'systemLitres',
+      `${system.toPrecision(3)} L is more coolant than any road vehicle holds (cars about 5–15 L, heavy trucks and coaches up to about 100–150 L); check the capacity in the maker's data and the unit.`,
     );
   }
   const strengthening = target > current;
@@ -93,7 +103,7 @@ function result(
   target: number,
 ): MixAdjustmentResult {
   const resultingPercent = (current * (system - drain) + add * drain) / system;
-  const warnings: CoolantWarning[] = [...concentrationWarnings(target)];
+  const warnings: CoolantWarning[] = [...concentrationWarnings(glycol, target)];
   if (drain > 0) {
     if (drain >= system * (1 - 1e-9)) {
       warnings.push(

@@ -116,7 +116,7 @@ describe('pressureTest — the cap rating (common practice: 1.4–1.6 bar common
 
   it('refuses a test started more than 10 % above the cap rating (2.5 bar on a 1.0 bar cap, issue 13)', () => {
     expect(() => verdictOf(2.5, 2.5, 15, 1.0)).toThrow(CoolantInputError);
-    expect(() => verdictOf(2.5, 2.5, 15, 1.0)).toThrow(/above the 1 bar cap rating/);
+    expect(() => verdictOf(2.5, 2.5, 15, 1.0)).toThrow(/above the 1.00 bar cap rating/);
     // Up to 10 % over is a pump stroke's overshoot and is read normally.
     expect(verdictOf(1.1, 1.1, 15, 1.0)).toBe('holds');
   });

@@ -4,6 +4,7 @@
 // formulas are built from, so the walk and the calculator cannot disagree.
 import { CoolantInputError } from './errors.js';
 import { capRatingWarning, checkCapRating } from './cap-rating.js';
+import { formatFigure } from './display-rounding.js';
 import { SYSTEM_PRESSURE_TEST } from './sources.js';
 import type { SourceNote } from './sources.js';
 import { toCanonical } from './units.js';
@@ -112,7 +113,7 @@ function readInputs(options: PressureTestOptions): Readings {
   if (exceeds(start, rating * (1 + R.maxOverRatingFraction))) {
     throw new CoolantInputError(
       'startBar',
-      `The test started more than ${R.maxOverRatingFraction * 100} % above the ${rating} bar cap rating. Pumping past the rating can burst a hose or crack a tank and proves nothing: release the pressure slowly and repeat at the rating.`,
+      `The test started more than ${R.maxOverRatingFraction * 100} % above the ${bar(rating)} cap rating. Pumping past the rating can burst a hose or crack a tank and proves nothing: release the pressure slowly and repeat at the rating.`,
     );
   }
   if (end < 0) {
@@ -151,7 +152,7 @@ const exceeds = (value: number, limit: number): boolean => value > limit + EPSIL
 const reaches = (value: number, limit: number): boolean => value >= limit - EPSILON;
 
 function bar(value: number): string {
-  return `${value.toFixed(2)} bar`;
+  return formatFigure(value, 'pressure');
 }
 
 /** Verdict on a cooling-system pressure test. */

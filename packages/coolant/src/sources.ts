@@ -21,8 +21,14 @@ export const IAPWS_IF97_SATURATION: SourceNote = {
   status: 'international standard formulation',
 };
 
-export const IAPWS_IF97_WATER_85C: SourceNote = {
-  source: 'Water properties from IAPWS-IF97 at 85 °C, 0.2 MPa',
+export const ASHRAE_GLYCOL_PROPERTIES: SourceNote = {
+  source:
+    "ASHRAE Handbook—Fundamentals, density and specific-heat tables for aqueous ethylene and propylene glycol by volume % (edition not verified; as reproduced in the CoolProp project's incompressible-liquid source data, 0–100 °C)",
+  status: 'published handbook table',
+};
+
+export const IAPWS_IF97_WATER: SourceNote = {
+  source: 'Water density and specific heat from IAPWS-IF97 region 1 at 0.3 MPa absolute, 0–120 °C',
   status: 'international standard formulation',
 };
 

@@ -1,5 +1,6 @@
 // Judges the temperature difference across the engine, radiator or heater core, the quick
 // infrared check that separates a circulation problem from an air-side (radiator, fan) problem.
+import { formatFigure } from './display-rounding.js';
 import { CoolantInputError } from './errors.js';
 import {
   ENGINE_TEMPERATURE_DIFFERENCE,
@@ -134,13 +135,13 @@ export function assessTemperatureDrop(
   let explanation: string;
   if (difference > band.max) {
     verdict = 'low-flow-suspected';
-    explanation = `${difference.toFixed(1)} K is above the ${band.min}–${band.max} K band: the coolant is moving slowly enough to give up (or take up) much more heat than usual. Suspect circulation: pump or its shroud, thermostat, air lock, restriction.`;
+    explanation = `${formatFigure(difference, 'temperatureDifference')} is above the ${band.min}–${band.max} K band: the coolant is moving slowly enough to give up (or take up) much more heat than usual. Suspect circulation: pump or its shroud, thermostat, air lock, restriction.`;
   } else if (difference < band.min) {
     verdict = 'air-side-suspected';
-    explanation = `${difference.toFixed(1)} K is below the ${band.min}–${band.max} K band: the coolant circulates but little heat changes hands across this part. Suspect the air side: fan, blocked radiator fins, airflow.`;
+    explanation = `${formatFigure(difference, 'temperatureDifference')} is below the ${band.min}–${band.max} K band: the coolant circulates but little heat changes hands across this part. Suspect the air side: fan, blocked radiator fins, airflow.`;
   } else {
     verdict = 'normal';
-    explanation = `${difference.toFixed(1)} K is within the ${band.min}–${band.max} K band.`;
+    explanation = `${formatFigure(difference, 'temperatureDifference')} is within the ${band.min}–${band.max} K band.`;
   }
   return { verdict, differenceKelvin: difference, explanation, rule, warnings };
 }

@@ -10,6 +10,7 @@ export type CoolantWarningCode =
   | 'vacuum'
   | 'above-usual-cap-pressure'
   | 'properties-approximated'
+  | 'properties-extrapolated'
   | 'thermostat-may-be-closed'
   | 'no-published-band'
   | 'unusual-cap-rating'

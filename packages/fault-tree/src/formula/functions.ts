@@ -40,7 +40,7 @@ const coolantFunctions: readonly FormulaFunction[] = [
   {
     name: 'waterBoilingPoint',
     summary:
-      "waterBoilingPoint(gaugeBar): boiling point in °C of plain water under that gauge pressure, e.g. a cap's rating.",
+      "waterBoilingPoint(gaugeBar): boiling point in °C of plain water under that gauge pressure, e.g. a cap's rating (no figure above 3 bar gauge, beyond any vehicle cap).",
     minArgs: 1,
     maxArgs: 1,
     dimension: fixedSignature(
