@@ -17,6 +17,7 @@ import { NewCaseRoute, newCaseLoader } from './routes/new-case';
 import { SignInRoute, signInLoader } from './routes/sign-in';
 import { SignedInLayout, signedInLoader } from './routes/signed-in-layout';
 import { StaffRoute, staffLoader } from './routes/staff';
+import { UnlockRoute } from './routes/unlock';
 import { AppErrorPage, NotFoundPage, RouteErrorPage, StartingUp } from './shell/error-pages';
 
 // One module for every calculator route, so they share one lazily loaded chunk.
@@ -45,6 +46,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         // Opened from e-mailed links, without a session.
         { path: '/forgot-password', Component: ForgotPasswordRoute },
         { path: '/set-password', Component: SetPasswordRoute },
+        { path: '/unlock', Component: UnlockRoute },
         {
           id: 'signed-in',
           loader: signedInLoader(queryClient),

@@ -44,6 +44,22 @@ describe('SignInForm', () => {
     expect((screen.getByLabelText('Password') as HTMLInputElement).value).toBe('');
   });
 
+  it('says sign-in is paused, in the API’s words, after too many wrong passwords', async () => {
+    const paused =
+      'Too many wrong passwords for this account from browsers it has not signed in on before, so those are paused for 15 minutes.';
+    mockApi({ 'POST /api/auth/sign-in': () => errorResponse(429, 'rate_limited', paused) });
+    const { onSignedIn } = renderForm();
+    const user = userEvent.setup();
+    await user.type(screen.getByLabelText('E-mail address'), 'tech@harbourlane.test');
+    await user.type(screen.getByLabelText('Password'), 'heatpath-demo');
+    await user.click(screen.getByRole('button', { name: 'Sign in' }));
+
+    const alert = await screen.findByRole('alert');
+    expect(alert.textContent).toContain('Sign-in paused');
+    expect(alert.textContent).toContain(paused);
+    expect(onSignedIn).not.toHaveBeenCalled();
+  });
+
   it('checks the fields before sending anything', async () => {
     const { fetchMock } = mockApi({});
     renderForm();

@@ -1,11 +1,13 @@
 // The sign-in form. Field rules come from the shared contract; the API's own message (wrong
-// password, too many attempts) is shown in one alert above the button.
+// password, sign-in paused after too many wrong passwords) is shown in one alert above the
+// button.
 import { signInRequestSchema } from '@heatpath/contracts';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
+import { isApiError } from '../../../lib/api-client';
 import { useSignIn } from '../api/sign-in';
 
 interface SignInFormProps {
@@ -31,7 +33,15 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Sign in">
       {signIn.error ? (
-        <Alert tone="danger" role="alert" title="Not signed in">
+        <Alert
+          tone="danger"
+          role="alert"
+          title={
+            isApiError(signIn.error) && signIn.error.status === 429
+              ? 'Sign-in paused'
+              : 'Not signed in'
+          }
+        >
           <p>{signIn.error.message}</p>
         </Alert>
       ) : null}
