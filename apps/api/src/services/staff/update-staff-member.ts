@@ -1,4 +1,6 @@
 // A lead changes a person's role, name or whether they can sign in. Past work stays theirs.
+// Deactivating ends the person's sessions in the database itself (migration 0007's trigger), so
+// reactivating them later does not bring an old session back.
 import type { UpdateStaffRequest } from '@heatpath/contracts';
 import { User } from '../../db/models/index';
 import { AppError, notFound } from '../../errors';
