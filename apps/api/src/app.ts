@@ -12,6 +12,7 @@ import type { Config } from './config';
 import { systemClock } from './lib/clock';
 import type { Clock } from './lib/clock';
 import { createDeviceSigner } from './lib/device-token';
+import { serializeError } from './lib/logger';
 import { createSessionSigner } from './lib/session-token';
 import { authenticate } from './middlewares/authenticate';
 import { crossSiteGuard } from './middlewares/cross-site-guard';
@@ -69,10 +70,19 @@ export function createApp(deps: AppDeps): express.Express {
   );
 
   const api = express.Router();
-  api.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/health' } }));
+  api.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/health' },
+      // The same error serializer as the logger's, so no SQL or bound value reaches a log line.
+      serializers: { err: serializeError },
+    }),
+  );
   api.use(express.json({ limit: config.bodyLimit, strict: true }));
   api.use(cookieParser());
   api.use(crossSiteGuard);
+  // Nothing the API sends is cached: attachments, repair-order exports and logs hold customers'
+  // details, and a shared workshop PC must not keep them after sign-out.
   api.use((_req, res, next) => {
     res.set('Cache-Control', 'no-store');
     next();

@@ -20,6 +20,8 @@ const envSchema = z
     PGPASSWORD: z.string().default(''),
     PGDATABASE: z.string().default('heatpath'),
     DB_POOL_MAX: z.coerce.number().int().min(1).max(200).default(10),
+    DB_POOL_ACQUIRE_MS: z.coerce.number().int().min(100).max(60_000).default(3000),
+    DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(2000),
     SESSION_SECRET: z.string().optional(),
     SESSION_TTL_HOURS: z.coerce
       .number()
@@ -108,6 +110,11 @@ const envSchema = z
       port: env.PORT,
       databaseUrl,
       dbPoolMax: env.DB_POOL_MAX,
+      dbPool: {
+        poolMax: env.DB_POOL_MAX,
+        acquireTimeoutMs: env.DB_POOL_ACQUIRE_MS,
+        connectTimeoutMs: env.DB_CONNECT_TIMEOUT_MS,
+      },
       sessionSecret: secret,
       sessionTtlHours: env.SESSION_TTL_HOURS,
       cookieSecure: env.COOKIE_SECURE ?? env.NODE_ENV === 'production',

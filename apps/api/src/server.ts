@@ -12,7 +12,7 @@ import { createOutboxWorker } from './lib/mail/outbox-worker';
 
 const config = loadConfig();
 const logger = createLogger(config.logLevel);
-const sequelize = createSequelize(config.databaseUrl, { poolMax: config.dbPoolMax });
+const sequelize = createSequelize(config.databaseUrl, config.dbPool);
 initModels(sequelize);
 
 const mail = createMailContext({ publicUrl: config.mail.publicUrl, secret: config.sessionSecret });

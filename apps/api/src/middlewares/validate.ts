@@ -2,6 +2,7 @@
 import type { RequestHandler } from 'express';
 import type { z } from 'zod';
 import { AppError } from '../errors';
+import { unstorableTextPath } from '../lib/storable-text';
 
 export function describeZodError(error: z.ZodError): AppError {
   const fields: Record<string, string> = {};
@@ -17,10 +18,23 @@ export function describeZodError(error: z.ZodError): AppError {
 
 type Part = 'body' | 'query' | 'params';
 
-/** Validate `req[part]` and store the parsed value in `res.locals[part]`. */
+/**
+ * Validate `req[part]` and store the parsed value in `res.locals[part]`. Every request part
+ * passes here, so this is also the one place text PostgreSQL cannot store is refused.
+ */
 export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHandler {
   return (req, res, next) => {
     const source: unknown = part === 'body' ? (req.body ?? {}) : req[part];
+    const badText = unstorableTextPath(source);
+    if (badText !== null) {
+      return next(
+        new AppError(
+          'bad_request',
+          `The text${badText === '_' ? '' : ` in ${badText}`} contains characters that cannot be stored (a NUL character or half of a character pair); remove them and try again.`,
+          { [badText]: 'Contains a character that cannot be stored.' },
+        ),
+      );
+    }
     const parsed = schema.safeParse(source);
     if (!parsed.success) return next(describeZodError(parsed.error));
     res.locals[part] = parsed.data;

@@ -27,6 +27,8 @@ export const permissions = {
   'outbox.manage': ['lead'],
   'trees.read': ['lead', 'technician', 'advisor'],
   'trees.edit': ['lead'],
+  // Only a tree that was never published: no case can have used it.
+  'trees.delete': ['lead'],
   // The training casebook: the lead marks finished cases, builds courses, reads progress and
   // signs off; apprentices (and the lead, to preview) replay and predict. Apprentices see only
   // training cases, stripped of customer details, and only their own scores.

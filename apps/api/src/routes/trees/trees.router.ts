@@ -1,4 +1,5 @@
-// /api/trees: the library, versions, drafts, publish and retire, diff, export, regression replay.
+// /api/trees: the library, versions, drafts, publish and retire, diff, export, regression replay,
+// and deleting a tree that was never published.
 import { Router } from 'express';
 import type { Response } from 'express';
 import type { CreateTreeRequest, PublishDraftRequest, SaveDraftRequest } from '@heatpath/contracts';
@@ -11,6 +12,7 @@ import { requirePermission } from '../../middlewares/require-permission';
 import { validate } from '../../middlewares/validate';
 import { presentVersionDetail } from '../../presenters/tree.presenter';
 import { createTree } from '../../services/trees/create-tree';
+import { deleteUnpublishedTree } from '../../services/trees/delete-tree';
 import {
   discardDraft,
   retireVersion,
@@ -77,6 +79,11 @@ export function treesRouter() {
       where: { treeId: entry.id, workshopId: actorOf(res).workshopId },
     });
     res.json({ ...entry, regressionCaseIds: regression.map((r) => r.caseId) });
+  });
+
+  router.delete('/:treeId', requirePermission('trees.delete'), async (_req, res) => {
+    await deleteUnpublishedTree({ actor: actorOf(res), treeId: params(res).treeId });
+    res.status(204).end();
   });
 
   router.get(

@@ -1,6 +1,7 @@
 // A free note on a case or one of its steps, kept in the case's history with who and when.
 import type { AddNoteRequest } from '@heatpath/contracts';
 import { CaseEvent } from '../../db/models/index';
+import { AppError } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findCase } from './find-case';
@@ -20,7 +21,20 @@ export async function addCaseNote(options: {
       where: { caseId: kase.id, idempotencyKey: input.idempotencyKey },
       transaction,
     });
-    if (earlier) return earlier;
+    if (earlier) {
+      const text = (earlier.payload as { text?: unknown }).text;
+      const same =
+        earlier.kind === 'note' &&
+        text === input.text &&
+        (earlier.nodeId ?? null) === (input.nodeId ?? null);
+      if (!same) {
+        throw new AppError(
+          'conflict',
+          'This request repeats an earlier one (the same idempotency key) with a different note. The earlier note is kept; send a new note as a new request.',
+        );
+      }
+      return earlier;
+    }
     const note = await CaseEvent.create(
       {
         caseId: kase.id,

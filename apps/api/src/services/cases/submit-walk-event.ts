@@ -3,7 +3,7 @@
 // says it is; it is stored before the response, so the next step never shows for an answer that
 // was not kept. A retry with the same idempotency key gets the stored result, not a second answer.
 import { applyWalkEvent, describeWalk, replayWalk } from '@heatpath/fault-tree';
-import type { WalkEvent, WalkSummary } from '@heatpath/fault-tree';
+import type { CompiledTree, WalkEvent, WalkSummary } from '@heatpath/fault-tree';
 import { CaseEvent, DiagnosticCase, TreeVersion } from '../../db/models/index';
 import { AppError } from '../../errors';
 import { compiledPublishedTree } from '../../lib/compiled-trees';
@@ -12,6 +12,26 @@ import type { Actor } from '../../policies/permissions';
 import { draftFindings } from './draft-findings';
 import { findCase } from './find-case';
 import { walkEventsAndKey } from './walk-state';
+
+/** JSON with keys sorted, so a stored event (jsonb reorders keys) compares with a fresh one. */
+function canonical(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
+    v !== null && typeof v === 'object' && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
+      : v,
+  );
+}
+
+/**
+ * Whether a repeated request carries the answer stored under its key: the request is checked
+ * again where the walk stood then, and the event it makes compared with the stored one in the
+ * shape the walk keeps (a key the schema drops, or a different key order, is no difference).
+ */
+function sameAnswer(tree: CompiledTree, events: unknown[], index: number, event: unknown): boolean {
+  const before = replayWalk(tree, events.slice(0, index));
+  const again = applyWalkEvent(tree, before.snapshot, event);
+  return again.ok && canonical(again.event) === canonical(events[index]);
+}
 
 export interface SubmitResult {
   walk: WalkSummary;
@@ -35,7 +55,7 @@ export async function submitWalkEvent(options: {
     const tree = await compiledPublishedTree(kase.treeVersionId, (id) =>
       TreeVersion.findByPk(id, { transaction }),
     );
-    const { events, keySeen } = await walkEventsAndKey(kase.id, idempotencyKey, transaction);
+    const { events, keyed } = await walkEventsAndKey(kase.id, idempotencyKey, transaction);
 
     const replay = replayWalk(tree, events);
     const summary = (snapshot = replay.snapshot, applied = replay.applied): WalkSummary => ({
@@ -44,7 +64,15 @@ export async function submitWalkEvent(options: {
       applied,
     });
 
-    if (keySeen) return { walk: summary(), repeated: true };
+    if (keyed !== null) {
+      if (keyed === 'other' || !sameAnswer(tree, events, keyed, options.event)) {
+        throw new AppError(
+          'conflict',
+          'This request repeats an earlier one (the same idempotency key) with a different answer. The earlier answer is kept; send a new answer as a new request.',
+        );
+      }
+      return { walk: summary(), repeated: true };
+    }
 
     if (kase.status === 'diagnosed' || kase.status === 'closed') {
       throw new AppError(

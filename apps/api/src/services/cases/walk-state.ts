@@ -26,14 +26,15 @@ export async function walkEventsOf(caseId: string, transaction?: Transaction): P
 }
 
 /**
- * One read of a case's history for an answer: the walk events in order, and whether an event
- * with this idempotency key is already stored (of any kind, since keys are unique per case).
+ * One read of a case's history for an answer: the walk events in order, and where an event with
+ * this idempotency key is already stored — its index among the walk events, or "other" when the
+ * key was used for something else (a note), since keys are unique per case.
  */
 export async function walkEventsAndKey(
   caseId: string,
   idempotencyKey: string,
   transaction: Transaction,
-): Promise<{ events: unknown[]; keySeen: boolean }> {
+): Promise<{ events: unknown[]; keyed: number | 'other' | null }> {
   const rows = (await CaseEvent.findAll({
     where: { caseId },
     order: [['seq', 'ASC']],
@@ -41,11 +42,12 @@ export async function walkEventsAndKey(
     raw: true,
     transaction,
   })) as unknown as { kind: string; payload: { event?: unknown }; idempotencyKey: string | null }[];
+  const walkRows = rows.filter((r) => r.kind === 'answer' || r.kind === 'back');
+  const index = walkRows.findIndex((r) => r.idempotencyKey === idempotencyKey);
+  const elsewhere = rows.some((r) => r.idempotencyKey === idempotencyKey);
   return {
-    events: rows
-      .filter((r) => r.kind === 'answer' || r.kind === 'back')
-      .map((r) => r.payload.event),
-    keySeen: rows.some((r) => r.idempotencyKey === idempotencyKey),
+    events: walkRows.map((r) => r.payload.event),
+    keyed: index >= 0 ? index : elsewhere ? 'other' : null,
   };
 }
 

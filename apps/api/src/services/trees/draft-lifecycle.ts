@@ -116,13 +116,21 @@ export async function discardDraft(options: { actor: Actor; treeId: string }) {
   });
 }
 
+/**
+ * Retires a published version. The version row is locked first, so of several concurrent
+ * retires exactly one finds it published; the others see it retired and get 409.
+ */
 export async function retireVersion(options: { actor: Actor; treeId: string; versionId: string }) {
   assertCan(options.actor, 'trees.edit');
-  const version = await findTreeVersion(options);
-  if (version.status !== 'published')
-    throw new AppError(
-      'conflict',
-      `Only a published version can be retired; this one is ${version.status}.`,
-    );
-  return version.update({ status: 'retired', retiredAt: new Date() });
+  return sequelizeOf().transaction(async (transaction) => {
+    const version = await findTreeVersion({ ...options, transaction, lock: true });
+    if (version.status === 'retired')
+      throw conflict(`Version ${version.version} is already retired; nothing was changed.`);
+    if (version.status !== 'published')
+      throw new AppError(
+        'conflict',
+        `Only a published version can be retired; this one is ${version.status}.`,
+      );
+    return version.update({ status: 'retired', retiredAt: new Date() }, { transaction });
+  });
 }

@@ -24,10 +24,12 @@ export async function findTreeVersion(options: {
   treeId: string;
   versionId: string;
   transaction?: Transaction;
+  lock?: boolean;
 }) {
   const version = await TreeVersion.findOne({
     where: { id: options.versionId, treeId: options.treeId, workshopId: options.actor.workshopId },
     transaction: options.transaction,
+    lock: options.lock ? options.transaction?.LOCK.UPDATE : undefined,
   });
   if (!version) throw notFound('That tree version');
   return version;

@@ -1,4 +1,6 @@
-// The trees a case can start from, with the version a new case would be pinned to.
+// The trees a case can start from, with the version a new case would be pinned to. A tree never
+// published cannot start a case: only the lead sees it here (marked "no published version yet"),
+// as a reminder to publish it.
 import { QueryTypes } from 'sequelize';
 import type { AvailableTree } from '@heatpath/contracts';
 import { Tree } from '../../db/models/index';
@@ -24,9 +26,12 @@ export async function listAvailableTrees(options: { actor: Actor }): Promise<Ava
           WHERE tree_id = t.id AND status = 'published'
           ORDER BY version DESC LIMIT 1
        ) v ON true
-      WHERE t.workshop_id = $1
+      WHERE t.workshop_id = $1 AND ($2 OR v.id IS NOT NULL)
       ORDER BY t.title`,
-    { bind: [options.actor.workshopId], type: QueryTypes.SELECT },
+    {
+      bind: [options.actor.workshopId, options.actor.role === 'lead'],
+      type: QueryTypes.SELECT,
+    },
   );
   return rows.map((r) => ({
     id: r.id,

@@ -1,6 +1,7 @@
 // The tree library: every tree of the workshop with its symptom, its versions (status, who
 // published it and when, the change note, how many cases used it) and its open draft, and the
-// three ways to add a tree — from scratch, as a copy, or by importing a definition file.
+// three ways to add a tree — from scratch, as a copy, or by importing a definition file — and
+// deleting one that was never published.
 import type { TreeLibraryEntry } from '@heatpath/contracts';
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router';
@@ -11,6 +12,7 @@ import { TextField } from '../../../components/ui/field';
 import { Panel } from '../../../components/ui/page';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
 import { useCreateTree } from '../api/create-tree';
+import { useDeleteTree } from '../api/delete-tree';
 import { useTreeLibrary } from '../api/get-tree-library';
 import { useStartDraft } from '../api/start-draft';
 import { formatWhen, statusTones, statusWords } from '../tree-format';
@@ -72,6 +74,10 @@ function TreeCard({ entry }: { entry: TreeLibraryEntry }) {
   const createTree = useCreateTree();
   const [copying, setCopying] = useState(false);
   const [copyTitle, setCopyTitle] = useState(`Copy of ${entry.title}`);
+  const deleteTree = useDeleteTree();
+  const [confirmDelete, setConfirmDelete] = useState(false);
+  // Only a tree no case can have used: every version it has is a draft.
+  const neverPublished = entry.versions.every((v) => v.status === 'draft');
   const headingId = `tree-${entry.id}`;
   const versions = [...entry.versions].sort((a, b) => b.version - a.version);
 
@@ -186,7 +192,31 @@ function TreeCard({ entry }: { entry: TreeLibraryEntry }) {
         <Button variant="secondary" aria-expanded={copying} onClick={() => setCopying(!copying)}>
           Copy<span className="sr-only"> {entry.title}</span>
         </Button>
+        {neverPublished && !confirmDelete ? (
+          <Button variant="danger" onClick={() => setConfirmDelete(true)}>
+            Delete<span className="sr-only"> {entry.title}</span>
+          </Button>
+        ) : null}
       </div>
+      {neverPublished && confirmDelete ? (
+        <Alert tone="caution" title={`Delete “${entry.title}”?`} role="alert">
+          <p>It was never published, so no case used it. Its draft is lost for good.</p>
+          <div className="flex flex-wrap gap-3">
+            <Button
+              variant="danger"
+              busy={deleteTree.isPending}
+              busyLabel="Deleting…"
+              onClick={() => deleteTree.mutate(entry.id)}
+            >
+              Yes, delete the tree
+            </Button>
+            <Button variant="secondary" onClick={() => setConfirmDelete(false)}>
+              Keep it
+            </Button>
+          </div>
+          {deleteTree.isError ? <p className="font-semibold">{deleteTree.error.message}</p> : null}
+        </Alert>
+      ) : null}
       {startDraft.isError ? (
         <Alert tone="danger" title="Draft not started" role="alert">
           <p>{startDraft.error.message}</p>
