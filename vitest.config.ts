@@ -8,7 +8,8 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['packages/*/src/**/*.test.ts'],
+          // The start and test commands' own logic (plain Node) is checked here too.
+          include: ['packages/*/src/**/*.test.ts', 'scripts/**/*.test.mjs'],
           environment: 'node',
         },
       },

@@ -1,13 +1,14 @@
 // `npm start`: install, start the private PostgreSQL, migrate, seed the demo on an empty
 // database, build the web app, start a local SMTP fake (unless SMTP_HOST names a real server)
-// and serve Heatpath from one Node process. Plain Node, no dependencies: it runs before
-// node_modules exists.
+// and serve Heatpath from one Node process, restarted if it crashes while the database and the
+// mail fake stay up. Plain Node, no dependencies: it runs before node_modules exists.
 import { spawn } from 'node:child_process';
 import { join } from 'node:path';
 import { ensureSecret, portIsFree, startCluster } from './lib/postgres.mjs';
 import { installDependencies } from './lib/install.mjs';
-import { fail, ok, step, BootstrapError } from './lib/log.mjs';
+import { fail, ok, step, warn, BootstrapError } from './lib/log.mjs';
 import { root, runPnpm, mustRun } from './lib/run.mjs';
+import { supervise } from './lib/supervise.mjs';
 
 const began = Date.now();
 const port = Number(process.env.PORT ?? 3000);
@@ -99,19 +100,29 @@ async function main() {
   env.PUBLIC_URL = process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}`;
 
   step('Starting Heatpath…');
-  const server = spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
-    cwd: api,
-    env,
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  const startServer = () =>
+    spawn(process.execPath, ['--import', 'tsx', 'src/server.ts'], {
+      cwd: api,
+      env,
+      stdio: ['ignore', 'pipe', 'inherit'],
+    });
   let announced = false;
-  let pending = '';
-  server.stdout.on('data', (chunk) => {
-    pending += chunk.toString();
-    const lines = pending.split('\n');
-    pending = lines.pop() ?? '';
-    for (const line of lines) showLogLine(line);
-    if (!announced && lines.some((l) => l.includes('"msg":"listening"'))) {
+  let restarts = 0;
+  // Each server process's log lines, and the banner the first time one is listening.
+  const follow = (server) => {
+    let pending = '';
+    let listening = false;
+    server.stdout.on('data', (chunk) => {
+      pending += chunk.toString();
+      const lines = pending.split('\n');
+      pending = lines.pop() ?? '';
+      for (const line of lines) showLogLine(line);
+      if (listening || !lines.some((l) => l.includes('"msg":"listening"'))) return;
+      listening = true;
+      if (announced) {
+        ok(`Heatpath is serving again on http://127.0.0.1:${port} (restart ${restarts}).`);
+        return;
+      }
       announced = true;
       const seconds = ((Date.now() - began) / 1000).toFixed(1);
       ok(`Heatpath is ready after ${seconds} s.`);
@@ -132,20 +143,46 @@ async function main() {
           : `  Mail goes to ${env.SMTP_HOST}:${env.SMTP_PORT ?? 2525} (SMTP_HOST).\n`,
       );
       console.log('  Press Ctrl-C to stop the server, the mail fake and the database.\n');
-    }
-  });
-  const shutdown = (signal) => {
-    step(`Stopping (${signal})…`);
-    server.kill('SIGTERM');
+    });
   };
-  process.on('SIGINT', () => shutdown('Ctrl-C'));
-  process.on('SIGTERM', () => shutdown('SIGTERM'));
-  server.on('exit', (code) => {
+  const stopEverything = (code) => {
     mailFake?.kill('SIGTERM');
     stopDb();
     ok(mailFake ? 'Server, mail fake and database stopped.' : 'Server and database stopped.');
     process.exit(code ?? 0);
+  };
+  const how = (code, signal) => (signal ? `was killed (${signal})` : `exited with code ${code}`);
+  const supervisor = supervise({
+    start: () => {
+      const server = startServer();
+      follow(server);
+      return server;
+    },
+    // The database and the mail fake keep running: only the server is started again.
+    onCrash: ({ code, signal, delayMs, attempt, maxRestarts }) =>
+      warn(
+        `Heatpath's server ${how(code, signal)}. The database and mail fake are still up; ` +
+          `restarting the server in ${delayMs / 1000} s (attempt ${attempt} of ${maxRestarts}).`,
+      ),
+    onRestart: () => {
+      restarts += 1;
+      step(`Restarting Heatpath's server (restart ${restarts})…`);
+    },
+    onGiveUp: ({ code, signal, crashes }) => {
+      warn(
+        `Heatpath's server ${how(code, signal)} again, after ${crashes} restarts in a row. ` +
+          'Giving up: see the messages above, fix the cause and run npm start again.',
+      );
+      stopEverything(1);
+    },
+    onStopped: (code) => stopEverything(code),
   });
+  const shutdown = (signal) => {
+    step(`Stopping (${signal})…`);
+    supervisor.stop('SIGTERM');
+  };
+  process.on('SIGINT', () => shutdown('Ctrl-C'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
 }
 
 // Warnings and errors always reach the terminal; everything else only when HEATPATH_VERBOSE=true.
