@@ -53,8 +53,6 @@ const RULE =
 export function mixAdjustment(options: MixAdjustmentOptions): MixAdjustmentResult {
   const glycol = readGlycol(options.glycol);
   const system = toCanonical(options.systemLitres, 'volume', 'systemLitres');
-  const current = toCanonical(options.currentPercent, 'percent', 'currentPercent');
-  const target = toCanonical(options.targetPercent, 'percent', 'targetPercent');
   if (system <= 0) {
     throw new CoolantInputError(
       'systemLitres',
@@ -67,6 +65,8 @@ export function mixAdjustment(options: MixAdjustmentOptions): MixAdjustmentResul
       `${system.toPrecision(3)} L is more coolant than any road vehicle holds (cars about 5–15 L, heavy trucks and coaches up to about 100–150 L); check the capacity in the maker's data and the unit.`,
     );
   }
+  const current = toCanonical(options.currentPercent, 'percent', 'currentPercent');
+  const target = toCanonical(options.targetPercent, 'percent', 'targetPercent');
   const strengthening = target > current;
   const add =
     options.addPercent === undefined

@@ -1,20 +1,30 @@
-// Formats figures for the calculator screens through the coolant package's own unit conversion.
-import { formatQuantity, type DisplayUnit, type Quantity } from '@heatpath/coolant';
+// Formats figures for the calculator screens. How many digits each kind of figure carries is
+// decided once, in the coolant package's display-rounding helper; this file only adds the true
+// minus sign and the words the screens use.
+import {
+  formatFigure,
+  formatSignificant,
+  roundForDisplay,
+  type DisplayUnit,
+  type QUANTITY_FIGURES,
+  type QuantityFigure,
+  type SignificantFigure,
+} from '@heatpath/coolant';
 import { withMinus } from './units';
 
-export function show<Q extends Quantity>(
-  value: number,
-  quantity: Q,
-  unit: DisplayUnit<Q>,
-  digits = 1,
-): string {
-  return withMinus(formatQuantity(value, quantity, { unit, digits }));
+type UnitOf<K extends QuantityFigure> = DisplayUnit<(typeof QUANTITY_FIGURES)[K]['quantity']>;
+
+/** A canonical value in the person's unit, rounded for its kind: show(-37.17, 'freezePoint', 'degC') → "−37 °C". */
+export function show<K extends QuantityFigure>(value: number, kind: K, unit: UnitOf<K>): string {
+  return withMinus(formatFigure(value, kind, unit));
 }
 
-export function showPercent(value: number, basis: 'volume' | 'mass', digits = 1): string {
-  return `${withMinus(value.toFixed(digits))} ${basis === 'volume' ? 'vol %' : 'mass %'}`;
+/** A fixed-unit figure to its significant figures: showSignificant(24.63, 'heatFlow') → "25 kW". */
+export function showSignificant(value: number, kind: SignificantFigure): string {
+  return withMinus(formatSignificant(value, kind));
 }
 
-export function showNumber(value: number, unit: string, digits = 1): string {
-  return `${withMinus(value.toFixed(digits))} ${unit}`;
+export function showPercent(value: number, basis: 'volume' | 'mass'): string {
+  const rounded = roundForDisplay(value, 'concentration');
+  return `${withMinus(String(rounded))} ${basis === 'volume' ? 'vol %' : 'mass %'}`;
 }

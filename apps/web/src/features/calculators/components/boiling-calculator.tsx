@@ -71,8 +71,8 @@ function BoilingResult({ outcome, units }: { outcome: BoilingOutcome; units: Dis
     <>
       <Headline
         label="Water boils at the cap’s rating at"
-        value={show(atCap.celsius, 'temperature', units.temperature)}
-        note={`At ${show(atCap.gaugeBar, 'pressure', units.pressure, 2)} gauge.`}
+        value={show(atCap.celsius, 'boilingPoint', units.temperature)}
+        note={`At ${show(atCap.gaugeBar, 'pressure', units.pressure)} gauge.`}
       />
       {/* No published margin counts as "enough", so the margin is stated, not judged; only
           reaching the boiling point itself is flagged. */}
@@ -85,17 +85,17 @@ function BoilingResult({ outcome, units }: { outcome: BoilingOutcome; units: Dis
             ? [
                 {
                   term: 'Margin to boiling',
-                  value: show(margin, 'temperatureDifference', units.temperatureDifference),
+                  value: show(margin, 'boilingMargin', units.temperatureDifference),
                 },
               ]
             : []),
           {
             term: 'If the cap stops holding',
-            value: `boils at ${show(unpressurised.celsius, 'temperature', units.temperature)}`,
+            value: `boils at ${show(unpressurised.celsius, 'boilingPoint', units.temperature)}`,
           },
           {
             term: 'Absolute pressure',
-            value: show(atCap.absoluteBar, 'pressure', units.pressure, 2),
+            value: show(atCap.absoluteBar, 'pressure', units.pressure),
           },
         ]}
       />

@@ -1,10 +1,11 @@
 // Heat flow: the heat the coolant gives up across a part, Q = ṁ·cp·ΔT, with the handbook's
-// density and specific heat at the mean temperature.
+// density and specific heat at the mean temperature. Figures are rounded for display by the
+// coolant package's helper; the package keeps full precision.
 import { heatFlow, type HeatFlowResult } from '@heatpath/coolant';
 import { useState } from 'react';
 import { SegmentedChoice } from '../../../components/ui/segmented-choice';
 import { calculate, errorFor, type Calculation } from '../calculation';
-import { show, showNumber, showPercent } from '../format';
+import { show, showPercent, showSignificant } from '../format';
 import { useUnits } from '../hooks/use-units';
 import { percentText, quantityText, unitSymbol, type DisplayUnits } from '../units';
 import { HotSystemCaution, RunningEngineCaution } from './cautions';
@@ -58,14 +59,14 @@ export function HeatFlowCalculator() {
       <form className="flex flex-col gap-5" onSubmit={(event) => event.preventDefault()}>
         <UnitToggles kinds={['temperature', 'volume']} />
         <p className="rounded-control bg-sunken p-3 text-sm">
-          Heatpath works this out only where cited property data exist: plain water, and ethylene
-          glycol at 40–60 vol % near normal running temperature. Outside that it says why instead of
-          guessing.
+          Works for plain water, and ethylene or propylene glycol up to 60 vol %, at a mean coolant
+          temperature of 0–120 °C (handbook tables to 100 °C, carried on in a straight line above).
+          Outside that it says why instead of guessing.
         </p>
         <GlycolField
           value={answer}
           onChange={setAnswer}
-          hint="Density and specific heat depend on the glycol and its strength."
+          hint="Ethylene or propylene glycol: density and specific heat differ."
           error={errorFor(calculation, 'glycol')}
         />
         <NumberField
@@ -133,7 +134,7 @@ function HeatFlowResultView({ result, units }: { result: HeatFlowResult; units: 
     <>
       <Headline
         label={gives ? 'Heat given up by the coolant' : 'Heat taken up by the coolant'}
-        value={showNumber(Math.abs(result.kilowatts), 'kW')}
+        value={showSignificant(Math.abs(result.kilowatts), 'heatFlow')}
       />
       <Details
         rows={[
@@ -150,9 +151,12 @@ function HeatFlowResultView({ result, units }: { result: HeatFlowResult; units: 
             value: show(result.meanCelsius, 'temperature', units.temperature),
           },
           { term: 'Mix strength', value: showPercent(result.volumePercent, 'volume') },
-          { term: 'Density', value: showNumber(result.densityKgPerCubicMetre, 'kg/m³') },
-          { term: 'Specific heat', value: showNumber(result.specificHeatJPerKgK, 'J/(kg·K)', 0) },
-          { term: 'Mass flow', value: showNumber(result.massFlowKgPerSecond, 'kg/s', 3) },
+          { term: 'Density', value: showSignificant(result.densityKgPerCubicMetre, 'density') },
+          {
+            term: 'Specific heat',
+            value: showSignificant(result.specificHeatJPerKgK, 'specificHeat'),
+          },
+          { term: 'Mass flow', value: showSignificant(result.massFlowKgPerSecond, 'massFlow') },
         ]}
       />
       <Warnings warnings={result.warnings} />

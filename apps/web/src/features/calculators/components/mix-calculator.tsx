@@ -1,6 +1,11 @@
 // Mix adjustment: how much coolant to drain and what to refill with to bring the system to the
 // strength wanted, by the package's volume balance.
-import { freezePoint, mixAdjustment, type MixAdjustmentResult } from '@heatpath/coolant';
+import {
+  advisedRange,
+  freezePoint,
+  mixAdjustment,
+  type MixAdjustmentResult,
+} from '@heatpath/coolant';
 import { useState } from 'react';
 import { SelectField } from '../../../components/ui/field';
 import { calculate, errorFor, type Calculation } from '../calculation';
@@ -87,7 +92,11 @@ export function MixCalculator() {
         />
         <NumberField
           label="Strength wanted"
-          hint="Usually 50; coolant standards ask for 40–60 vol % (ASTM D3306)."
+          hint={
+            glycol === null
+              ? 'Usually 50; coolant standards ask for 40–60 vol % (ASTM D3306).'
+              : `Usually 50; Heatpath advises ${advisedRange(glycol)} for this glycol (ASTM D3306 allows 40–60).`
+          }
           unit="vol %"
           value={target}
           onChange={setTarget}
@@ -164,7 +173,7 @@ function MixResult({
             value:
               result.resultingFreezeCelsius === null
                 ? 'No figure (past the table)'
-                : show(result.resultingFreezeCelsius, 'temperature', units.temperature),
+                : show(result.resultingFreezeCelsius, 'freezePoint', units.temperature),
           },
         ]}
       />

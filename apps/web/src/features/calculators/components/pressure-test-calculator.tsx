@@ -21,10 +21,10 @@ import { UnitToggles } from './unit-toggles';
 export const pressureVerdicts: Record<PressureTestVerdict, { label: string; tone: VerdictTone }> = {
   holds: { label: 'Holds pressure', tone: 'ok' },
   'slow-leak': { label: 'Slow leak', tone: 'caution' },
-  'fast-leak': { label: 'Fast leak', tone: 'danger' },
+  'fast-leak': { label: 'Clear leak', tone: 'danger' },
   'not-at-rating': { label: 'Not tested at the cap rating', tone: 'caution' },
   'too-short': { label: 'Hold too short to judge', tone: 'caution' },
-  'pressure-rose': { label: 'Pressure rose', tone: 'danger' },
+  'pressure-rose': { label: 'Pressure rose: still warming', tone: 'caution' },
 };
 
 export function PressureTestCalculator() {
@@ -111,14 +111,14 @@ function PressureResult({ result, units }: { result: PressureTestResult; units: 
       <Verdict tone={verdict.tone} label={verdict.label} />
       <Details
         rows={[
-          { term: 'Fall', value: show(result.dropBar, 'pressure', units.pressure, 2) },
+          { term: 'Fall', value: show(result.dropBar, 'pressure', units.pressure) },
           {
             term: 'Rate',
-            value: `${show(result.dropBarPerMinute, 'pressure', units.pressure, 3)} a minute`,
+            value: `${show(result.dropBarPerMinute, 'pressureRate', units.pressure)} a minute`,
           },
           {
             term: 'Counted as no change',
-            value: `within ${show(result.rule.thresholds.noChangeBar, 'pressure', units.pressure, 2)}`,
+            value: `within ${show(result.rule.thresholds.noChangeBar, 'pressure', units.pressure)}`,
           },
         ]}
       />

@@ -147,7 +147,7 @@ function ProtectionResult({ outcome, units }: { outcome: Outcome; units: Display
     <>
       <Headline
         label="Protected down to"
-        value={celsius === null ? 'No figure' : show(celsius, 'temperature', units.temperature)}
+        value={celsius === null ? 'No figure' : show(celsius, 'freezePoint', units.temperature)}
         note={
           celsius === null
             ? undefined

@@ -128,9 +128,8 @@ export function Warnings({ warnings }: { warnings: readonly CoolantWarning[] }) 
 }
 
 function warningTone(warning: CoolantWarning): AlertTone {
-  return warning.code === 'pressure-rose' || warning.code === 'over-concentrated'
-    ? 'danger'
-    : 'caution';
+  // A rise in a cold hold means the system is still warming: repeat the test, not an alarm.
+  return warning.code === 'over-concentrated' ? 'danger' : 'caution';
 }
 
 /** How a figure was reached, in the package's own words. */
