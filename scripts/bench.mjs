@@ -1,5 +1,6 @@
-// `npm run bench:step-save`: a fresh benchmark cluster in a private temporary directory (normal
-// durability, unlike the test cluster), then the named benchmark with DATABASE_URL pointing at it.
+// `npm run bench:step-save | bench:case-list | bench:load`: a fresh benchmark cluster in a
+// private temporary directory (normal durability, unlike the test cluster), then the named
+// benchmark with DATABASE_URL pointing at it.
 import { join } from 'node:path';
 import { startCluster } from './lib/postgres.mjs';
 import { installDependencies } from './lib/install.mjs';
@@ -9,6 +10,7 @@ import { mustRun, root } from './lib/run.mjs';
 const benches = {
   'step-save': ['apps/api', 'bench/step-save.bench.ts'],
   'case-list': ['apps/api', 'bench/case-list.bench.ts'],
+  load: ['apps/api', 'bench/load.bench.ts'],
 };
 
 async function main() {

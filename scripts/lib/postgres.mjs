@@ -194,9 +194,8 @@ export async function startCluster({
   }
   const password = readFileSync(passwordFile, 'utf8').trim();
 
-  const running = pgRun(bin, 'pg_ctl', ['-D', dataDir, 'status']).status === 0;
-  let startedHere = false;
-  if (!running) {
+  const isRunning = () => pgRun(bin, 'pg_ctl', ['-D', dataDir, 'status']).status === 0;
+  const launch = async () => {
     if (!(await portIsFree(port))) {
       throw new BootstrapError(
         `Port ${port} for the database is already in use: stop the program using it or choose another port, e.g. PGPORT=${port + 1}.`,
@@ -229,6 +228,10 @@ export async function startCluster({
         throw new BootstrapError('The disk is full: free some space and run the command again.');
       throw new BootstrapError(`PostgreSQL did not start (see ${logFile}): ${tail}`);
     }
+  };
+  let startedHere = false;
+  if (!isRunning()) {
+    await launch();
     startedHere = true;
   }
 
@@ -269,6 +272,15 @@ export async function startCluster({
     stop() {
       if (!startedHere) return;
       pgRun(bin, 'pg_ctl', ['-D', dataDir, '-m', 'fast', '-w', 'stop']);
+    },
+    /** Stops the server at once, as a crash or a pulled plug would (for fault tests). */
+    kill() {
+      pgRun(bin, 'pg_ctl', ['-D', dataDir, '-m', 'immediate', '-w', 'stop']);
+    },
+    /** Starts it again after `stop` or `kill`, on the same port with the same data. */
+    async start() {
+      if (!isRunning()) await launch();
+      startedHere = true;
     },
     dataDir,
     remove() {
