@@ -220,4 +220,52 @@ describe('the tree library', () => {
       definition: { title: 'Imported tree', nodes: {} },
     });
   });
+
+  it('offers Delete only for a tree never published, and deletes it after a confirm', async () => {
+    const unpublishedId = '00000000-0000-4000-8000-0000000000ea';
+    const onlyDraft = version({
+      id: '00000000-0000-4000-8000-0000000000fa',
+      treeId: unpublishedId,
+      status: 'draft',
+      changeNote: null,
+      publishedAt: null,
+      publishedBy: null,
+      caseCount: 0,
+    });
+    const unpublished = entry({
+      id: unpublishedId,
+      key: 'fan-runs-on',
+      title: 'Fan runs on',
+      latestPublished: null,
+      draft: onlyDraft,
+      versions: [onlyDraft],
+    });
+    let trees = [entry(), unpublished];
+    const { requests } = mockApi({
+      'GET /api/me': () => json(makeMe()),
+      'GET /api/trees': () => json({ trees }),
+      [`DELETE /api/trees/${unpublishedId}`]: () => {
+        trees = [entry()];
+        return new Response(null, { status: 204 });
+      },
+    });
+    renderApp('/trees');
+    const user = userEvent.setup();
+    const published = await screen.findByRole(
+      'article',
+      { name: 'Hot at idle' },
+      { timeout: 10_000 },
+    );
+    expect(within(published).queryByRole('button', { name: /Delete/ })).toBeNull();
+    const card = screen.getByRole('article', { name: 'Fan runs on' });
+    await user.click(within(card).getByRole('button', { name: /^Delete/ }));
+    const confirm = within(card).getByRole('alert');
+    expect(confirm.textContent).toContain('never published');
+    expect(requests.some((r) => r.method === 'DELETE')).toBe(false);
+    await user.click(within(confirm).getByRole('button', { name: /Yes, delete/ }));
+    await waitFor(() => expect(screen.queryByRole('article', { name: 'Fan runs on' })).toBeNull());
+    expect(requests.filter((r) => r.method === 'DELETE').map((r) => r.path)).toEqual([
+      `/api/trees/${unpublishedId}`,
+    ]);
+  });
 });
