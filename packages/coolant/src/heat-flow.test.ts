@@ -158,7 +158,7 @@ describe('heatFlow — refuses what cannot be, naming the box', () => {
   });
 
   it('a reading hotter than liquid coolant gets, or colder than the mix’s freezing point', () => {
-    refusedOn({ inletCelsius: 200 }, 'inletCelsius', /hotter than liquid coolant/);
+    refusedOn({ inletCelsius: 200 }, 'inletCelsius', /not a liquid coolant temperature/);
     // Water freezes at 0 °C; 50 vol % EG near −37 °C (ASHRAE, trade-facts.md).
     refusedOn({ percent: 0, outletCelsius: -5, inletCelsius: 10 }, 'outletCelsius', /freezes/);
     refusedOn({ outletCelsius: -45, inletCelsius: 60 }, 'outletCelsius', /freezes at about −?-?37/);

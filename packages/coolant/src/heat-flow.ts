@@ -3,6 +3,7 @@
 // the engine should be rejecting.
 import { convertPercent } from './concentration-basis.js';
 import { coolantProperties } from './coolant-properties.js';
+import { readCoolantTemperature } from './coolant-temperature.js';
 import { CoolantInputError } from './errors.js';
 import { formatFigure, roundForDisplay } from './display-rounding.js';
 import { freezePointOf } from './freeze-point.js';
@@ -41,13 +42,10 @@ export interface HeatFlowResult {
 /**
  * Limits of what a road vehicle's cooling circuit can show (common practice). A car's main pump
  * moves roughly 50–250 L/min at high engine speed and a heavy truck's a few hundred; 1,000 L/min
- * is beyond any vehicle pump, so a larger figure is a misreading or the wrong unit. Liquid coolant
- * under a cap of at most 3 bar (the largest rating Heatpath accepts) boils below about 150 °C
- * even as a rich glycol mix, so a hotter reading is not liquid coolant.
+ * is beyond any vehicle pump, so a larger figure is a misreading or the wrong unit.
  */
 export const HEAT_FLOW_LIMITS = {
   maxLitresPerMinute: 1000,
-  maxReadingCelsius: 150,
 } as const;
 
 function readTemperature(
@@ -56,13 +54,7 @@ function readTemperature(
   freezeCelsius: number | null,
   mixName: string,
 ): number {
-  const celsius = toCanonical(value, 'temperature', field);
-  if (celsius > HEAT_FLOW_LIMITS.maxReadingCelsius) {
-    throw new CoolantInputError(
-      field,
-      `${formatFigure(celsius, 'temperature')} is hotter than liquid coolant gets under any pressure cap; check the reading and the unit.`,
-    );
-  }
+  const celsius = readCoolantTemperature(value, field);
   if (freezeCelsius !== null && celsius < freezeCelsius) {
     throw new CoolantInputError(
       field,

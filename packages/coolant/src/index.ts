@@ -49,6 +49,11 @@ export type {
 } from './pressure-test.js';
 export { MAX_SYSTEM_LITRES } from './mix-adjustment.js';
 export { HEAT_FLOW_LIMITS } from './heat-flow.js';
+export {
+  COOLANT_READING_LIMITS,
+  isPlausibleCoolantCelsius,
+  readCoolantTemperature,
+} from './coolant-temperature.js';
 export { PROPERTY_MAX_VOLUME_PERCENT, PROPERTY_TEMPERATURE_RANGE } from './coolant-properties.js';
 export { advisedRange, RECOMMENDED_VOLUME_PERCENT } from './recommended-concentration.js';
 export {

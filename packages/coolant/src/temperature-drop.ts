@@ -1,5 +1,6 @@
 // Judges the temperature difference across the engine, radiator or heater core, the quick
 // infrared check that separates a circulation problem from an air-side (radiator, fan) problem.
+import { COOLANT_READING_LIMITS, isPlausibleCoolantCelsius } from './coolant-temperature.js';
 import { formatFigure } from './display-rounding.js';
 import { CoolantInputError } from './errors.js';
 import {
@@ -45,7 +46,6 @@ export interface TemperatureDropResult {
 
 // Liquid coolant cannot be colder than the coldest mix's freezing point (−51.1 °C, PG at 60 mass %)
 // or much hotter than its boiling point under a cap; readings outside these are instrument errors.
-const PLAUSIBLE_COOLANT_CELSIUS = { min: -55, max: 150 } as const;
 // An infrared reading on a hose is good to a degree or two; a "reversed" difference inside that is
 // noise, beyond it the readings or the circuit choice are wrong.
 const REVERSED_TOLERANCE_KELVIN = 2;
@@ -99,14 +99,12 @@ export function assessTemperatureDrop(
     );
   }
 
-  const outOfRange = [inlet, outlet].some(
-    (t) => t < PLAUSIBLE_COOLANT_CELSIUS.min || t > PLAUSIBLE_COOLANT_CELSIUS.max,
-  );
+  const outOfRange = [inlet, outlet].some((t) => !isPlausibleCoolantCelsius(t));
   if (outOfRange) {
     return {
       verdict: 'implausible',
       differenceKelvin: difference,
-      explanation: `A reading outside ${PLAUSIBLE_COOLANT_CELSIUS.min} to ${PLAUSIBLE_COOLANT_CELSIUS.max} °C is not liquid coolant; check the instrument and where it was aimed.`,
+      explanation: `A reading outside ${COOLANT_READING_LIMITS.minCelsius} to ${COOLANT_READING_LIMITS.maxCelsius} °C is not liquid coolant; check the instrument and where it was aimed.`,
       rule,
       warnings,
     };

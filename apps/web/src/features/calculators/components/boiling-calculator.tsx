@@ -1,6 +1,6 @@
 // Boiling margin: where water boils at the cap's rating, how much margin the running temperature
 // leaves, and what is left if the cap stops holding.
-import { boilingPoint, toCanonical, type BoilingPointResult } from '@heatpath/coolant';
+import { boilingPoint, readCoolantTemperature, type BoilingPointResult } from '@heatpath/coolant';
 import { useState } from 'react';
 import { calculate, errorFor, type Calculation } from '../calculation';
 import { show } from '../format';
@@ -28,7 +28,7 @@ export function BoilingCalculator() {
       atCap: boilingPoint({ gaugeBar: quantityText(cap, units.pressure) }),
       unpressurised: boilingPoint({ gaugeBar: 0 }),
       runningCelsius: running.trim()
-        ? toCanonical(quantityText(running, units.temperature), 'temperature', 'running')
+        ? readCoolantTemperature(quantityText(running, units.temperature), 'running')
         : null,
     }),
   );
@@ -39,7 +39,7 @@ export function BoilingCalculator() {
         <UnitToggles kinds={['temperature', 'pressure']} />
         <NumberField
           label="Cap rating"
-          hint="Gauge pressure, usually stamped on the cap."
+          hint="Gauge pressure, usually stamped on the cap (1.4–1.6 bar is common on modern cars)."
           unit={unitSymbol(units.pressure)}
           value={cap}
           onChange={setCap}

@@ -231,6 +231,17 @@ describe('calculators', () => {
     expect(errorBeside(cap)).toMatch(/No road-vehicle pressure cap is rated 30 bar/);
   });
 
+  it('refuses a running temperature no liquid coolant can have', async () => {
+    signedInAs();
+    renderApp('/calculators/boiling');
+    const user = userEvent.setup();
+    await user.type(await screen.findByLabelText('Cap rating'), '1.4');
+    const running = screen.getByLabelText('Running coolant temperature');
+    await user.type(running, '500');
+    await waitFor(() => expect(running.getAttribute('aria-invalid')).toBe('true'));
+    expect(errorBeside(running)).toMatch(/not a liquid coolant temperature/);
+  });
+
   it('refuses a 5,000 L system in the mix adjustment', async () => {
     signedInAs();
     renderApp('/calculators/mix');

@@ -57,7 +57,7 @@ export function PressureTestCalculator() {
         <UnitToggles kinds={['pressure']} />
         <NumberField
           label="Cap rating"
-          hint="Gauge pressure stamped on the cap; pump the system to this."
+          hint="Gauge pressure stamped on the cap (1.4–1.6 bar is common on modern cars); pump to this, never above."
           unit={pressureUnit}
           value={cap}
           onChange={setCap}
