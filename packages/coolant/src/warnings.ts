@@ -9,7 +9,6 @@ export type CoolantWarningCode =
   | 'mix-figure-not-shown'
   | 'vacuum'
   | 'above-usual-cap-pressure'
-  | 'properties-approximated'
   | 'properties-extrapolated'
   | 'thermostat-may-be-closed'
   | 'no-published-band'
