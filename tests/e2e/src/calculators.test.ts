@@ -1,5 +1,6 @@
 // The calculators in a real browser: coolant protection from a concentration, the unit toggle
-// remembered for the person across reloads, and the boiling point at a cap rating.
+// remembered for the person across reloads, the boiling point at a cap rating, and heat flow for
+// propylene glycol near 100 °C.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launch, screenshot, signIn } from './browser';
 import type { BrowserSession } from './browser';
@@ -26,12 +27,12 @@ describe('calculators', () => {
     await page.getByLabel('Concentration', { exact: true }).fill('50');
     const result = page.getByRole('region', { name: 'Result' });
     // ASHRAE table interpolated to 50 vol % EG: about −37.0 °C (trade-facts.md, Source A);
-    // Heatpath's monotone interpolation gives −37.2 °C.
-    await result.getByText(/−37\.\d\s?°C|-37\.\d\s?°C/).waitFor();
+    // shown to whole degrees (refractometers read to ±1 K, ASTM D3321).
+    await result.getByText(/^[−-]37\s?°C$/).waitFor();
     await screenshot(page, 'calculator-protection-phone-celsius');
     await page.getByRole('group', { name: 'Temperature unit' }).getByText('°F').click();
-    // −37.2 °C is −35.0 °F (°F = °C × 9/5 + 32).
-    await result.getByText(/[−-]3[45]\.\d\s?°F/).waitFor();
+    // −37.2 °C is −35.0 °F (°F = °C × 9/5 + 32), shown to whole degrees.
+    await result.getByText(/^[−-]3[45]\s?°F$/).waitFor();
     await page.waitForLoadState('networkidle');
     await page.reload();
     await page.getByText('Ethylene glycol (EG)').click();
@@ -55,14 +56,33 @@ describe('calculators', () => {
     await page.getByRole('link', { name: /Boiling margin/ }).click();
     await page.getByLabel('Cap rating').fill('1.4');
     const result = page.getByRole('region', { name: 'Result' });
-    // IAPWS-IF97 saturation temperature at 2.41325 bar absolute: 126.25 °C (trade-facts.md).
+    // IAPWS-IF97 saturation temperature at 2.41325 bar absolute: 126.25 °C (trade-facts.md),
+    // shown to whole degrees (a cap opens within about ±0.1 bar of its rating).
     await result
-      .getByText(/126\.[23]\s?°C/)
+      .getByText(/^126\s?°C$/)
       .first()
       .waitFor();
     expect(await result.getByText(/IAPWS/).count()).toBeGreaterThan(0);
     expect(await page.getByText(/Never open the cap/i).count()).toBeGreaterThan(0);
     await screenshot(page, 'calculator-boiling-tablet');
+    await context.close();
+  });
+
+  it('works out heat flow for 50 vol % propylene glycol near 100 °C with its ASHRAE source', async () => {
+    const { page, context } = await session.newPage({ width: 1024, height: 768 });
+    await signIn(page, 'tech@harbourlane.test');
+    await page.goto('/calculators');
+    await page.getByRole('link', { name: /Heat flow/ }).click();
+    await page.getByText('Propylene glycol (PG)').click();
+    await page.getByLabel('Coolant flow').fill('40');
+    await page.getByLabel('Inlet temperature').fill('103');
+    await page.getByLabel('Outlet temperature').fill('97');
+    const result = page.getByRole('region', { name: 'Result' });
+    // ASHRAE 50 vol % PG at 100 °C (as reproduced in CoolProp): 983 kg/m³, 3841 J/(kg·K);
+    // 40 L/min × 983 / 60,000 × 3841 × 6 K = 15.1 kW, shown to 2 figures.
+    await result.getByText(/^15 kW$/).waitFor();
+    expect(await result.getByText(/ASHRAE Handbook/).count()).toBeGreaterThan(0);
+    await screenshot(page, 'calculator-heat-flow-propylene-tablet');
     await context.close();
   });
 });
