@@ -81,6 +81,11 @@ describe('guided diagnosis', () => {
         'Pressure at which the cap opened': '1.38',
         'Pressure the cap still holds after one minute': '1.35',
       },
+      'Cap vacuum valve',
+    );
+    await choose(
+      page,
+      'It moves freely and seats; no sign of vacuum',
       'System pressure test (cold)',
     );
     await measure(
@@ -107,6 +112,10 @@ describe('guided diagnosis', () => {
       'Radiator hose temperatures',
       '°F',
     );
+    // Read at the same moment as live data, with the thermostat known to be open.
+    await page
+      .getByLabel('Live data at the moment of the hose readings', { exact: true })
+      .fill('110');
     await page.getByLabel('Radiator inlet hose', { exact: true }).fill('52');
     await page.getByLabel('Radiator outlet hose', { exact: true }).fill('45');
     // The drop across the radiator is worked out as it is typed: 52 − 45 = 7 K.
@@ -117,21 +126,43 @@ describe('guided diagnosis', () => {
       .waitFor();
     await screenshot(page, 'case-measurement-live-values-tablet');
     await page.getByRole('button', { name: /^Save readings?$/ }).click();
-    await stepIs(page, 'Take the thermostat out and test it');
+    await stepIs(page, 'Does coolant move through the engine?');
 
     // Reload mid-walk: the case is exactly where it was.
     await page.reload();
-    await stepIs(page, 'Take the thermostat out and test it');
-    await done(page, 'Thermostat opening temperature');
+    await stepIs(page, 'Does coolant move through the engine?');
+    await choose(
+      page,
+      'It moves: heater hoses hot, good cabin heat, only the radiator side cool',
+      'Take the thermostat out and test it',
+    );
+    await done(page, 'Did the thermostat open?');
+    await choose(page, 'Yes, it began to open', 'Thermostat opening temperature');
     await measure(
       page,
       { 'Stamped opening temperature': '87', 'Water temperature when it began to open': '88' },
-      'Refill and bleed the main loop',
+      'Did it open fully?',
     );
+    await choose(page, 'Yes, it opened fully', 'Refill and bleed the main loop');
     await done(page, 'Does coolant flow now?');
     await choose(
       page,
-      'No, the inlet hose still stays cool',
+      'No: the engine gets hot and the inlet hose still stays cool',
+      'Which coolant pump?',
+    );
+    await choose(
+      page,
+      'Switchable: a shroud over the impeller, worked by a control valve',
+      'Switchable pump: control valve and wiring',
+    );
+    await choose(
+      page,
+      'Supply, wiring, connector and winding as the maker gives; not held powered',
+      'Switchable pump: command it from the scan tool',
+    );
+    await choose(
+      page,
+      'Nothing changes whatever the command: the inlet stays cool, the engine climbs',
       'Remove the coolant pump for inspection',
     );
     await done(page, 'Inspect the pump shroud');

@@ -64,6 +64,7 @@ const toThermostatOpening: [string, Answer][] = [
       readings: { capRating: bar(1.4), capOpening: bar(1.38), capHeldAfterMinute: bar(1.35) },
     },
   ],
+  ['cap-vacuum-valve', { type: 'answer.choice', choiceId: 'vacuum-valve-ok' }],
   [
     'pressure-test',
     {
@@ -85,10 +86,12 @@ const toThermostatOpening: [string, Answer][] = [
     'hose-temps',
     {
       type: 'answer.measurement',
-      readings: { radiatorInletTemp: c(52), radiatorOutletTemp: c(45) },
+      readings: { engineTempAtHoses: c(110), radiatorInletTemp: c(52), radiatorOutletTemp: c(45) },
     },
   ],
+  ['circulation-check', { type: 'answer.choice', choiceId: 'circulates' }],
   ['thermostat-test', { type: 'answer.procedure', result: 'done' }],
+  ['thermostat-opened', { type: 'answer.choice', choiceId: 'opened' }],
 ];
 
 async function json(
@@ -218,9 +221,7 @@ describe('temperature logs', () => {
 
       // Back on the case, at the next step; the reading and where it came from are recorded.
       await page.waitForURL(`**/cases/${caseId}`);
-      await page
-        .getByRole('heading', { level: 2, name: 'Refill and bleed the main loop' })
-        .waitFor();
+      await page.getByRole('heading', { level: 2, name: 'Did it open fully?' }).waitFor();
       const events = await json(page.request, 'get', `/api/cases/${caseId}`);
       const reading = events.walk.readings.find(
         (r: { name: string }) => r.name === 'thermostatOpenedAt',

@@ -109,14 +109,13 @@ describe('tree authoring', () => {
     await newNode.getByText(/^✕?\s*\d+ problems?$/).waitFor();
     await shot(page, 'tree-editor-dangling-branch');
 
-    // Fixed by connecting: the branch leads to the bleed, "Otherwise" to the usual level check...
+    // Fixed by connecting: the branch leads to the main-loop bleed, "Otherwise" to the bleed the
+    // refill answer led to before (so that step stays reachable)...
     await branch.getByLabel('Leads to', { exact: true }).selectOption({
       label: 'Refill and bleed the main loop',
     });
     await form.getByLabel('When no branch holds, go on to a step').check();
-    await form
-      .getByLabel('Otherwise leads to')
-      .selectOption({ label: 'Coolant level, engine cold' });
+    await form.getByLabel('Otherwise leads to').selectOption({ label: 'Bleed the system first' });
     await problems.getByText('leads nowhere yet').waitFor({ state: 'detached' });
 
     // ...and the refill answer of the first question now leads to the new step.
@@ -152,9 +151,7 @@ describe('tree authoring', () => {
     await shot(page, 'tree-editor-try-it');
 
     await page.getByRole('button', { name: 'Check and publish' }).click();
-    await page
-      .getByLabel('Change note')
-      .fill('Heater hose check after a refill, before the level check.');
+    await page.getByLabel('Change note').fill('Heater hose check after a refill, before bleeding.');
     await page.getByRole('button', { name: 'Publish', exact: true }).click();
     await page.waitForURL(/\/trees\/[0-9a-f-]{36}$/, { timeout: 30_000 });
     await page

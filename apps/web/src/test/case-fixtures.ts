@@ -58,6 +58,7 @@ const blockTest: Answer[] = [
   'ethylene',
   { egPercent: r(50, '%') },
   { capRating: r(1.2, 'bar'), capOpening: r(1.2, 'bar'), capHeldAfterMinute: r(1.15, 'bar') },
+  'vacuum-valve-ok',
   { testPressure: r(1.2, 'bar'), pressureAfterHold: r(1.18, 'bar'), holdMinutes: r(15, 'min') },
 ];
 
@@ -69,8 +70,14 @@ const hoseTemps: Answer[] = [
 ];
 const outcome: Answer[] = [
   ...hoseTemps,
-  { radiatorInletTemp: r(75, 'degC'), radiatorOutletTemp: r(70, 'degC') },
+  {
+    engineTempAtHoses: r(105, 'degC'),
+    radiatorInletTemp: r(75, 'degC'),
+    radiatorOutletTemp: r(70, 'degC'),
+  },
+  'circulates',
   'done',
+  'opened',
   { thermostatRated: r(87, 'degC'), thermostatOpenedAt: r(99, 'degC') },
 ];
 

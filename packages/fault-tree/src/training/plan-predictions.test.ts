@@ -135,7 +135,7 @@ describe('planning predictions for a recorded walk', () => {
     expect(maxScoreOf(plans)).toBe(3);
   });
 
-  it('plans the shipped overheating tree’s stuck-shroud case: 14 steps to judge and the cause', () => {
+  it('plans the shipped overheating tree’s stuck-shroud case: 18 steps to judge and the cause', () => {
     const shipped = compiled(overheatsIntermittentTree);
     const c = (v: number) => [v, 'degC'] as const;
     const bar = (v: number) => [v, 'bar'] as const;
@@ -150,6 +150,7 @@ describe('planning predictions for a recorded walk', () => {
         capOpening: bar(1.38),
         capHeldAfterMinute: bar(1.35),
       }),
+      choose('cap-vacuum-valve', 'vacuum-valve-ok'),
       measure('pressure-test', {
         testPressure: bar(1.4),
         pressureAfterHold: bar(1.38),
@@ -158,22 +159,31 @@ describe('planning predictions for a recorded walk', () => {
       done('block-test'),
       choose('block-test-result', 'no-gas'),
       measure('warm-up-live-data', { liveDataTemp: c(110), sensorHousingIr: c(106) }),
-      measure('hose-temps', { radiatorInletTemp: c(52), radiatorOutletTemp: c(45) }),
-      done('thermostat-test'),
-      measure('thermostat-opening', { thermostatRated: c(87), thermostatOpenedAt: c(88) }),
+      measure('hose-temps', {
+        engineTempAtHoses: c(110),
+        radiatorInletTemp: c(52),
+        radiatorOutletTemp: c(45),
+      }),
+      choose('circulation-check', 'little-circulation'),
       done('main-loop-bleed'),
       choose('main-loop-retest', 'still-no-flow'),
+      choose('pump-type', 'switchable'),
+      choose('pump-valve-check', 'circuit-good'),
+      choose('pump-actuation-test', 'no-response'),
       done('pump-removal'),
       choose('shroud-inspection', 'stuck-out'),
     ]);
-    // By hand from the tree: every choice of "interview-pattern" leads to "level-cold", and
-    // "level-cold" has a single way on, so neither asks; steps 3–16 each have two or more ways
-    // on (14 points); the last step asks the root cause among the tree's 14 outcomes (2 points).
-    expect(plans.slice(0, 2)).toEqual([null, null]);
-    expect(plans.slice(2, 16).every((p) => p !== null && p.maxPoints === 1)).toBe(true);
-    expect(plans[16]).toMatchObject({ kind: 'cause', correctId: 'pump-shroud-stuck' });
-    expect(plans[16]?.options).toHaveLength(14);
-    expect(plans[10]).toMatchObject({ kind: 'meaning', correctId: 'branch:0' });
-    expect(maxScoreOf(plans)).toBe(16);
+    // By hand from the tree: "interview-pattern" leads to the level check or, for a fault that
+    // began after cooling work, to bleeding first (asked); "level-cold" has a single way on (not
+    // asked); every other step up to the pump removal has two or more ways on (18 points); the
+    // last step asks the root cause among the tree's 21 outcomes (2 points).
+    expect(plans[0]).toMatchObject({ kind: 'next', correctId: 'level-cold', maxPoints: 1 });
+    expect(plans[1]).toBeNull();
+    expect(plans.slice(2, 19).every((p) => p !== null && p.maxPoints === 1)).toBe(true);
+    expect(plans[19]).toMatchObject({ kind: 'cause', correctId: 'pump-shroud-stuck' });
+    expect(plans[19]?.options).toHaveLength(21);
+    expect(plans[11]).toMatchObject({ kind: 'meaning', correctId: 'branch:0' });
+    expect(plans.filter((p) => p?.kind === 'meaning').length).toBe(5);
+    expect(maxScoreOf(plans)).toBe(20);
   });
 });

@@ -85,11 +85,11 @@ export async function seedDemoCases(): Promise<void> {
     notes: [
       {
         nodeId: 'hose-temps',
-        text: 'Top hose hot, radiator inlet only warm after 15 minutes at fast idle.',
+        text: 'Read on a long climb: live data 110 °C, radiator inlet only 52 °C at the same moment; heater hoses lukewarm.',
       },
       {
         nodeId: 'shroud-inspection',
-        text: 'Shroud stuck out over the impeller; the control vacuum line was sound.',
+        text: 'Shroud stuck out over the impeller; its control valve and wiring had tested sound.',
       },
     ],
   });
@@ -109,7 +109,7 @@ export async function seedDemoCases(): Promise<void> {
     request: {
       caseId: shroudCaseId,
       teachingNote:
-        'Everything looked healthy until the hose temperatures: a hot engine with a barely warm radiator means coolant is not moving. The thermostat opened on time, so the pump was next.',
+        'Everything looked healthy until the hose temperatures: a hot engine with a barely warm radiator, read at the same moment with the thermostat surely open, and lukewarm heater hoses mean coolant is not moving. Bleeding did not help, the pump’s valve and wiring were sound and it ignored the scan tool’s command, so the pump came off.',
       difficulty: 'advanced',
       hideNotes: false,
       hiddenAttachmentIds: [],

@@ -9,7 +9,11 @@ type Answer =
 const c = (v: number) => ({ value: v, unit: 'degC' });
 const bar = (v: number) => ({ value: v, unit: 'bar' });
 
-/** Engine at 110 °C with the radiator inlet barely warm, thermostat good, shroud found stuck. */
+/**
+ * Engine at 110 °C on a long climb with the radiator inlet at 52 °C at the same moment and the
+ * heater hoses lukewarm; bleeding does not help, the pump's control valve and wiring are sound,
+ * the pump does not answer the scan tool's command, and the shroud is found stuck out.
+ */
 export const stuckShroudPath: { nodeId: string; answer: Answer }[] = [
   { nodeId: 'interview-pattern', answer: { type: 'answer.choice', choiceId: 'speed-or-load' } },
   {
@@ -29,6 +33,7 @@ export const stuckShroudPath: { nodeId: string; answer: Answer }[] = [
       readings: { capRating: bar(1.4), capOpening: bar(1.38), capHeldAfterMinute: bar(1.35) },
     },
   },
+  { nodeId: 'cap-vacuum-valve', answer: { type: 'answer.choice', choiceId: 'vacuum-valve-ok' } },
   {
     nodeId: 'pressure-test',
     answer: {
@@ -53,19 +58,18 @@ export const stuckShroudPath: { nodeId: string; answer: Answer }[] = [
     nodeId: 'hose-temps',
     answer: {
       type: 'answer.measurement',
-      readings: { radiatorInletTemp: c(52), radiatorOutletTemp: c(45) },
+      readings: { engineTempAtHoses: c(110), radiatorInletTemp: c(52), radiatorOutletTemp: c(45) },
     },
   },
-  { nodeId: 'thermostat-test', answer: { type: 'answer.procedure', result: 'done' } },
   {
-    nodeId: 'thermostat-opening',
-    answer: {
-      type: 'answer.measurement',
-      readings: { thermostatRated: c(87), thermostatOpenedAt: c(88) },
-    },
+    nodeId: 'circulation-check',
+    answer: { type: 'answer.choice', choiceId: 'little-circulation' },
   },
   { nodeId: 'main-loop-bleed', answer: { type: 'answer.procedure', result: 'done' } },
   { nodeId: 'main-loop-retest', answer: { type: 'answer.choice', choiceId: 'still-no-flow' } },
+  { nodeId: 'pump-type', answer: { type: 'answer.choice', choiceId: 'switchable' } },
+  { nodeId: 'pump-valve-check', answer: { type: 'answer.choice', choiceId: 'circuit-good' } },
+  { nodeId: 'pump-actuation-test', answer: { type: 'answer.choice', choiceId: 'no-response' } },
   { nodeId: 'pump-removal', answer: { type: 'answer.procedure', result: 'done' } },
   { nodeId: 'shroud-inspection', answer: { type: 'answer.choice', choiceId: 'stuck-out' } },
 ];

@@ -145,7 +145,8 @@ describe('walking a case', () => {
   it('takes readings in °F and psi, and names the allowed range when a reading is impossible', async () => {
     const { tech, caseId } = await openCase();
     let position = 0;
-    for (const step of stuckShroudPath.slice(0, 9))
+    const toWarmUp = stuckShroudPath.findIndex((s) => s.nodeId === 'warm-up-live-data');
+    for (const step of stuckShroudPath.slice(0, toWarmUp))
       position = (await answer(tech, caseId, step, position)).body.walk.position;
     // 230 °F is 110 °C and 222.8 °F is 106 °C (°C = (°F − 32) × 5/9, the defining relation).
     const imperial = {
@@ -203,12 +204,20 @@ describe('walking a case', () => {
     const definition = structuredClone(v1!.definition) as {
       nodes: Record<
         string,
-        { kind: string; choices?: { id: string; label: string; to: string }[] }
+        {
+          kind: string;
+          choices?: { id: string; label: string; to: string }[];
+          couldNotDo?: string;
+        }
       >;
     };
-    // Version 2 drops the level check: the interview goes straight to the visual check.
-    for (const choice of definition.nodes['interview-pattern']!.choices!)
-      choice.to = 'visual-leaks';
+    // Version 2 drops the level check: every way that led to it (the interview's answers, the
+    // bleed-first steps) goes straight to the visual check.
+    for (const node of Object.values(definition.nodes)) {
+      for (const choice of node.choices ?? [])
+        if (choice.to === 'level-cold') choice.to = 'visual-leaks';
+      if (node.couldNotDo === 'level-cold') node.couldNotDo = 'visual-leaks';
+    }
     delete definition.nodes['level-cold'];
     await TreeVersion.create({
       treeId: trees[overheatingTreeKey]!,

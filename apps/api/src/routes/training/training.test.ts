@@ -47,10 +47,9 @@ interface Attempt {
 const meaningTaken: Record<number, string> = {
   4: 'fallback',
   5: 'fallback',
-  6: 'fallback',
-  9: 'fallback',
-  10: 'branch:0',
-  12: 'branch:1',
+  7: 'fallback',
+  10: 'fallback',
+  11: 'branch:0',
 };
 function fixedChoice(attempt: Attempt): string {
   const current = attempt.current!;
@@ -134,6 +133,7 @@ describe('personal data and the apprentice', () => {
     expect(replay.findings.concern).toBe('[hidden] reports overheating; VIN [hidden].');
     // Readings and computed values come with the step.
     expect(hoseStep.answer.readings.map((r: { display: string }) => r.display)).toEqual([
+      '110 °C',
       '52 °C',
       '45 °C',
     ]);
@@ -215,29 +215,32 @@ describe('personal data and the apprentice', () => {
 });
 
 describe('predicting through a case', () => {
-  it('scores a fixed recorded case as worked by hand: 10 of 16', async () => {
+  it('scores a fixed recorded case as worked by hand: 15 of 20', async () => {
     const { lead, apprentice, caseId } = await finishedPersonalCase(app);
     const trainingCaseId = await markForTraining(lead, caseId);
     const attempt = await predictThrough(apprentice, trainingCaseId, fixedChoice);
-    // 17 steps: two with one way on (not asked), eight "next" right (8), six "meaning" wrong
-    // (0), the root cause right (2) → 10 of 8 + 6 + 2 = 16.
-    expect(attempt).toMatchObject({ status: 'finished', score: 10, maxScore: 16 });
-    expect(attempt.steps).toHaveLength(17);
-    expect(attempt.steps.filter((s) => s.prediction === null)).toHaveLength(2);
+    // 20 steps: one with one way on (the cold level, not asked), thirteen "next" right (13),
+    // five "meaning" wrong (0), the root cause right (2) → 15 of 13 + 5 + 2 = 20.
+    expect(attempt).toMatchObject({ status: 'finished', score: 15, maxScore: 20 });
+    expect(attempt.steps).toHaveLength(20);
+    expect(attempt.steps.filter((s) => s.prediction === null)).toHaveLength(1);
     expect(attempt.steps.map((s) => s.prediction?.points ?? null)).toEqual([
+      1,
       null,
-      null,
-      1,
-      1,
-      0,
-      0,
-      0,
       1,
       1,
       0,
       0,
       1,
       0,
+      1,
+      1,
+      0,
+      0,
+      1,
+      1,
+      1,
+      1,
       1,
       1,
       1,
@@ -251,8 +254,8 @@ describe('predicting through a case', () => {
     const mine = progress.body.apprentices.find((a: { apprentice: { name: string } }) =>
       a.apprentice.name.startsWith('Test apprentice'),
     );
-    expect(mine).toMatchObject({ casesReviewed: 1, attempts: 1, averageScorePercent: 62.5 });
-    // Six meaning steps wrong once each: the three shown are the first three by title.
+    expect(mine).toMatchObject({ casesReviewed: 1, attempts: 1, averageScorePercent: 75 });
+    // Five meaning steps wrong once each: the three shown are the first three by title.
     expect(mine.weakSpots).toHaveLength(3);
     expect(
       mine.weakSpots.every((s: { wrong: number; asked: number }) => s.wrong === 1 && s.asked === 1),
@@ -264,13 +267,19 @@ describe('predicting through a case', () => {
     const trainingCaseId = await markForTraining(lead, caseId);
     const started = await apprentice.post(`/api/training/cases/${trainingCaseId}/attempts`);
     const attempt = started.body as Attempt;
-    expect(attempt.current?.step.index).toBe(2);
+    // The first question is asked: a fault that began after cooling work goes to bleeding first.
+    expect(attempt.current?.step.index).toBe(0);
     expect(attempt.current?.step.next).toBeNull();
     expect(JSON.stringify(attempt)).not.toContain('pump-shroud-stuck');
-    expect(attempt.steps.map((s) => s.prediction)).toEqual([null, null]);
 
     const send = (index: number, optionId: string) =>
       apprentice.post(`/api/training/attempts/${attempt.id}/predictions`).send({ index, optionId });
+    const opening = await send(0, 'level-cold');
+    expect(opening.status).toBe(200);
+    expect(opening.body.steps[0].prediction).toMatchObject({ correct: true, points: 1 });
+    // The cold level has one way on and is not asked: the next question is the look for leaks.
+    expect(opening.body.current.step.index).toBe(2);
+    expect(opening.body.steps[1].prediction).toBeNull();
     expect((await send(2, 'no-such-option')).status).toBe(400);
     expect((await send(3, 'concentration-eg')).status).toBe(409);
     const first = await send(2, 'locate-visible-leak');
@@ -292,7 +301,7 @@ describe('predicting through a case', () => {
     // Stored: a fresh read shows the same.
     const reread = await apprentice.get(`/api/training/attempts/${attempt.id}`);
     expect(reread.body.steps[2].prediction.chosenId).toBe('locate-visible-leak');
-    expect(reread.body.score).toBe(0);
+    expect(reread.body.score).toBe(1);
 
     // A second attempt, done well, is the best score; both are counted.
     const perfect = await predictThrough(apprentice, trainingCaseId, (a) => {
@@ -301,18 +310,18 @@ describe('predicting through a case', () => {
       if (c.ask.kind === 'next') return stuckShroudPath[c.step.index + 1]!.nodeId;
       return meaningTaken[c.step.index]!;
     });
-    expect(perfect).toMatchObject({ score: 16, maxScore: 16 });
+    expect(perfect).toMatchObject({ score: 20, maxScore: 20 });
     expect(
       (
         await apprentice
           .post(`/api/training/attempts/${perfect.id}/predictions`)
-          .send({ index: 16, optionId: 'no-cause-found' })
+          .send({ index: 19, optionId: 'no-cause-found' })
       ).status,
     ).toBe(409);
     const casebook = await apprentice.get('/api/training/casebook');
     expect(casebook.body.cases[0]).toMatchObject({
       attempts: 2,
-      bestScore: { score: 16, maxScore: 16 },
+      bestScore: { score: 20, maxScore: 20 },
     });
   });
 });
@@ -426,7 +435,7 @@ describe('the lead’s casebook', () => {
     progress = (await lead.get(`/api/training/progress/${w.people.apprentice.id}`)).body;
     expect(progress.courses[0]).toMatchObject({ completedCases: 1, totalCases: 1 });
     expect(progress.history).toEqual([
-      expect.objectContaining({ trainingCaseId: id, status: 'finished', score: 10, maxScore: 16 }),
+      expect.objectContaining({ trainingCaseId: id, status: 'finished', score: 15, maxScore: 20 }),
     ]);
 
     const signed = await lead

@@ -90,6 +90,7 @@ describe('the case page', { timeout: 15_000 }, () => {
             walk: walkAfter([
               ...paths.hoseTemps,
               {
+                engineTempAtHoses: { value: 105, unit: 'degC' },
                 radiatorInletTemp: { value: 167, unit: 'degF' },
                 radiatorOutletTemp: { value: 158, unit: 'degF' },
               },
@@ -103,27 +104,33 @@ describe('the case page', { timeout: 15_000 }, () => {
     await screen.findByRole('heading', { level: 2, name: 'Radiator hose temperatures' }, slow);
     await user.selectOptions(screen.getByLabelText('Unit for Radiator inlet hose'), 'degF');
     await user.selectOptions(screen.getByLabelText('Unit for Radiator outlet hose'), 'degF');
+    await user.type(screen.getByLabelText('Live data at the moment of the hose readings'), '105');
     await user.type(screen.getByLabelText('Radiator inlet hose'), '167');
     await user.type(screen.getByLabelText('Radiator outlet hose'), '158');
 
     const live = screen.getByRole('region', { name: 'Worked out as you type' });
     // 167 °F is 75 °C and 158 °F is 70 °C: a 5 K drop, shown as 9 °F because °F was typed.
     expect(within(live).getByText('9 °F (5 K)')).toBeTruthy();
-    // The engine read 105 °C at the last step: the inlet hose is 30 K cooler, so the thermostat is next.
+    // Live data read 105 °C at the same moment: the inlet hose is 30 K cooler, so the next step
+    // asks whether coolant moves through the engine at all.
     expect(within(live).getByText('30 K', { exact: false })).toBeTruthy();
-    expect(within(live).getByText('Take the thermostat out and test it')).toBeTruthy();
+    expect(within(live).getByText('Does coolant move through the engine?')).toBeTruthy();
     // The range is shown in the unit being typed.
     expect(screen.getAllByText('Allowed −40 to 302 °F')).toHaveLength(2);
 
     await user.click(screen.getByRole('button', { name: 'Save readings' }));
     expect(
-      await screen.findByRole('heading', { level: 2, name: 'Take the thermostat out and test it' }),
+      await screen.findByRole('heading', {
+        level: 2,
+        name: 'Does coolant move through the engine?',
+      }),
     ).toBeTruthy();
     const sent = walkRequests()[0]?.body as { event: Record<string, unknown> };
     expect(sent.event).toMatchObject({
       type: 'answer.measurement',
       nodeId: 'hose-temps',
       readings: {
+        engineTempAtHoses: { value: 105, unit: 'degC' },
         radiatorInletTemp: { value: 167, unit: 'degF' },
         radiatorOutletTemp: { value: 158, unit: 'degF' },
       },
