@@ -119,11 +119,25 @@ describe('tree authoring', () => {
     await problems.getByText('leads nowhere yet').waitFor({ state: 'detached' });
 
     // ...and the refill answer of the first question now leads to the new step.
-    // The step may sit outside the graph's visible area; select it as a click would.
-    await graph
-      .getByRole('button', { name: 'When does it run hot?' })
-      .first()
-      .dispatchEvent('click');
+    // A graph of more than 60 steps draws only what is in view, and the view is on the new step:
+    // fit the whole tree, then drag the empty top-left corner of the pane down until the first
+    // question at the top is drawn, and select it as a click would.
+    const firstQuestion = graph.getByRole('button', { name: 'When does it run hot?' }).first();
+    await graph.scrollIntoViewIfNeeded();
+    await graph.getByRole('button', { name: 'Fit View' }).click();
+    const pane = (await graph.boundingBox())!;
+    const drawn = () =>
+      firstQuestion.waitFor({ state: 'attached', timeout: 1_000 }).then(
+        () => true,
+        () => false,
+      );
+    for (let i = 0; i < 6 && !(await drawn()); i += 1) {
+      await page.mouse.move(pane.x + 8, pane.y + 8);
+      await page.mouse.down();
+      await page.mouse.move(pane.x + 8, pane.y + pane.height - 8, { steps: 8 });
+      await page.mouse.up();
+    }
+    await firstQuestion.dispatchEvent('click');
     await page
       .getByRole('form', { name: 'Edit “When does it run hot?”' })
       .getByRole('group', { name: /^Answer 3/ })
