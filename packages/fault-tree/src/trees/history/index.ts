@@ -33,6 +33,6 @@ export const shippedHistory: Readonly<Record<string, ShippedHistory>> = {
   'coolant-level-dropping': {
     earlier: [parse(coolantLevelDroppingV1)],
     changeNote:
-      'Updated by Heatpath: a wet footwell and a milky filler cap are confirmed before a heater core or coolant in the oil is named, the cap’s vacuum valve and coolant burnt in the cylinders are checked, the running pressure check stops below the cap rating, and distances can be given in miles.',
+      'Updated by Heatpath: a system worked on lately is bled first; a wet footwell and a milky filler cap are confirmed before a heater core or coolant in the oil is named; the cap is tested for opening too low, too high and at its vacuum valve; pressure tests stay at the cap rating, never above it; the running pressure check stops below the rating; coolant burnt in the cylinders is checked before a head gasket; and distances can be given in miles.',
   },
 };
