@@ -62,6 +62,7 @@ export type { Quantity, QuantityInfo, UnitCode } from './units/quantities.js';
 export { fromCanonical, toCanonical } from './units/convert-units.js';
 export {
   formatCanonical,
+  formatComputed,
   formatNumber,
   formatRange,
   formatWithUnit,

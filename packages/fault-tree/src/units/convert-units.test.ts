@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fromCanonical, toCanonical } from './convert-units.js';
-import { formatRange } from './format-value.js';
+import { formatComputed, formatRange } from './format-value.js';
 
 describe('unit conversion to canonical units', () => {
   it('converts absolute temperatures with their offset', () => {
@@ -33,5 +33,20 @@ describe('unit conversion to canonical units', () => {
       'between -40 and 302 °F (-40 and 150 °C)',
     );
     expect(formatRange({ min: 0.3, max: 2.5 }, 'pressure')).toBe('between 0.3 and 2.5 bar');
+  });
+});
+
+describe('formatComputed: worked-out values shown no finer than their inputs', () => {
+  // Refractometer readings are good to about ±1 K (ASTM D3321) and handbooks differ by 2–3 K at
+  // 50–60 % (trade-facts.md), so a freezing point is shown in whole degrees; IAPWS-IF97 gives
+  // 126.25 °C at 1.4 bar gauge (trade-facts.md), shown as 126 °C.
+  it('rounds temperatures to whole degrees, differences to a tenth, pressures to a hundredth', () => {
+    expect(formatComputed(-37.17, 'temperature')).toBe('-37 °C');
+    expect(formatComputed(126.25, 'temperature')).toBe('126 °C');
+    expect(formatComputed(103.89, 'temperature', 'degF')).toBe('219 °F');
+    expect(formatComputed(6.04, 'temperatureDelta')).toBe('6 K');
+    expect(formatComputed(6.56, 'temperatureDelta')).toBe('6.6 K');
+    expect(formatComputed(0.0234, 'pressure')).toBe('0.02 bar');
+    expect(formatComputed(12.5, 'percentage')).toBe('12.5 %');
   });
 });

@@ -28,6 +28,28 @@ export function formatCanonical(value: number, quantity: Quantity, unit?: UnitCo
   return formatWithUnit(fromCanonical(value, shown, quantity), shown);
 }
 
+/**
+ * Decimals a worked-out value is shown with: no more than its inputs support. Freezing and
+ * boiling points and other computed temperatures come from readings good to about ±1 K
+ * (refractometer, ASTM D3321; IR and contact thermometers) and from tables that differ by 2–3 K,
+ * so whole degrees; a temperature difference to a tenth of a kelvin; pressures to a hundredth
+ * of a bar (about 0.15 psi, finer than a tester's dial is read). Branches use the full value.
+ */
+const computedDecimals: Partial<Record<Quantity, number>> = {
+  temperature: 0,
+  temperatureDelta: 1,
+};
+
+/** A computed value as shown to people, rounded by its quantity; `unit` defaults to canonical. */
+export function formatComputed(value: number, quantity: Quantity, unit?: UnitCode): string {
+  const shown = unit ?? canonicalUnitOf(quantity);
+  const decimals = computedDecimals[quantity] ?? 2;
+  const number = formatNumber(fromCanonical(value, shown, quantity), decimals);
+  const symbol = unitSymbol(shown);
+  if (symbol === '') return number;
+  return `${number} ${symbol}`;
+}
+
 /** "between 0 and 150 °C" or, when a person typed another unit, "between 32 and 302 °F (0 and 150 °C)". */
 export function formatRange(
   range: { readonly min: number; readonly max: number },

@@ -11,7 +11,7 @@ import type {
   OutcomeNode,
   TreeNode,
 } from '../schema/tree-schema.js';
-import { formatCanonical, formatWithUnit } from '../units/format-value.js';
+import { formatComputed, formatWithUnit } from '../units/format-value.js';
 import type { Quantity, UnitCode } from '../units/quantities.js';
 import type { PathStep, RouteKey } from './walk-context.js';
 import type { ProcedureResult, Reading, WalkEvent } from './walk-events.js';
@@ -160,7 +160,7 @@ function computedView(
     quantity: value.quantity,
     unit: value.unit,
     value: known ?? null,
-    display: known === undefined ? null : formatCanonical(known, value.quantity),
+    display: known === undefined ? null : formatComputed(known, value.quantity),
   };
 }
 

@@ -3,7 +3,7 @@
 // by hand here. Part of the case page's lazily loaded chunk.
 import type { UnitPreferences } from '@heatpath/contracts';
 import {
-  formatCanonical,
+  formatComputed,
   quantityInfo,
   unitSymbol,
   type ComputedView,
@@ -59,7 +59,7 @@ export function computedDisplay(view: ComputedView, preferences: UnitPreferences
   if (view.value === null || view.display === null) return null;
   const unit = preferredUnit(view.quantity, preferences);
   if (unit === view.unit) return view.display;
-  return `${formatCanonical(view.value, view.quantity, unit)} (${view.display})`;
+  return `${formatComputed(view.value, view.quantity, unit)} (${view.display})`;
 }
 
 /**
