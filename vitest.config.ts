@@ -11,6 +11,8 @@ export default defineConfig({
           // The start and test commands' own logic (plain Node) is checked here too.
           include: ['packages/*/src/**/*.test.ts', 'scripts/**/*.test.mjs'],
           environment: 'node',
+          // Property tests run a fixed number of cases; on a loaded machine that takes longer.
+          testTimeout: 30_000,
         },
       },
       {
@@ -20,6 +22,10 @@ export default defineConfig({
           root: './apps/web',
           include: ['src/**/*.test.{ts,tsx}'],
           environment: 'jsdom',
+          setupFiles: ['./src/test/setup.ts'],
+          // Tests wait for what they expect to see (findBy*/waitFor, 10 s each, src/test/setup.ts);
+          // a whole screen rendered in jsdom on a loaded 2-core machine needs more than 5 s.
+          testTimeout: 30_000,
         },
       },
       {

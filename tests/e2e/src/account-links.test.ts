@@ -3,7 +3,7 @@
 // forgot-password page answers the same for any address.
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { launch, screenshot, signIn } from './browser';
 import type { BrowserSession } from './browser';
 
@@ -18,28 +18,30 @@ afterAll(async () => {
 });
 
 /** The set-password link in the newest message the SMTP fake kept for an address. */
-async function linkSentTo(address: string): Promise<string> {
-  const deadline = Date.now() + 20_000;
-  while (Date.now() < deadline) {
-    const files = (() => {
-      try {
-        return readdirSync(mailDir).filter((f) => f.endsWith('.eml'));
-      } catch {
-        return [];
+function linkSentTo(address: string): Promise<string> {
+  // Checked until the message is there (the server's worker polls the outbox), not slept for.
+  return vi.waitFor(
+    () => {
+      const files = (() => {
+        try {
+          return readdirSync(mailDir).filter((f) => f.endsWith('.eml'));
+        } catch {
+          return [];
+        }
+      })().sort();
+      for (const file of files.reverse()) {
+        // Quoted-printable: join soft line breaks and decode =XX.
+        const raw = readFileSync(join(mailDir, file), 'utf8')
+          .replace(/=\r?\n/g, '')
+          .replace(/=([0-9A-F]{2})/g, (_m, hex: string) => String.fromCharCode(parseInt(hex, 16)));
+        if (!raw.includes(address)) continue;
+        const link = /https?:\/\/\S+\/set-password\?token=[A-Za-z0-9_-]+/.exec(raw)?.[0];
+        if (link) return link;
       }
-    })().sort();
-    for (const file of files.reverse()) {
-      // Quoted-printable: join soft line breaks and decode =XX.
-      const raw = readFileSync(join(mailDir, file), 'utf8')
-        .replace(/=\r?\n/g, '')
-        .replace(/=([0-9A-F]{2})/g, (_m, hex: string) => String.fromCharCode(parseInt(hex, 16)));
-      if (!raw.includes(address)) continue;
-      const link = /https?:\/\/\S+\/set-password\?token=[A-Za-z0-9_-]+/.exec(raw)?.[0];
-      if (link) return link;
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error(`no set-password link reached the SMTP fake for ${address}`);
+      throw new Error(`no set-password link reached the SMTP fake for ${address}`);
+    },
+    { timeout: 20_000, interval: 300 },
+  );
 }
 
 describe('invitations and password links', () => {

@@ -67,3 +67,19 @@ export async function signIn(page: Page, email: string, password = demoPassword)
   await submitSignIn(page, email, password);
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: 30_000 });
 }
+
+/**
+ * Sets the signed-in person's remembered units through the API (°C, bar and L unless told), so
+ * a test starts from the units it expects whatever an earlier or interrupted test left. Call it
+ * before the first full page load after signing in: the app reads the units as it loads.
+ */
+export async function startWithUnits(
+  page: Page,
+  units: { temperature?: 'C' | 'F'; pressure?: 'bar' | 'psi'; volume?: 'L' | 'qt' } = {},
+): Promise<void> {
+  const res = await page.request.patch('/api/me/preferences', {
+    headers: { 'X-Heatpath-Client': 'web' },
+    data: { units: { temperature: 'C', pressure: 'bar', volume: 'L', ...units } },
+  });
+  if (!res.ok()) throw new Error(`setting units: ${res.status()} ${await res.text()}`);
+}

@@ -2,7 +2,7 @@
 // remembered for the person across reloads, the boiling point at a cap rating, and heat flow for
 // propylene glycol near 100 °C.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, screenshot, signIn } from './browser';
+import { launch, screenshot, signIn, startWithUnits } from './browser';
 import type { BrowserSession } from './browser';
 
 let session: BrowserSession;
@@ -17,6 +17,7 @@ describe('calculators', () => {
   it('gives the protection of a 50 % EG mix, in °C then °F, and remembers the unit', async () => {
     const { page, context } = await session.newPage({ width: 390, height: 844 });
     await signIn(page, 'apprentice@harbourlane.test');
+    await startWithUnits(page);
     await page.goto('/calculators');
     await page.getByRole('link', { name: /Coolant protection/ }).click();
     await page.getByText('Ethylene glycol (EG)').click();
@@ -43,7 +44,7 @@ describe('calculators', () => {
     await page.getByLabel('Concentration', { exact: true }).fill('50');
     await page.getByRole('region', { name: 'Result' }).getByText(/°F/).first().waitFor();
     await screenshot(page, 'calculator-protection-phone-fahrenheit');
-    // Put the demo person's unit back for other tests.
+    // Back to °C as the person had it; no other test relies on it (each sets its own units).
     await page.getByRole('group', { name: 'Temperature unit' }).getByText('°C').click();
     await page.waitForLoadState('networkidle');
     await context.close();

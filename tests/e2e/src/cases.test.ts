@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launch, screenshot, signIn } from './browser';
 import type { BrowserSession } from './browser';
+import { diagnosedCase } from './diagnosed-case';
 
 let session: BrowserSession;
 beforeAll(async () => {
@@ -182,14 +183,21 @@ describe('guided diagnosis', () => {
   });
 
   it('the advisor sees the diagnosed case and its findings, read-only', async () => {
-    expect(caseUrl).not.toBe('');
+    // Its own diagnosed case, made through the API, so this test needs no other to have run.
+    const { caseId } = await diagnosedCase({
+      session,
+      complaint: 'Runs hot in slow traffic; the fan seems to run all the time.',
+      mileageAtIntake: 96_200,
+      photos: [],
+      correctionAddition: 'Customer approved the work by phone.',
+    });
     const { page, context } = await session.newPage({ width: 1024, height: 768 });
     await signIn(page, 'advisor@harbourlane.test');
     await page
       .getByRole('navigation', { name: 'Main' })
       .getByRole('link', { name: /Findings/ })
       .click();
-    await page.getByText(plate).first().click();
+    await page.locator(`a[href="/cases/${caseId}"]`).first().click();
     await page.getByText('Customer approved the work by phone.').first().waitFor();
     expect(await page.getByRole('button', { name: 'Save findings' }).count()).toBe(0);
     await screenshot(page, 'case-advisor-findings-tablet');

@@ -29,6 +29,8 @@ export async function diagnosedCase(options: {
   mileageAtIntake: number;
   photos: readonly CasePhoto[];
   notes?: readonly string[];
+  /** Words the technician adds to the finding's correction before marking the case diagnosed. */
+  correctionAddition?: string;
 }): Promise<{ caseId: string; reference: string }> {
   const tech = await apiAs('tech@harbourlane.test');
   const { vehicles } = await tech<{ vehicles: { id: string }[] }>('GET', '/api/vehicles?q=HL17');
@@ -64,6 +66,21 @@ export async function diagnosedCase(options: {
       text,
       nodeId: 'shroud-inspection',
       idempotencyKey: crypto.randomUUID(),
+    });
+  }
+  if (options.correctionAddition) {
+    const { findings } = await tech<{ findings: Record<string, unknown> & { correction: string } }>(
+      'GET',
+      `/api/cases/${kase.id}`,
+    );
+    await tech('PUT', `/api/cases/${kase.id}/findings`, {
+      revision: findings.revision,
+      concern: findings.concern,
+      cause: findings.cause,
+      correction: `${findings.correction} ${options.correctionAddition}`,
+      parts: findings.parts,
+      labour: findings.labour,
+      followUps: findings.followUps,
     });
   }
   await tech('POST', `/api/cases/${kase.id}/diagnosed`);

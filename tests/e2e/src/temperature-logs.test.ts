@@ -8,7 +8,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { APIRequestContext, Page } from 'playwright-core';
 import { logCsv, syntheticLog } from '@heatpath/temperature-log/testing';
-import { launch, screenshot, signIn } from './browser';
+import { launch, screenshot, signIn, startWithUnits } from './browser';
 import type { BrowserSession } from './browser';
 
 let session: BrowserSession;
@@ -131,6 +131,7 @@ describe('temperature logs', () => {
   it('a technician maps a log, sees the episode shaded and uses the opening temperature in the step', async () => {
     const { page, context } = await session.newPage({ width: 1024, height: 768 });
     await signIn(page, 'tech@harbourlane.test');
+    await startWithUnits(page);
     const caseId = await caseAtThermostatOpening(page);
     try {
       await page.goto(`/cases/${caseId}`);

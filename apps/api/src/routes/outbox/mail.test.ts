@@ -1,10 +1,10 @@
 // E-mail through a real SMTP conversation: the repair order reaches an smtp-server on a free
 // loopback port with its PDF and the right recipients; with the server down the message stays
 // queued (status, attempts, last error) and goes out once it is back; no header can be injected.
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { OutboxMessage } from '../../db/models/index';
 import { startSmtpFake } from '../../dev/smtp-fake';
-import { testApp } from '../../test/context';
+import { testApp, testSequelize } from '../../test/context';
 import { parseMail, testWorker } from '../../test/mail';
 import { approveLatest, diagnosedCase } from '../../test/repair-orders';
 
@@ -26,6 +26,20 @@ async function approvedCase() {
   });
   const approved = await approveLatest(fixture.advisor, fixture.caseId);
   return { ...fixture, revision: approved.approvedRevision as number };
+}
+
+/**
+ * Time moves on for a workshop's queued mail without waiting: a retry falls due by the database's
+ * clock, so the message's stored times are moved back by as much as would have passed.
+ */
+async function letTimePassForMailOf(workshopId: string, ms: number): Promise<void> {
+  await testSequelize().query(
+    `UPDATE outbox_messages
+        SET next_attempt_at = next_attempt_at - $2 * interval '1 millisecond',
+            last_attempt_at = last_attempt_at - $2 * interval '1 millisecond'
+      WHERE workshop_id = $1 AND status = 'queued'`,
+    { bind: [workshopId, ms] },
+  );
 }
 
 const customer = { name: 'Morwenna Tregarth', address: 'morwenna.tregarth@example.test' };
@@ -111,7 +125,7 @@ describe('sending a repair order by e-mail', () => {
         new Date(waiting.lastAttemptAt).getTime(),
       );
       // Still down at the next try: it waits longer, and nothing is lost.
-      await new Promise((r) => setTimeout(r, 120));
+      await letTimePassForMailOf(w.workshop.id, 120);
       await worker.runOnce();
       expect((await lead.get('/api/outbox')).body.messages[0]).toMatchObject({
         status: 'queued',
@@ -119,7 +133,7 @@ describe('sending a repair order by e-mail', () => {
       });
 
       fake = await startSmtpFake({ port });
-      await new Promise((r) => setTimeout(r, 260));
+      await letTimePassForMailOf(w.workshop.id, 260);
       expect(await worker.runOnce()).toEqual({ sent: 1, failed: 0 });
       const received = await fake.waitForMessage();
       expect(received.to).toEqual(['front-desk@example.test']);
@@ -147,7 +161,7 @@ describe('sending a repair order by e-mail', () => {
       }
       const [ra, rb] = await Promise.all([a.runOnce(), b.runOnce()]);
       expect(ra.sent + rb.sent).toBe(3);
-      await new Promise((r) => setTimeout(r, 100));
+      await vi.waitFor(() => expect(fake.messages).toHaveLength(3));
       expect(fake.messages.map((m) => m.to[0]).sort()).toEqual([
         'one@example.test',
         'three@example.test',
@@ -184,7 +198,7 @@ describe('sending a repair order by e-mail', () => {
         .send({ revision, to: { address: 'nobody@example.test' }, audience: 'other' });
       for (let attempt = 1; attempt <= 3; attempt += 1) {
         await worker.runOnce();
-        await new Promise((r) => setTimeout(r, 260));
+        await letTimePassForMailOf(w.workshop.id, 260);
       }
       const message = (await lead.get('/api/outbox')).body.messages[0];
       expect(message).toMatchObject({ status: 'failed', attempts: 3, nextAttemptAt: null });

@@ -103,6 +103,7 @@ beforeEach(() => {
 
 afterEach(() => {
   cleanup();
+  vi.useRealTimers();
   vi.unstubAllGlobals();
 });
 
@@ -221,9 +222,11 @@ describe('the draft editor', () => {
         within(comparison).getByRole('button', { name: 'Keep mine and save over theirs' }),
       ).toBeTruthy();
 
-      // Nothing was sent again while the conflict stands.
+      // Nothing was sent again while the conflict stands, even once the autosave delay is over
+      // (the clock is moved past it rather than waited for).
+      vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout'], shouldAdvanceTime: true });
       await user.type(screen.getByLabelText('Title'), '!');
-      await new Promise((resolve) => setTimeout(resolve, 1000));
+      await vi.advanceTimersByTimeAsync(1000);
       expect(requests.filter((request) => request.method === 'PUT')).toHaveLength(1);
 
       await user.click(within(comparison).getByRole('button', { name: 'Reload theirs' }));
