@@ -1,20 +1,22 @@
 // A case as its page shows it, and the walk requests. The walk's own shape belongs to the
-// fault-tree package (the browser runs the same code), so it is referenced, not re-typed.
+// fault-tree package (the browser runs the same code); walk.ts describes it for parsing.
 import { z } from 'zod';
-import type { WalkSummary } from '@heatpath/fault-tree';
-import type { CaseStatus } from './cases';
-import type { Findings } from './findings';
-import type { Customer, Vehicle } from './vehicles';
+import { walkEventSchema } from '@heatpath/fault-tree';
+import { caseStatuses } from './cases';
+import { findingsSchema } from './findings';
+import { personRefSchema, timestampSchema } from './person';
+import { customerSchema, distanceUnits, vehicleSchema } from './vehicles';
+import { walkSummarySchema } from './walk';
 
 export const idempotencyKeySchema = z
   .string({ error: 'Send an idempotency key with every answer.' })
   .min(8, 'An idempotency key has at least 8 characters.')
   .max(100);
 
-/** POST /api/cases/:caseId/walk — the event is checked by the fault-tree package itself. */
+/** POST /api/cases/:caseId/walk — the event in the fault-tree package's own form. */
 export const walkEventRequestSchema = z.object({
   idempotencyKey: idempotencyKeySchema,
-  event: z.record(z.string(), z.unknown(), { error: 'Send the answer as an object.' }),
+  event: walkEventSchema,
 });
 export type WalkEventRequest = z.infer<typeof walkEventRequestSchema>;
 
@@ -29,68 +31,82 @@ export const addNoteRequestSchema = z.object({
 });
 export type AddNoteRequest = z.infer<typeof addNoteRequestSchema>;
 
-export interface PersonRef {
-  id: string;
-  name: string;
-}
+export const caseNoteSchema = z.object({
+  id: z.uuid(),
+  nodeId: z.string().nullable(),
+  text: z.string(),
+  author: personRefSchema,
+  createdAt: timestampSchema,
+});
+export type CaseNote = z.infer<typeof caseNoteSchema>;
 
-export interface CaseNote {
-  id: string;
-  nodeId: string | null;
-  text: string;
-  author: PersonRef;
-  createdAt: string;
-}
+export const caseAttachmentSchema = z.object({
+  id: z.uuid(),
+  nodeId: z.string().nullable(),
+  kind: z.enum(['photo', 'file', 'log']),
+  name: z.string(),
+  mediaType: z.string(),
+  byteSize: z.number().int(),
+  width: z.number().int().nullable(),
+  height: z.number().int().nullable(),
+  url: z.string(),
+  thumbnailUrl: z.string().nullable(),
+  uploadedBy: personRefSchema,
+  createdAt: timestampSchema,
+});
+export type CaseAttachment = z.infer<typeof caseAttachmentSchema>;
 
-export interface CaseAttachment {
-  id: string;
-  nodeId: string | null;
-  kind: 'photo' | 'file' | 'log';
-  name: string;
-  mediaType: string;
-  byteSize: number;
-  width: number | null;
-  height: number | null;
-  url: string;
-  thumbnailUrl: string | null;
-  uploadedBy: PersonRef;
-  createdAt: string;
-}
+export const caseAuditEntrySchema = z.object({
+  seq: z.number().int(),
+  kind: z.string(),
+  nodeId: z.string().nullable(),
+  summary: z.string(),
+  actor: personRefSchema,
+  createdAt: timestampSchema,
+});
+export type CaseAuditEntry = z.infer<typeof caseAuditEntrySchema>;
 
-export interface CaseAuditEntry {
-  seq: number;
-  kind: string;
-  nodeId: string | null;
-  summary: string;
-  actor: PersonRef;
-  createdAt: string;
-}
+/** GET /api/cases/:caseId/events */
+export const caseEventsResponseSchema = z.object({ events: z.array(caseAuditEntrySchema) });
+export type CaseEventsResponse = z.infer<typeof caseEventsResponseSchema>;
 
-export interface CaseDetail {
-  id: string;
-  number: number;
-  reference: string;
-  status: CaseStatus;
-  complaint: string;
-  symptom: string;
-  mileageAtIntake: number | null;
-  mileageUnit: 'km' | 'mi';
-  vehicle: Vehicle;
-  customer: Customer | null;
-  assignee: PersonRef | null;
-  createdAt: string;
-  updatedAt: string;
-  diagnosedAt: string | null;
-  tree: { treeId: string; versionId: string; version: number; title: string; definition: unknown };
-  walk: WalkSummary;
-  notes: CaseNote[];
-  attachments: CaseAttachment[];
-  findings: Findings | null;
+/** GET /api/cases/:caseId, and the answer to every change of the case. */
+export const caseDetailSchema = z.object({
+  id: z.uuid(),
+  number: z.number().int(),
+  reference: z.string(),
+  status: z.enum(caseStatuses),
+  complaint: z.string(),
+  symptom: z.string(),
+  mileageAtIntake: z.number().nullable(),
+  mileageUnit: z.enum(distanceUnits),
+  vehicle: vehicleSchema,
+  customer: customerSchema.nullable(),
+  assignee: personRefSchema.nullable(),
+  createdAt: timestampSchema,
+  updatedAt: timestampSchema,
+  diagnosedAt: timestampSchema.nullable(),
+  tree: z.object({
+    treeId: z.uuid(),
+    versionId: z.uuid(),
+    version: z.number().int(),
+    title: z.string(),
+    /** The version's definition as stored; the browser compiles it with the fault-tree package. */
+    definition: z.unknown(),
+  }),
+  walk: walkSummarySchema,
+  notes: z.array(caseNoteSchema),
+  attachments: z.array(caseAttachmentSchema),
+  findings: findingsSchema.nullable(),
   /** What the signed-in person may do with this case. */
-  can: { walk: boolean; editFindings: boolean; markDiagnosed: boolean };
-}
+  can: z.object({ walk: z.boolean(), editFindings: z.boolean(), markDiagnosed: z.boolean() }),
+});
+export type CaseDetail = z.infer<typeof caseDetailSchema>;
 
-export interface WalkEventResponse {
-  walk: WalkSummary;
-  repeated: boolean;
-}
+/** POST /api/cases/:caseId/walk */
+export const walkEventResponseSchema = z.object({
+  walk: walkSummarySchema,
+  /** True when the idempotency key had been stored before: nothing new was applied. */
+  repeated: z.boolean(),
+});
+export type WalkEventResponse = z.infer<typeof walkEventResponseSchema>;

@@ -1,5 +1,6 @@
 // Cases as the API takes and returns them: intake, the list with keyset pages, and the case.
 import { z } from 'zod';
+import { personRefSchema, timestampSchema } from './person';
 import { customerInputSchema, customerSchema, distanceUnits, vehicleSchema } from './vehicles';
 
 export const caseStatuses = ['open', 'in_diagnosis', 'diagnosed', 'closed'] as const;
@@ -47,7 +48,15 @@ export const caseListQuerySchema = z.object({
 });
 export type CaseListQuery = z.infer<typeof caseListQuerySchema>;
 
-export const personRefSchema = z.object({ id: z.uuid(), name: z.string() });
+/** What a case list screen filters by: the query without its paging (the web app's list key). */
+export const caseListFiltersSchema = caseListQuerySchema
+  .pick({
+    status: true,
+    technicianId: true,
+    q: true,
+  })
+  .extend({ scope: z.enum(['mine', 'workshop']) });
+export type CaseListFilters = z.infer<typeof caseListFiltersSchema>;
 
 export const caseSummarySchema = z.object({
   id: z.uuid(),
@@ -67,8 +76,8 @@ export const caseSummarySchema = z.object({
   customerName: z.string().nullable(),
   assignee: personRefSchema.nullable(),
   currentStepTitle: z.string().nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  createdAt: timestampSchema,
+  updatedAt: timestampSchema,
 });
 export type CaseSummary = z.infer<typeof caseSummarySchema>;
 
@@ -93,7 +102,9 @@ export const availableTreeSchema = z.object({
   symptom: z.string(),
   latestPublished: z.object({ id: z.uuid(), version: z.number() }).nullable(),
 });
-export const availableTreeListSchema = z.object({ trees: z.array(availableTreeSchema) });
 export type AvailableTree = z.infer<typeof availableTreeSchema>;
+/** GET /api/trees/available */
+export const availableTreeListSchema = z.object({ trees: z.array(availableTreeSchema) });
+export type AvailableTreeList = z.infer<typeof availableTreeListSchema>;
 
-export { customerSchema, vehicleSchema };
+export { customerSchema, personRefSchema, vehicleSchema };

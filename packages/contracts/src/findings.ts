@@ -1,5 +1,6 @@
 // Findings of a diagnosed case: what goes into the repair order.
 import { z } from 'zod';
+import { personRefSchema, timestampSchema } from './person';
 
 /** How many photos a repair order carries at most. */
 export const findingsPhotoLimit = 6;
@@ -37,8 +38,8 @@ export const findingsSchema = findingsLinesSchema.extend({
   cause: z.string(),
   correction: z.string(),
   revision: z.number(),
-  updatedAt: z.string(),
-  updatedBy: z.object({ id: z.uuid(), name: z.string() }).nullable(),
+  updatedAt: timestampSchema,
+  updatedBy: personRefSchema.nullable(),
 });
 export type Findings = z.infer<typeof findingsSchema>;
 

@@ -1,3 +1,5 @@
+export * from './person';
+export * from './walk';
 export * from './auth';
 export * from './errors';
 export * from './vin';

@@ -2,6 +2,7 @@
 // development outbox the lead reads, staff invitations and password resets.
 import { z } from 'zod';
 import { passwordSchema, roleSchema } from './auth';
+import { personRefSchema } from './person';
 
 /** Control characters (CR and LF above all) never reach a mail header. */
 const controlCharacters = /\p{Cc}/u;
@@ -78,7 +79,7 @@ export const outboxMessageSchema = z.object({
   nextAttemptAt: z.string().nullable(),
   sentAt: z.string().nullable(),
   createdAt: z.string(),
-  createdBy: z.object({ id: z.uuid(), name: z.string() }).nullable(),
+  createdBy: personRefSchema.nullable(),
   caseId: z.uuid().nullable(),
 });
 export type OutboxMessage = z.infer<typeof outboxMessageSchema>;

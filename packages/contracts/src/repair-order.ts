@@ -2,7 +2,7 @@
 // chosen photos, approval), the export of an approved revision (Heatpath's own versioned JSON
 // format, documented in docs/repair-order-export.md), and sending it by e-mail.
 import { z } from 'zod';
-import { personRefSchema } from './cases';
+import { personRefSchema } from './person';
 import {
   findingsPhotoLimit,
   labourLineSchema,

@@ -1,18 +1,20 @@
 // Temperature logs on a case as the API takes and returns them: the upload's optional column
 // mapping, the "needs mapping" answer with the file's candidate columns, a stored log with its
-// analysis and candidate readings, and the series the chart draws. The series, the analysis and
-// the readings belong to the temperature-log package and are referenced, not re-typed.
+// analysis and candidate readings, and the series the chart draws. The analysis, the readings and
+// the columns belong to the temperature-log package: temperature-log-analysis.ts describes them
+// for parsing, typed with that package's own types.
 import { z } from 'zod';
-import type {
-  CandidateColumn,
-  CandidateReading,
-  ColumnMapping,
-  DetectedFormat,
-  MappingField,
-  ResolvedMapping,
-  TemperatureLogAnalysis,
-} from '@heatpath/temperature-log';
-import type { PersonRef } from './case-detail';
+import type { ColumnMapping } from '@heatpath/temperature-log';
+import { personRefSchema, timestampSchema } from './person';
+import {
+  candidateColumnSchema,
+  candidateReadingSchema,
+  detectedFormatSchema,
+  mappingFieldSchema,
+  proposedMappingSchema,
+  resolvedMappingSchema,
+  temperatureLogAnalysisSchema,
+} from './temperature-log-analysis';
 
 // The package's own shapes the web app reads, passed through so it needs no second dependency.
 export type {
@@ -102,85 +104,108 @@ export const logDetailQuerySchema = z
   });
 export type LogDetailQuery = z.infer<typeof logDetailQuerySchema>;
 
-export type LogChannel =
-  'intakeAirC' | 'ambientC' | 'vehicleSpeedKph' | 'engineSpeedRpm' | 'fanDuty';
-export type MappingSource = 'detected' | 'confirmed' | 'remembered';
+export const logChannels = [
+  'intakeAirC',
+  'ambientC',
+  'vehicleSpeedKph',
+  'engineSpeedRpm',
+  'fanDuty',
+] as const;
+export type LogChannel = (typeof logChannels)[number];
+export const mappingSources = ['detected', 'confirmed', 'remembered'] as const;
+export type MappingSource = (typeof mappingSources)[number];
+
+const optionalChannel = z.array(z.number().nullable()).nullable();
 
 /** The readings the chart draws: all of them, or at most `maxPoints` keeping each bucket's extremes. */
-export interface ChartSeries {
-  from: number;
-  to: number;
+export const chartSeriesSchema = z.object({
+  from: z.number(),
+  to: z.number(),
   /** Readings of the log inside the window. */
-  readingsInWindow: number;
+  readingsInWindow: z.number().int(),
   /** True when the window held more readings than `maxPoints` and was thinned. */
-  downsampled: boolean;
-  maxPoints: number;
-  times: number[];
-  coolantC: number[];
-  intakeAirC: (number | null)[] | null;
-  ambientC: (number | null)[] | null;
-  vehicleSpeedKph: (number | null)[] | null;
-  engineSpeedRpm: (number | null)[] | null;
-  fanDuty: (number | null)[] | null;
-}
+  downsampled: z.boolean(),
+  maxPoints: z.number().int(),
+  times: z.array(z.number()),
+  coolantC: z.array(z.number()),
+  intakeAirC: optionalChannel,
+  ambientC: optionalChannel,
+  vehicleSpeedKph: optionalChannel,
+  engineSpeedRpm: optionalChannel,
+  fanDuty: optionalChannel,
+});
+export type ChartSeries = z.infer<typeof chartSeriesSchema>;
 
-export interface TemperatureLogSummary {
-  id: string;
-  caseId: string;
+export const temperatureLogSummarySchema = z.object({
+  id: z.uuid(),
+  caseId: z.uuid(),
   /** The step the log was attached to; null for the case as a whole. */
-  nodeId: string | null;
-  name: string;
-  byteSize: number;
-  attachmentId: string;
+  nodeId: z.string().nullable(),
+  name: z.string(),
+  byteSize: z.number().int(),
+  attachmentId: z.uuid(),
   /** The original file, as uploaded. */
-  fileUrl: string;
-  readings: number;
-  skippedRows: number;
-  durationSeconds: number;
+  fileUrl: z.string(),
+  readings: z.number().int(),
+  skippedRows: z.number().int(),
+  durationSeconds: z.number(),
   /** The first reading's clock time or timestamp as written in the file. */
-  startedAt: string | null;
-  channels: LogChannel[];
-  sourceSignature: string;
-  mapping: ResolvedMapping;
-  mappingSource: MappingSource;
-  detected: DetectedFormat;
+  startedAt: z.string().nullable(),
+  channels: z.array(z.enum(logChannels)),
+  sourceSignature: z.string(),
+  mapping: resolvedMappingSchema,
+  mappingSource: z.enum(mappingSources),
+  detected: detectedFormatSchema,
   /** At the default settings, for the list. */
-  headline: { peakC: number; episodes: number; openingC: number | null };
-  uploadedBy: PersonRef;
-  createdAt: string;
-}
+  headline: z.object({
+    peakC: z.number(),
+    episodes: z.number().int(),
+    openingC: z.number().nullable(),
+  }),
+  uploadedBy: personRefSchema,
+  createdAt: timestampSchema,
+});
+export type TemperatureLogSummary = z.infer<typeof temperatureLogSummarySchema>;
 
-export interface TemperatureLogDetail extends TemperatureLogSummary {
-  analysis: TemperatureLogAnalysis;
-  candidateReadings: CandidateReading[];
-  series: ChartSeries;
+/** GET /api/cases/:caseId/logs/:logId and PUT …/logs/:logId/mapping */
+export const temperatureLogDetailSchema = temperatureLogSummarySchema.extend({
+  analysis: temperatureLogAnalysisSchema,
+  candidateReadings: z.array(candidateReadingSchema),
+  series: chartSeriesSchema,
   /** The file's columns, so the mapping can be changed; null when the file mapped itself. */
-  columns: CandidateColumn[] | null;
-}
+  columns: z.array(candidateColumnSchema).nullable(),
+});
+export type TemperatureLogDetail = z.infer<typeof temperatureLogDetailSchema>;
 
-export interface TemperatureLogList {
-  logs: TemperatureLogSummary[];
-}
+/** GET /api/cases/:caseId/logs */
+export const temperatureLogListSchema = z.object({ logs: z.array(temperatureLogSummarySchema) });
+export type TemperatureLogList = z.infer<typeof temperatureLogListSchema>;
 
 /** A file that needs its columns confirmed: the form's content, and the upload to finish. */
-export interface LogNeedsMapping {
-  status: 'needs-mapping';
-  pendingUploadId: string;
-  name: string;
-  sourceSignature: string;
-  detected: DetectedFormat;
-  columns: CandidateColumn[];
-  proposed: Partial<ColumnMapping>;
-  unsure: MappingField[];
-  reasons: string[];
+export const logNeedsMappingSchema = z.object({
+  status: z.literal('needs-mapping'),
+  pendingUploadId: z.uuid(),
+  name: z.string(),
+  sourceSignature: z.string(),
+  detected: detectedFormatSchema,
+  columns: z.array(candidateColumnSchema),
+  proposed: proposedMappingSchema,
+  unsure: z.array(mappingFieldSchema),
+  reasons: z.array(z.string()),
   /** Set when the workshop's remembered mapping for this source no longer fits the file. */
-  rememberedProblem: string | null;
-}
+  rememberedProblem: z.string().nullable(),
+});
+export type LogNeedsMapping = z.infer<typeof logNeedsMappingSchema>;
 
-export interface LogStored {
-  status: 'stored';
-  log: TemperatureLogDetail;
-}
+export const logStoredSchema = z.object({
+  status: z.literal('stored'),
+  log: temperatureLogDetailSchema,
+});
+export type LogStored = z.infer<typeof logStoredSchema>;
 
 /** POST /api/cases/:caseId/logs and POST …/logs/:pendingUploadId/mapping */
-export type LogUploadResult = LogStored | LogNeedsMapping;
+export const logUploadResultSchema = z.discriminatedUnion('status', [
+  logStoredSchema,
+  logNeedsMappingSchema,
+]);
+export type LogUploadResult = z.infer<typeof logUploadResultSchema>;

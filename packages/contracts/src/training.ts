@@ -2,8 +2,9 @@
 // apprentice's replays and scored prediction attempts. Nothing here carries a customer's name,
 // contact, plate or VIN: apprentices' shapes are built from an allowlist in the API.
 import { z } from 'zod';
-import type { Caution, HazardKind, NodeKind } from '@heatpath/fault-tree';
-import type { PersonRef } from './case-detail';
+import { cautionSchema, hazardKinds, nodeKinds } from '@heatpath/fault-tree';
+import { personRefSchema, timestampSchema } from './person';
+import { distanceUnits } from './vehicles';
 
 export const trainingDifficulties = ['starter', 'practised', 'advanced'] as const;
 export type TrainingDifficulty = (typeof trainingDifficulties)[number];
@@ -91,248 +92,310 @@ export type PredictionRequest = z.infer<typeof predictionRequestSchema>;
 // ---- Responses ------------------------------------------------------------------------------
 
 /** The vehicle as a learner sees it: no plate, no VIN, no owner. */
-export interface TrainingVehicle {
-  make: string;
-  model: string;
-  year: number | null;
-  engine: string | null;
-  fuel: string | null;
-  mileageAtIntake: number | null;
-  mileageUnit: 'km' | 'mi';
-}
+export const trainingVehicleSchema = z.object({
+  make: z.string(),
+  model: z.string(),
+  year: z.number().int().nullable(),
+  engine: z.string().nullable(),
+  fuel: z.string().nullable(),
+  mileageAtIntake: z.number().nullable(),
+  mileageUnit: z.enum(distanceUnits),
+});
+export type TrainingVehicle = z.infer<typeof trainingVehicleSchema>;
 
-export interface TrainingPhoto {
-  id: string;
-  name: string;
-  nodeId: string | null;
-  url: string;
-  thumbnailUrl: string | null;
-}
+export const trainingPhotoSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  nodeId: z.string().nullable(),
+  url: z.string(),
+  thumbnailUrl: z.string().nullable(),
+});
+export type TrainingPhoto = z.infer<typeof trainingPhotoSchema>;
 
-export interface TrainingValue {
-  label: string;
-  display: string;
-}
+export const trainingValueSchema = z.object({ label: z.string(), display: z.string() });
+export type TrainingValue = z.infer<typeof trainingValueSchema>;
 
-export type TrainingAnswer =
-  | { kind: 'choice'; label: string }
-  | { kind: 'measurement'; readings: TrainingValue[] }
-  | { kind: 'procedure'; label: string };
+export const trainingAnswerSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('choice'), label: z.string() }),
+  z.object({ kind: z.literal('measurement'), readings: z.array(trainingValueSchema) }),
+  z.object({ kind: z.literal('procedure'), label: z.string() }),
+]);
+export type TrainingAnswer = z.infer<typeof trainingAnswerSchema>;
+
+const nodeKindSchema = z.enum(nodeKinds);
 
 /** One step of a finished case as it happened. */
-export interface TrainingStep {
-  index: number;
-  nodeId: string;
-  kind: NodeKind;
-  title: string;
+export const trainingStepSchema = z.object({
+  index: z.number().int(),
+  nodeId: z.string(),
+  kind: nodeKindSchema,
+  title: z.string(),
   /** The question asked, the measurement asked for, or the procedure's instruction. */
-  prompt: string;
-  hazards: HazardKind[];
-  cautions: Caution[];
+  prompt: z.string(),
+  hazards: z.array(z.enum(hazardKinds)),
+  cautions: z.array(cautionSchema),
   /** What the technician answered, measured or reported. */
-  answer: TrainingAnswer;
+  answer: trainingAnswerSchema,
   /** Values computed from the readings, as they stood after this step. */
-  computed: TrainingValue[];
-  photos: TrainingPhoto[];
+  computed: z.array(trainingValueSchema),
+  photos: z.array(trainingPhotoSchema),
   /** The technician's notes on this step (left out when the lead hides notes). */
-  notes: string[];
+  notes: z.array(z.string()),
   /** Filled once revealed: the choice, branch or result that led on, and where to. */
-  routeLabel: string | null;
-  next: { nodeId: string; kind: NodeKind; title: string } | null;
+  routeLabel: z.string().nullable(),
+  next: z.object({ nodeId: z.string(), kind: nodeKindSchema, title: z.string() }).nullable(),
   /** The tree's own explanation of the step, once revealed (null when the tree gives none). */
-  why: string | null;
-}
+  why: z.string().nullable(),
+});
+export type TrainingStep = z.infer<typeof trainingStepSchema>;
 
-export interface TrainingOutcome {
-  nodeId: string;
-  title: string;
-  rootCause: string;
-  correction: string;
-  parts: { description: string; quantity: number }[];
-  labour: { operation: string; hours: number }[];
-  followUps: string[];
-}
+const trainingLinesFields = {
+  parts: z.array(z.object({ description: z.string(), quantity: z.number() })),
+  labour: z.array(z.object({ operation: z.string(), hours: z.number() })),
+  followUps: z.array(z.string()),
+};
 
-export interface TrainingFindings {
-  concern: string;
-  cause: string;
-  correction: string;
-  parts: { description: string; quantity: number }[];
-  labour: { operation: string; hours: number }[];
-  followUps: string[];
-}
+export const trainingOutcomeSchema = z.object({
+  nodeId: z.string(),
+  title: z.string(),
+  rootCause: z.string(),
+  correction: z.string(),
+  ...trainingLinesFields,
+});
+export type TrainingOutcome = z.infer<typeof trainingOutcomeSchema>;
 
-export interface TrainingScore {
-  score: number;
-  maxScore: number;
-}
+export const trainingFindingsSchema = z.object({
+  concern: z.string(),
+  cause: z.string(),
+  correction: z.string(),
+  ...trainingLinesFields,
+});
+export type TrainingFindings = z.infer<typeof trainingFindingsSchema>;
+
+export const trainingScoreSchema = z.object({ score: z.number(), maxScore: z.number() });
+export type TrainingScore = z.infer<typeof trainingScoreSchema>;
 
 /** A training case as the casebook lists it: the symptom and difficulty, never the answer. */
-export interface CasebookEntry {
-  id: string;
-  symptom: string;
-  complaint: string;
-  treeTitle: string;
-  difficulty: TrainingDifficulty;
-  vehicle: TrainingVehicle;
-  stepCount: number;
+export const casebookEntrySchema = z.object({
+  id: z.uuid(),
+  symptom: z.string(),
+  complaint: z.string(),
+  treeTitle: z.string(),
+  difficulty: z.enum(trainingDifficulties),
+  vehicle: trainingVehicleSchema,
+  stepCount: z.number().int(),
   /** The caller's own attempts only. */
-  attempts: number;
-  bestScore: TrainingScore | null;
-}
+  attempts: z.number().int(),
+  bestScore: trainingScoreSchema.nullable(),
+});
+export type CasebookEntry = z.infer<typeof casebookEntrySchema>;
 
-export interface CasebookCourse {
-  id: string;
-  title: string;
-  description: string | null;
-  forEveryone: boolean;
-  trainingCaseIds: string[];
-  signOff: { signedAt: string; signedBy: PersonRef; note: string | null } | null;
-}
+/** POST /api/training/courses/:courseId/sign-offs, and a signed-off course wherever it is shown. */
+export const signOffResponseSchema = z.object({
+  signedAt: timestampSchema,
+  signedBy: personRefSchema,
+  note: z.string().nullable(),
+});
+export type SignOffResponse = z.infer<typeof signOffResponseSchema>;
+
+export const casebookCourseSchema = z.object({
+  id: z.uuid(),
+  title: z.string(),
+  description: z.string().nullable(),
+  forEveryone: z.boolean(),
+  trainingCaseIds: z.array(z.uuid()),
+  signOff: signOffResponseSchema.nullable(),
+});
+export type CasebookCourse = z.infer<typeof casebookCourseSchema>;
 
 /** GET /api/training/casebook */
-export interface Casebook {
-  courses: CasebookCourse[];
-  cases: CasebookEntry[];
-}
+export const casebookSchema = z.object({
+  courses: z.array(casebookCourseSchema),
+  cases: z.array(casebookEntrySchema),
+});
+export type Casebook = z.infer<typeof casebookSchema>;
 
 /** GET /api/training/cases/:trainingCaseId/replay — every step revealed. */
-export interface TrainingReplay {
-  trainingCase: CasebookEntry;
-  teachingNote: string;
-  steps: TrainingStep[];
-  outcome: TrainingOutcome;
-  findings: TrainingFindings | null;
-}
+export const trainingReplaySchema = z.object({
+  trainingCase: casebookEntrySchema,
+  teachingNote: z.string(),
+  steps: z.array(trainingStepSchema),
+  outcome: trainingOutcomeSchema,
+  findings: trainingFindingsSchema.nullable(),
+});
+export type TrainingReplay = z.infer<typeof trainingReplaySchema>;
 
-export type PredictionKind = 'next' | 'meaning' | 'cause';
+export const predictionKinds = ['next', 'meaning', 'cause'] as const;
+export type PredictionKind = (typeof predictionKinds)[number];
 
-export interface PredictionOption {
-  id: string;
-  label: string;
-}
+export const predictionOptionSchema = z.object({ id: z.string(), label: z.string() });
+export type PredictionOption = z.infer<typeof predictionOptionSchema>;
 
-export interface PredictionAsk {
-  kind: PredictionKind;
+export const predictionAskSchema = z.object({
+  kind: z.enum(predictionKinds),
   /** "What should the technician check next?", "What do these readings mean?", "What is the root cause?" */
-  question: string;
-  options: PredictionOption[];
-  maxPoints: number;
-}
+  question: z.string(),
+  options: z.array(predictionOptionSchema),
+  maxPoints: z.number(),
+});
+export type PredictionAsk = z.infer<typeof predictionAskSchema>;
 
-export interface PredictionResult extends PredictionAsk {
-  chosenId: string;
-  correctId: string;
-  correct: boolean;
-  points: number;
-}
+export const predictionResultSchema = predictionAskSchema.extend({
+  chosenId: z.string(),
+  correctId: z.string(),
+  correct: z.boolean(),
+  points: z.number(),
+});
+export type PredictionResult = z.infer<typeof predictionResultSchema>;
 
-export interface AttemptStep {
-  step: TrainingStep;
+export const attemptStepSchema = z.object({
+  step: trainingStepSchema,
   /** Null when the tree left only one way on, so there was nothing to predict. */
-  prediction: PredictionResult | null;
-}
+  prediction: predictionResultSchema.nullable(),
+});
+export type AttemptStep = z.infer<typeof attemptStepSchema>;
+
+const attemptStatusSchema = z.enum(['in_progress', 'finished']);
 
 /** GET /api/training/attempts/:attemptId and the answer to each prediction. */
-export interface TrainingAttempt {
-  id: string;
-  trainingCaseId: string;
-  status: 'in_progress' | 'finished';
-  startedAt: string;
-  finishedAt: string | null;
+export const trainingAttemptSchema = z.object({
+  id: z.uuid(),
+  trainingCaseId: z.uuid(),
+  status: attemptStatusSchema,
+  startedAt: timestampSchema,
+  finishedAt: timestampSchema.nullable(),
   /** Points so far; maxScore is the case's total. */
-  score: number;
-  maxScore: number;
-  steps: AttemptStep[];
+  score: z.number(),
+  maxScore: z.number(),
+  steps: z.array(attemptStepSchema),
   /** The step waiting for a prediction: shown without where it led. */
-  current: { step: TrainingStep; ask: PredictionAsk } | null;
-  trainingCase: CasebookEntry;
+  current: z.object({ step: trainingStepSchema, ask: predictionAskSchema }).nullable(),
+  trainingCase: casebookEntrySchema,
   /** After the last prediction only. */
-  teachingNote: string | null;
-  outcome: TrainingOutcome | null;
-  findings: TrainingFindings | null;
-}
+  teachingNote: z.string().nullable(),
+  outcome: trainingOutcomeSchema.nullable(),
+  findings: trainingFindingsSchema.nullable(),
+});
+export type TrainingAttempt = z.infer<typeof trainingAttemptSchema>;
 
-export interface AttemptSummary {
-  id: string;
-  trainingCaseId: string;
-  symptom: string;
-  status: 'in_progress' | 'finished';
-  score: number;
-  maxScore: number;
-  startedAt: string;
-  finishedAt: string | null;
-}
+export const attemptSummarySchema = z.object({
+  id: z.uuid(),
+  trainingCaseId: z.uuid(),
+  symptom: z.string(),
+  status: attemptStatusSchema,
+  score: z.number(),
+  maxScore: z.number(),
+  startedAt: timestampSchema,
+  finishedAt: timestampSchema.nullable(),
+});
+export type AttemptSummary = z.infer<typeof attemptSummarySchema>;
 
-export interface WeakSpot {
-  title: string;
-  wrong: number;
-  asked: number;
-}
+export const weakSpotSchema = z.object({
+  title: z.string(),
+  wrong: z.number().int(),
+  asked: z.number().int(),
+});
+export type WeakSpot = z.infer<typeof weakSpotSchema>;
 
-export interface CourseProgress {
-  id: string;
-  title: string;
-  completedCases: number;
-  totalCases: number;
-  signOff: { signedAt: string; signedBy: PersonRef; note: string | null } | null;
-}
+export const courseProgressSchema = z.object({
+  id: z.uuid(),
+  title: z.string(),
+  completedCases: z.number().int(),
+  totalCases: z.number().int(),
+  signOff: signOffResponseSchema.nullable(),
+});
+export type CourseProgress = z.infer<typeof courseProgressSchema>;
 
-/** GET /api/training/progress (lead), GET /api/training/me/progress (the apprentice's own). */
-export interface ApprenticeProgress {
-  apprentice: PersonRef;
-  casesReviewed: number;
-  attempts: number;
+/** One apprentice's progress, as GET /api/training/progress lists it. */
+export const apprenticeProgressSchema = z.object({
+  apprentice: personRefSchema,
+  casesReviewed: z.number().int(),
+  attempts: z.number().int(),
   /** Mean over reviewed cases of the best finished attempt, in per cent. */
-  averageScorePercent: number | null;
-  weakSpots: WeakSpot[];
-  courses: CourseProgress[];
-}
+  averageScorePercent: z.number().nullable(),
+  weakSpots: z.array(weakSpotSchema),
+  courses: z.array(courseProgressSchema),
+});
+export type ApprenticeProgress = z.infer<typeof apprenticeProgressSchema>;
 
-export interface ApprenticeProgressDetail extends ApprenticeProgress {
-  history: AttemptSummary[];
-}
+/** GET /api/training/progress (lead) */
+export const progressListResponseSchema = z.object({
+  apprentices: z.array(apprenticeProgressSchema),
+});
+export type ProgressListResponse = z.infer<typeof progressListResponseSchema>;
+
+/** GET /api/training/progress/:apprenticeId (lead), GET /api/training/me/progress (the apprentice's own). */
+export const apprenticeProgressDetailSchema = apprenticeProgressSchema.extend({
+  history: z.array(attemptSummarySchema),
+});
+export type ApprenticeProgressDetail = z.infer<typeof apprenticeProgressDetailSchema>;
 
 // ---- For the lead ---------------------------------------------------------------------------
 
-/** GET /api/training/candidates — finished cases not yet marked, with what could be hidden. */
-export interface TrainingCandidate {
-  caseId: string;
-  reference: string;
-  symptom: string;
-  treeTitle: string;
-  complaint: string;
-  vehicle: string;
-  outcomeTitle: string;
-  diagnosedAt: string | null;
-  notes: { id: string; text: string }[];
-  photos: { id: string; name: string; thumbnailUrl: string | null }[];
-}
+/** A finished case not yet marked, with what could be hidden. */
+export const trainingCandidateSchema = z.object({
+  caseId: z.uuid(),
+  reference: z.string(),
+  symptom: z.string(),
+  treeTitle: z.string(),
+  complaint: z.string(),
+  vehicle: z.string(),
+  outcomeTitle: z.string(),
+  diagnosedAt: timestampSchema.nullable(),
+  notes: z.array(z.object({ id: z.uuid(), text: z.string() })),
+  photos: z.array(
+    z.object({ id: z.uuid(), name: z.string(), thumbnailUrl: z.string().nullable() }),
+  ),
+});
+export type TrainingCandidate = z.infer<typeof trainingCandidateSchema>;
+
+/** GET /api/training/candidates */
+export const candidatesResponseSchema = z.object({ cases: z.array(trainingCandidateSchema) });
+export type CandidatesResponse = z.infer<typeof candidatesResponseSchema>;
+
+/** A marked training case; POST and PATCH /api/training/cases answer with one. */
+export const trainingCaseSummarySchema = z.object({
+  id: z.uuid(),
+  caseId: z.uuid(),
+  caseReference: z.string(),
+  symptom: z.string(),
+  treeTitle: z.string(),
+  outcomeTitle: z.string(),
+  difficulty: z.enum(trainingDifficulties),
+  teachingNote: z.string(),
+  hideNotes: z.boolean(),
+  hiddenAttachmentIds: z.array(z.uuid()),
+  withdrawn: z.boolean(),
+  markedBy: personRefSchema,
+  createdAt: timestampSchema,
+  attempts: z.number().int(),
+});
+export type TrainingCaseSummary = z.infer<typeof trainingCaseSummarySchema>;
 
 /** GET /api/training/cases (lead) */
-export interface TrainingCaseSummary {
-  id: string;
-  caseId: string;
-  caseReference: string;
-  symptom: string;
-  treeTitle: string;
-  outcomeTitle: string;
-  difficulty: TrainingDifficulty;
-  teachingNote: string;
-  hideNotes: boolean;
-  hiddenAttachmentIds: string[];
-  withdrawn: boolean;
-  markedBy: PersonRef;
-  createdAt: string;
-  attempts: number;
-}
+export const trainingCasesResponseSchema = z.object({
+  trainingCases: z.array(trainingCaseSummarySchema),
+});
+export type TrainingCasesResponse = z.infer<typeof trainingCasesResponseSchema>;
 
-export interface TrainingCourse {
-  id: string;
-  title: string;
-  description: string | null;
-  apprentice: PersonRef | null;
-  items: { trainingCaseId: string; symptom: string; difficulty: TrainingDifficulty }[];
-  createdAt: string;
-  updatedAt: string;
-}
+/** A course; POST and PUT /api/training/courses answer with one. */
+export const trainingCourseSchema = z.object({
+  id: z.uuid(),
+  title: z.string(),
+  description: z.string().nullable(),
+  apprentice: personRefSchema.nullable(),
+  items: z.array(
+    z.object({
+      trainingCaseId: z.uuid(),
+      symptom: z.string(),
+      difficulty: z.enum(trainingDifficulties),
+    }),
+  ),
+  createdAt: timestampSchema,
+  updatedAt: timestampSchema,
+});
+export type TrainingCourse = z.infer<typeof trainingCourseSchema>;
+
+/** GET /api/training/courses */
+export const trainingCoursesResponseSchema = z.object({ courses: z.array(trainingCourseSchema) });
+export type TrainingCoursesResponse = z.infer<typeof trainingCoursesResponseSchema>;

@@ -9,6 +9,7 @@ import {
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
 import { meQueryKey } from '../../../lib/auth';
+import { accountLinkKeys } from '../../../lib/query-keys';
 
 export function checkAccountLink(token: string, signal?: AbortSignal) {
   return apiRequest('/api/auth/set-password/check', accountTokenInfoSchema, {
@@ -20,7 +21,7 @@ export function checkAccountLink(token: string, signal?: AbortSignal) {
 
 export function accountLinkQueryOptions(token: string) {
   return queryOptions({
-    queryKey: ['account-link', token] as const,
+    queryKey: accountLinkKeys.token(token),
     queryFn: ({ signal }) => checkAccountLink(token, signal),
     staleTime: Infinity,
     retry: false,

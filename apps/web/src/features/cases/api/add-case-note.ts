@@ -1,10 +1,9 @@
 // POST /api/cases/:caseId/notes: a free note on the case or one of its steps. Like answers, a
 // note carries an idempotency key made once and reused on retry.
-import type { AddNoteRequest } from '@heatpath/contracts';
+import { caseNoteSchema, type AddNoteRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { casesKeys } from './get-cases';
-import { caseNoteSchema } from './response-schemas';
+import { casesKeys } from '../../../lib/query-keys';
 
 export interface AddCaseNoteInput {
   caseId: string;

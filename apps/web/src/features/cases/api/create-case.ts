@@ -1,10 +1,9 @@
 // POST /api/cases: opens a case on the latest published version of the chosen tree.
-import type { CreateCaseRequest } from '@heatpath/contracts';
+import { caseDetailSchema, type CreateCaseRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { casesKeys } from './get-cases';
-import { customersKeys } from './find-customers';
-import { caseDetailSchema } from './response-schemas';
+import { casesKeys } from '../../../lib/query-keys';
+import { customersKeys } from '../../../lib/query-keys';
 
 export function createCase(body: CreateCaseRequest) {
   return apiRequest('/api/cases', caseDetailSchema, { method: 'POST', body });

@@ -2,7 +2,7 @@
 import { vehicleSchema, type VehicleInput } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { vehiclesKeys } from './find-vehicles';
+import { vehiclesKeys } from '../../../lib/query-keys';
 
 export function createVehicle(body: VehicleInput) {
   return apiRequest('/api/vehicles', vehicleSchema, { method: 'POST', body });

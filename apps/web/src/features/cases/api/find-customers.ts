@@ -2,11 +2,9 @@
 import { customerListSchema } from '@heatpath/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { customersKeys } from '../../../lib/query-keys';
 
-export const customersKeys = {
-  all: ['customers'] as const,
-  search: (q: string) => [...customersKeys.all, 'search', q] as const,
-};
+export { customersKeys };
 
 export const minCustomerQuery = 2;
 

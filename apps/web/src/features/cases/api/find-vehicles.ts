@@ -3,11 +3,9 @@
 import { vehicleListSchema } from '@heatpath/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { vehiclesKeys } from '../../../lib/query-keys';
 
-export const vehiclesKeys = {
-  all: ['vehicles'] as const,
-  search: (q: string) => [...vehiclesKeys.all, 'search', q] as const,
-};
+export { vehiclesKeys };
 
 /** The API needs two characters before it searches. */
 export const minVehicleQuery = 2;

@@ -1,15 +1,15 @@
-// GET /api/trees: the symptoms a new case can start from, each with its latest published version.
+// GET /api/trees/available: the symptoms a new case can start from, each with its latest published
+// version (the lead also sees trees never published). Keyed under the trees' root, so publishing,
+// retiring or deleting a tree refreshes it.
 import { availableTreeListSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { treesKeys } from '../../../lib/query-keys';
 
-export const treesKeys = {
-  all: ['trees'] as const,
-  available: () => [...treesKeys.all, 'available'] as const,
-};
+export { treesKeys };
 
 export function getAvailableTrees(signal?: AbortSignal) {
-  return apiRequest('/api/trees', availableTreeListSchema, { signal });
+  return apiRequest('/api/trees/available', availableTreeListSchema, { signal });
 }
 
 export function availableTreesQueryOptions() {

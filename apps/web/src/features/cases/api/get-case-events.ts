@@ -1,14 +1,14 @@
 // GET /api/cases/:caseId/events: the case's audit trail (who did what, when). Keyed under the
 // case, so every change to the case refreshes it too; fetched only while it is shown.
+import { caseEventsResponseSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { casesKeys } from './get-cases';
-import { caseEventsSchema } from './response-schemas';
+import { casesKeys } from '../../../lib/query-keys';
 
-export const caseEventsKey = (caseId: string) => [...casesKeys.detail(caseId), 'events'] as const;
+export const caseEventsKey = casesKeys.events;
 
 export function getCaseEvents(caseId: string, signal?: AbortSignal) {
-  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/events`, caseEventsSchema, {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/events`, caseEventsResponseSchema, {
     signal,
   });
 }

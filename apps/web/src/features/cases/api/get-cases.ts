@@ -1,23 +1,13 @@
 // GET /api/cases: the workshop's cases, newest first, one keyset page at a time. Its key is the
 // root every case mutation invalidates, so lists and case pages refresh together.
-import { caseListSchema, type CaseStatus } from '@heatpath/contracts';
+import { caseListSchema, type CaseListFilters } from '@heatpath/contracts';
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { casesKeys } from '../../../lib/query-keys';
 
-export interface CaseListFilters {
-  scope: 'mine' | 'workshop';
-  status?: CaseStatus | undefined;
-  technicianId?: string | undefined;
-  q?: string | undefined;
-}
-
-export const casesKeys = {
-  all: ['cases'] as const,
-  lists: () => [...casesKeys.all, 'list'] as const,
-  list: (filters: CaseListFilters) => [...casesKeys.lists(), filters] as const,
-  details: () => [...casesKeys.all, 'detail'] as const,
-  detail: (caseId: string) => [...casesKeys.details(), caseId] as const,
-};
+// The keys live with every other feature's; re-exported for the screens that import them here.
+export { casesKeys };
+export type { CaseListFilters };
 
 const pageSize = 20;
 

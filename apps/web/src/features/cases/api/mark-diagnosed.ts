@@ -1,8 +1,8 @@
 // POST /api/cases/:caseId/diagnosed: the technician declares the finding; the case leaves the walk.
+import { caseDetailSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { casesKeys } from './get-cases';
-import { caseDetailSchema } from './response-schemas';
+import { casesKeys } from '../../../lib/query-keys';
 
 export function markDiagnosed(caseId: string) {
   return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/diagnosed`, caseDetailSchema, {

@@ -1,10 +1,9 @@
 // PUT /api/cases/:caseId/findings: saves the edited findings. The request names the revision it
 // edited; 409 means someone saved after it was opened.
-import type { UpdateFindingsRequest } from '@heatpath/contracts';
+import { caseDetailSchema, type UpdateFindingsRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { casesKeys } from './get-cases';
-import { caseDetailSchema } from './response-schemas';
+import { casesKeys } from '../../../lib/query-keys';
 
 export interface SaveFindingsInput {
   caseId: string;

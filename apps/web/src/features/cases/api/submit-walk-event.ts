@@ -1,9 +1,9 @@
 // POST /api/cases/:caseId/walk: one answer or step back. The idempotency key is made once per
 // answer and sent again on every retry, so an answer whose reply was lost is stored only once.
+import { walkEventResponseSchema } from '@heatpath/contracts';
 import type { WalkEvent } from '@heatpath/fault-tree';
 import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { walkEventResponseSchema } from './response-schemas';
 
 export interface SubmitWalkEventInput {
   caseId: string;

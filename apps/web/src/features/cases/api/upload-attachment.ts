@@ -1,9 +1,9 @@
 // POST /api/cases/:caseId/attachments: one photo or file, sent as multipart form data. The browser
 // sets the multipart boundary itself, so no Content-Type is given here; the client header still is.
+import { caseAttachmentSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequestForm } from '../../../lib/api-client';
-import { casesKeys } from './get-cases';
-import { caseAttachmentSchema } from './response-schemas';
+import { casesKeys } from '../../../lib/query-keys';
 
 export interface UploadAttachmentInput {
   caseId: string;

@@ -319,9 +319,17 @@ describe('the case page', { timeout: 15_000 }, () => {
         return json(
           {
             id: '00000000-0000-4000-8000-0000000000b7',
+            nodeId: 'block-test-result',
+            kind: 'photo',
+            name: 'fluid.jpg',
+            mediaType: 'image/jpeg',
+            byteSize: 3,
+            width: 10,
+            height: 10,
             url: '/api/cases/x/attachments/y/file',
             thumbnailUrl: '/api/cases/x/attachments/y/thumbnail',
-            name: 'fluid.jpg',
+            uploadedBy: { id: technician.id, name: technician.name },
+            createdAt: '2025-03-01T09:00:00.000Z',
           },
           201,
         );

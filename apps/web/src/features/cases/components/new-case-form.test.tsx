@@ -39,7 +39,7 @@ function vehicle(overrides: Partial<Vehicle> = {}): Vehicle {
 function intakeApi(extra: Parameters<typeof mockApi>[0] = {}) {
   return mockApi({
     'GET /api/me': () => json(makeMe({ role: 'technician' })),
-    'GET /api/trees': () =>
+    'GET /api/trees/available': () =>
       json({
         trees: [
           {

@@ -3,11 +3,9 @@
 import { outboxListSchema } from '@heatpath/contracts';
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { outboxKeys } from '../../../lib/query-keys';
 
-export const outboxKeys = {
-  all: ['outbox'] as const,
-  list: () => [...outboxKeys.all, 'list'] as const,
-};
+export { outboxKeys };
 
 export function getOutbox(cursor: string | null, signal?: AbortSignal) {
   const params = new URLSearchParams({ limit: '20' });

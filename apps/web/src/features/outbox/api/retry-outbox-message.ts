@@ -2,7 +2,7 @@
 import { outboxMessageSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { outboxKeys } from './get-outbox';
+import { outboxKeys } from '../../../lib/query-keys';
 
 export function retryOutboxMessage(messageId: string) {
   return apiRequest(`/api/outbox/${encodeURIComponent(messageId)}/retry`, outboxMessageSchema, {

@@ -3,7 +3,7 @@
 import { repairOrderReviewSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { casesRootKey, repairOrderKeys } from './get-repair-order';
+import { casesKeys, repairOrderKeys } from '../../../lib/query-keys';
 
 export function approveFindings({ caseId, revision }: { caseId: string; revision: number }) {
   return apiRequest(
@@ -20,7 +20,7 @@ export function useApproveFindings() {
     mutationFn: approveFindings,
     onSuccess: (review) => {
       queryClient.setQueryData(repairOrderKeys.detail(review.caseId), review);
-      void queryClient.invalidateQueries({ queryKey: casesRootKey });
+      void queryClient.invalidateQueries({ queryKey: casesKeys.all });
     },
   });
 }

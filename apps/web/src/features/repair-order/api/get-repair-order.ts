@@ -4,14 +4,9 @@
 import { repairOrderReviewSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { repairOrderKeys } from '../../../lib/query-keys';
 
-export const repairOrderKeys = {
-  all: ['repair-order'] as const,
-  detail: (caseId: string) => [...repairOrderKeys.all, caseId] as const,
-};
-
-/** The cases feature's root key: a save here also changes the case page and the lists. */
-export const casesRootKey = ['cases'] as const;
+export { repairOrderKeys };
 
 export function getRepairOrder(caseId: string, signal?: AbortSignal) {
   return apiRequest(

@@ -1,22 +1,19 @@
 // PUT /api/cases/:caseId/findings: saves the reviewed findings as a new revision (and the photos
 // chosen for the repair order). The request names the revision it edited; 409 means someone
 // saved after it was opened.
-import type { UpdateFindingsRequest } from '@heatpath/contracts';
+import { caseDetailSchema, type UpdateFindingsRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
 import { apiRequest } from '../../../lib/api-client';
-import { casesRootKey, repairOrderKeys } from './get-repair-order';
-
-// The answer is the whole case page; this screen reloads its own review instead.
-const savedSchema = z.object({ id: z.string() });
+import { casesKeys, repairOrderKeys } from '../../../lib/query-keys';
 
 export interface SaveFindingsRevisionInput {
   caseId: string;
   findings: UpdateFindingsRequest;
 }
 
+/** The answer is the whole case page; this screen reloads its own review instead. */
 export function saveFindingsRevision({ caseId, findings }: SaveFindingsRevisionInput) {
-  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/findings`, savedSchema, {
+  return apiRequest(`/api/cases/${encodeURIComponent(caseId)}/findings`, caseDetailSchema, {
     method: 'PUT',
     body: findings,
   });
@@ -30,7 +27,7 @@ export function useSaveFindingsRevision() {
     onSuccess: (_saved, { caseId }) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: repairOrderKeys.detail(caseId) }),
-        queryClient.invalidateQueries({ queryKey: casesRootKey }),
+        queryClient.invalidateQueries({ queryKey: casesKeys.all }),
       ]),
   });
 }

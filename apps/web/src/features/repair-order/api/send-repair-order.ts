@@ -3,7 +3,7 @@
 import { repairOrderSendSchema, type SendRepairOrderRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { repairOrderKeys } from './get-repair-order';
+import { repairOrderKeys } from '../../../lib/query-keys';
 
 export function sendRepairOrder({ caseId, ...body }: SendRepairOrderRequest & { caseId: string }) {
   return apiRequest(

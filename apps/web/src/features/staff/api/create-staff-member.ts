@@ -2,7 +2,7 @@
 import { staffMemberSchema, type CreateStaffRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { staffKeys } from './get-staff';
+import { staffKeys } from '../../../lib/query-keys';
 
 export function createStaffMember(body: CreateStaffRequest) {
   return apiRequest('/api/staff', staffMemberSchema, { method: 'POST', body });

@@ -3,11 +3,9 @@
 import { staffListSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
+import { staffKeys } from '../../../lib/query-keys';
 
-export const staffKeys = {
-  all: ['staff'] as const,
-  list: () => [...staffKeys.all, 'list'] as const,
-};
+export { staffKeys };
 
 export function getStaff(signal?: AbortSignal) {
   return apiRequest('/api/staff', staffListSchema, { signal });

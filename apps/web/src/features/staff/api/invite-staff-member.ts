@@ -3,7 +3,7 @@
 import { staffMemberSchema, type InviteStaffRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { staffKeys } from './get-staff';
+import { staffKeys } from '../../../lib/query-keys';
 
 export function inviteStaffMember(body: InviteStaffRequest) {
   return apiRequest('/api/staff/invitations', staffMemberSchema, { method: 'POST', body });

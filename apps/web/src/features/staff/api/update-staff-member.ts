@@ -2,7 +2,7 @@
 import { staffMemberSchema, type UpdateStaffRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { staffKeys } from './get-staff';
+import { staffKeys } from '../../../lib/query-keys';
 
 export interface UpdateStaffMemberInput {
   userId: string;

@@ -1,10 +1,10 @@
 // GET /api/cases/:caseId/logs/:logId: one log with its analysis, candidate readings and the chart's
 // readings (at most 2,000, thinned keeping each stretch's extremes). A new threshold or zoom
 // window is a new query; the previous answer stays on screen until it arrives.
+import { temperatureLogDetailSchema } from '@heatpath/contracts';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { temperatureLogsKeys, type LogView } from './get-case-logs';
-import { logDetailSchema } from './response-schemas';
+import { temperatureLogsKeys, type LogView } from '../../../lib/query-keys';
 
 export function getCaseLog(caseId: string, logId: string, view: LogView, signal?: AbortSignal) {
   const params = new URLSearchParams();
@@ -14,7 +14,7 @@ export function getCaseLog(caseId: string, logId: string, view: LogView, signal?
   const query = params.size > 0 ? `?${params.toString()}` : '';
   return apiRequest(
     `/api/cases/${encodeURIComponent(caseId)}/logs/${encodeURIComponent(logId)}${query}`,
-    logDetailSchema,
+    temperatureLogDetailSchema,
     { signal },
   );
 }

@@ -1,11 +1,15 @@
 // POST /api/cases/:caseId/logs/:pendingUploadId/mapping finishes an upload whose columns were
 // ambiguous (the file is kept on the server, so nothing is uploaded again), and
 // PUT /api/cases/:caseId/logs/:logId/mapping reads a stored log again with other columns.
-import type { LogMappingRequest, LogUploadResult } from '@heatpath/contracts';
+import {
+  temperatureLogDetailSchema,
+  logUploadResultSchema,
+  type LogMappingRequest,
+  type LogUploadResult,
+} from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { temperatureLogsKeys } from './get-case-logs';
-import { logDetailSchema, logUploadResultSchema } from './response-schemas';
+import { temperatureLogsKeys } from '../../../lib/query-keys';
 import { rememberStoredLog } from './upload-case-log';
 
 export interface MapPendingUploadInput {
@@ -45,7 +49,7 @@ export interface ChangeLogMappingInput {
 export function changeLogMapping({ caseId, logId, mapping }: ChangeLogMappingInput) {
   return apiRequest(
     `/api/cases/${encodeURIComponent(caseId)}/logs/${encodeURIComponent(logId)}/mapping`,
-    logDetailSchema,
+    temperatureLogDetailSchema,
     { method: 'PUT', body: { mapping } },
   );
 }

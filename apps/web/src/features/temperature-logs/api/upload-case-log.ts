@@ -1,10 +1,9 @@
 // POST /api/cases/:caseId/logs: one log file as multipart form data, optionally for a step. The
 // answer is the stored log, or the columns to map when the file does not say which is which.
-import type { LogUploadResult } from '@heatpath/contracts';
+import { logUploadResultSchema, type LogUploadResult } from '@heatpath/contracts';
 import { useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { apiRequestForm } from '../../../lib/api-client';
-import { temperatureLogsKeys } from './get-case-logs';
-import { logUploadResultSchema } from './response-schemas';
+import { temperatureLogsKeys } from '../../../lib/query-keys';
 
 export interface UploadCaseLogInput {
   caseId: string;

@@ -1,11 +1,11 @@
 // GET /api/training/courses: the workshop's courses, each an ordered list of training cases.
+import { trainingCoursesResponseSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { trainingCoursesSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export function getCourses(signal?: AbortSignal) {
-  return apiRequest('/api/training/courses', trainingCoursesSchema, { signal });
+  return apiRequest('/api/training/courses', trainingCoursesResponseSchema, { signal });
 }
 
 export function coursesQueryOptions() {

@@ -1,11 +1,11 @@
 // GET /api/training/me/progress: the apprentice's own scores, never anyone else's.
+import { apprenticeProgressDetailSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { progressDetailSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export function getMyProgress(signal?: AbortSignal) {
-  return apiRequest('/api/training/me/progress', progressDetailSchema, { signal });
+  return apiRequest('/api/training/me/progress', apprenticeProgressDetailSchema, { signal });
 }
 
 export function myProgressQueryOptions() {

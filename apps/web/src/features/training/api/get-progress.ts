@@ -1,12 +1,12 @@
 // GET /api/training/progress (every apprentice, for the lead) and
 // GET /api/training/progress/:apprenticeId (one apprentice with every attempt).
+import { apprenticeProgressDetailSchema, progressListResponseSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { progressDetailSchema, progressListSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export function getProgress(signal?: AbortSignal) {
-  return apiRequest('/api/training/progress', progressListSchema, { signal });
+  return apiRequest('/api/training/progress', progressListResponseSchema, { signal });
 }
 
 export function progressQueryOptions() {
@@ -23,7 +23,7 @@ export function useProgress() {
 export function getApprenticeProgress(apprenticeId: string, signal?: AbortSignal) {
   return apiRequest(
     `/api/training/progress/${encodeURIComponent(apprenticeId)}`,
-    progressDetailSchema,
+    apprenticeProgressDetailSchema,
     { signal },
   );
 }

@@ -1,14 +1,14 @@
 // GET /api/training/cases/:trainingCaseId/replay: the case as it happened, every step revealed,
 // to the outcome and the findings.
+import { trainingReplaySchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { replaySchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export function getReplay(trainingCaseId: string, signal?: AbortSignal) {
   return apiRequest(
     `/api/training/cases/${encodeURIComponent(trainingCaseId)}/replay`,
-    replaySchema,
+    trainingReplaySchema,
     { signal },
   );
 }

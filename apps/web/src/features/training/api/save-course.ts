@@ -1,10 +1,9 @@
 // POST /api/training/courses (a new course) and PUT /api/training/courses/:courseId (the whole
 // course again, with its cases in their new order).
-import type { CourseRequest } from '@heatpath/contracts';
+import { trainingCourseSchema, type CourseRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { trainingCourseSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export interface SaveCourseInput {
   /** Absent for a new course. */

@@ -1,10 +1,9 @@
 // POST /api/training/courses/:courseId/sign-offs: the lead signs an apprentice's course off as
 // complete. Stored with the date and who signed; a 409 means it is signed off already.
-import type { SignOffRequest } from '@heatpath/contracts';
+import { signOffResponseSchema, type SignOffRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { signOffSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export interface SignOffInput {
   courseId: string;
@@ -14,7 +13,7 @@ export interface SignOffInput {
 export function signOffCourse({ courseId, signOff }: SignOffInput) {
   return apiRequest(
     `/api/training/courses/${encodeURIComponent(courseId)}/sign-offs`,
-    signOffSchema,
+    signOffResponseSchema,
     { method: 'POST', body: signOff },
   );
 }

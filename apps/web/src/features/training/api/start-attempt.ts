@@ -1,14 +1,14 @@
 // POST /api/training/cases/:trainingCaseId/attempts: a new scored attempt at a training case
 // ("Predict, then see", and "Try again" after one is finished).
+import { trainingAttemptSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { attemptSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export function startAttempt(trainingCaseId: string) {
   return apiRequest(
     `/api/training/cases/${encodeURIComponent(trainingCaseId)}/attempts`,
-    attemptSchema,
+    trainingAttemptSchema,
     { method: 'POST' },
   );
 }

@@ -1,11 +1,10 @@
 // POST /api/training/attempts/:attemptId/predictions: the learner's prediction for the current
 // step. The answer is the attempt with that step revealed and scored; a 409 means the step was
 // already predicted (another tab), so the attempt is fetched again.
-import type { PredictionRequest } from '@heatpath/contracts';
+import { trainingAttemptSchema, type PredictionRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest, isApiError } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { attemptSchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export interface SubmitPredictionInput {
   attemptId: string;
@@ -15,7 +14,7 @@ export interface SubmitPredictionInput {
 export function submitPrediction({ attemptId, prediction }: SubmitPredictionInput) {
   return apiRequest(
     `/api/training/attempts/${encodeURIComponent(attemptId)}/predictions`,
-    attemptSchema,
+    trainingAttemptSchema,
     { method: 'POST', body: prediction },
   );
 }

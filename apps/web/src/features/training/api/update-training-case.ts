@@ -1,10 +1,9 @@
 // PATCH /api/training/cases/:trainingCaseId: a new note, difficulty or hiding, or withdraw it
 // from the casebook (and put it back).
-import type { UpdateTrainingCaseRequest } from '@heatpath/contracts';
+import { trainingCaseSummarySchema, type UpdateTrainingCaseRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { trainingKeys } from './keys';
-import { trainingCaseSummarySchema } from './response-schemas';
+import { trainingKeys } from '../../../lib/query-keys';
 
 export interface UpdateTrainingCaseInput {
   trainingCaseId: string;

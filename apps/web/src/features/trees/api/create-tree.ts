@@ -1,14 +1,13 @@
 // POST /api/trees: a new tree from scratch, as a copy of another, or from an imported definition
 // file. Every way starts the tree as draft version 1; an imported file with problems is kept and
 // its problems come back with the draft.
-import type { CreateTreeRequest } from '@heatpath/contracts';
+import { createTreeResponseSchema, type CreateTreeRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { createdTreeSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export function createTree(request: CreateTreeRequest) {
-  return apiRequest('/api/trees', createdTreeSchema, { method: 'POST', body: request });
+  return apiRequest('/api/trees', createTreeResponseSchema, { method: 'POST', body: request });
 }
 
 export function useCreateTree() {

@@ -2,7 +2,7 @@
 // refuses a tree with a published or retired version with 409).
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequestNoContent } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
+import { treesKeys } from '../../../lib/query-keys';
 
 export function deleteTree(treeId: string) {
   return apiRequestNoContent(`/api/trees/${encodeURIComponent(treeId)}`, { method: 'DELETE' });

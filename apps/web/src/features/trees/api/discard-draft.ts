@@ -1,7 +1,7 @@
 // DELETE /api/trees/:treeId/draft: throws the open draft away (not the tree's only version).
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequestNoContent } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
+import { treesKeys } from '../../../lib/query-keys';
 
 export function discardDraft(treeId: string) {
   return apiRequestNoContent(`/api/trees/${encodeURIComponent(treeId)}/draft`, {

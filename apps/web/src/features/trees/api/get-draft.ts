@@ -1,9 +1,9 @@
 // GET /api/trees/:treeId/draft: the open draft with its revision (for optimistic saves) and the
 // problems the server found in it.
+import { treeVersionDetailSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeVersionDetailSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export function getDraft(treeId: string, signal?: AbortSignal) {
   return apiRequest(`/api/trees/${encodeURIComponent(treeId)}/draft`, treeVersionDetailSchema, {

@@ -1,15 +1,19 @@
 // GET /api/trees/:treeId/diff?from=&to=: nodes added, removed and changed between two versions,
 // with the changed fields before and after in words.
+import { treeDiffResponseSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeDiffSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export function getTreeDiff(treeId: string, from: string, to: string, signal?: AbortSignal) {
   const query = new URLSearchParams({ from, to });
-  return apiRequest(`/api/trees/${encodeURIComponent(treeId)}/diff?${query}`, treeDiffSchema, {
-    signal,
-  });
+  return apiRequest(
+    `/api/trees/${encodeURIComponent(treeId)}/diff?${query}`,
+    treeDiffResponseSchema,
+    {
+      signal,
+    },
+  );
 }
 
 export function treeDiffQueryOptions(treeId: string, from: string, to: string) {

@@ -1,9 +1,9 @@
 // GET /api/trees/:treeId/versions/:versionId: one version with its definition, and the address
 // of its export download. Published versions never change, so the answer is kept.
+import { treeVersionDetailSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeVersionDetailSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 function versionPath(treeId: string, versionId: string): string {
   return `/api/trees/${encodeURIComponent(treeId)}/versions/${encodeURIComponent(versionId)}`;

@@ -1,11 +1,13 @@
 // GET /api/trees/:treeId: one tree's library entry with its versions and its regression set.
+import { treeEntryResponseSchema } from '@heatpath/contracts';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeEntrySchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export function getTree(treeId: string, signal?: AbortSignal) {
-  return apiRequest(`/api/trees/${encodeURIComponent(treeId)}`, treeEntrySchema, { signal });
+  return apiRequest(`/api/trees/${encodeURIComponent(treeId)}`, treeEntryResponseSchema, {
+    signal,
+  });
 }
 
 export function treeQueryOptions(treeId: string) {

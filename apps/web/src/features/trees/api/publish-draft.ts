@@ -1,11 +1,10 @@
 // POST /api/trees/:treeId/draft/publish: publishes a clean draft with a change note. The API
 // answers 409 for a stale revision, for problems, and for regression-set cases whose outcome
 // would change; the last is published only when the lead confirms.
-import type { PublishDraftRequest } from '@heatpath/contracts';
+import { treeVersionDetailSchema, type PublishDraftRequest } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeVersionDetailSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export interface PublishDraftInput {
   treeId: string;

@@ -1,9 +1,9 @@
 // POST /api/trees/:treeId/versions/:versionId/retire: a published version takes no new cases;
 // cases already pinned to it keep it.
+import { treeVersionDetailSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeVersionDetailSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export interface RetireVersionInput {
   treeId: string;

@@ -1,9 +1,9 @@
 // PUT /api/trees/:treeId/draft: saves the working copy with the revision it was based on. A draft
 // with problems is saved as it is; a stale revision is refused with 409, never overwritten.
+import { treeVersionDetailSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeVersionDetailSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export interface SaveDraftInput {
   treeId: string;

@@ -1,9 +1,9 @@
 // PUT /api/trees/:treeId/regression-set: the diagnosed or closed cases that guard the tree; each
 // is replayed before every publish.
+import { regressionSetResponseSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { regressionSetSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export interface SetRegressionSetInput {
   treeId: string;
@@ -13,7 +13,7 @@ export interface SetRegressionSetInput {
 export function setRegressionSet({ treeId, caseIds }: SetRegressionSetInput) {
   return apiRequest(
     `/api/trees/${encodeURIComponent(treeId)}/regression-set`,
-    regressionSetSchema,
+    regressionSetResponseSchema,
     { method: 'PUT', body: { caseIds } },
   );
 }

@@ -1,9 +1,9 @@
 // POST /api/trees/:treeId/draft: a new draft (the next version number) copied from the latest
 // version or a chosen one. 409 when a draft is already open.
+import { treeVersionDetailSchema } from '@heatpath/contracts';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api-client';
-import { treesKeys } from './get-tree-library';
-import { treeVersionDetailSchema } from './response-schemas';
+import { treesKeys } from '../../../lib/query-keys';
 
 export interface StartDraftInput {
   treeId: string;
