@@ -1,7 +1,12 @@
 // What a learner sees: the casebook (courses meant for them and every training case, with their
 // own attempts and best score but never the answer) and a case's replay with every step shown.
 import { Op } from 'sequelize';
-import type { Casebook, CasebookEntry, TrainingReplay } from '@heatpath/contracts';
+import type {
+  Casebook,
+  CasebookEntry,
+  TrainingReplay,
+  TrainingScore as Score,
+} from '@heatpath/contracts';
 import {
   TrainingAttempt,
   TrainingCase,
@@ -16,8 +21,6 @@ import { findTrainingCase, trainingCaseIncludes } from './find-training-case';
 import type { LoadedTrainingCase } from './find-training-case';
 import { trainingStoryOf } from './training-story';
 import type { TrainingStory } from './training-story';
-
-type Score = { score: number; maxScore: number };
 
 function better(a: Score | null, b: Score): Score {
   if (a === null) return b;
