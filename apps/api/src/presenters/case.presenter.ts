@@ -8,9 +8,10 @@ import type {
 } from '@heatpath/contracts';
 import type { WalkSummary } from '@heatpath/fault-tree';
 import type { Attachment, CaseEvent, DiagnosticCase, Finding, User } from '../db/models/index';
+import { caseReference } from '../lib/case-reference';
+import { isOpenToFindingsEditing, isOpenToWalking } from '../policies/case-policy';
 import { can } from '../policies/permissions';
 import type { Actor } from '../policies/permissions';
-import { caseReference } from '../services/cases/case-search-text';
 import { presentCustomer, presentVehicle } from './vehicle.presenter';
 
 const person = (user: User | null | undefined) => (user ? { id: user.id, name: user.name } : null);
@@ -94,8 +95,7 @@ export function presentCaseDetail(options: {
   const version = kase.treeVersion;
   if (!kase.vehicle || !version)
     throw new Error('presentCaseDetail needs vehicle and tree version loaded.');
-  const open = kase.status === 'open' || kase.status === 'in_diagnosis';
-  const walkable = can(actor, 'cases.walk') && open;
+  const walkable = can(actor, 'cases.walk') && isOpenToWalking(kase);
   return {
     id: kase.id,
     number: kase.number,
@@ -126,7 +126,7 @@ export function presentCaseDetail(options: {
       : null,
     can: {
       walk: walkable,
-      editFindings: can(actor, 'findings.edit') && open,
+      editFindings: can(actor, 'findings.edit') && isOpenToFindingsEditing(kase),
       markDiagnosed: walkable && walk.status === 'reached-outcome' && options.findings !== null,
     },
   };

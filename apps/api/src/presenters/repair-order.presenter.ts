@@ -6,13 +6,20 @@ import type {
   RepairOrderReview,
   RepairOrderSend,
 } from '@heatpath/contracts';
-import type { Attachment, FindingsRevision, OutboxMessage, User } from '../db/models/index';
+import type {
+  Attachment,
+  DiagnosticCase,
+  FindingsRevision,
+  OutboxMessage,
+  User,
+  Workshop,
+} from '../db/models/index';
+import { caseReference } from '../lib/case-reference';
+import { describeFindingsChanges } from '../lib/describe-findings-changes';
+import { nodeTitle, readingDisplay, treeTitle } from '../lib/tree-text';
+import { isOpenToReview } from '../policies/case-policy';
 import { can } from '../policies/permissions';
 import type { Actor } from '../policies/permissions';
-import { caseReference } from '../services/cases/case-search-text';
-import { describeFindingsChanges } from '../services/repair-orders/describe-findings-changes';
-import { nodeTitle, readingDisplay, treeTitle } from '../services/repair-orders/load-repair-order';
-import type { RepairOrderCase } from '../services/repair-orders/load-repair-order';
 
 const person = (user: User | null | undefined) => (user ? { id: user.id, name: user.name } : null);
 
@@ -67,7 +74,8 @@ export function presentRepairOrderPhoto(a: Attachment, definition: unknown): Rep
 }
 
 export function presentRepairOrderReview(options: {
-  order: RepairOrderCase;
+  /** The case with its details loaded, its workshop and its technician. */
+  order: { kase: DiagnosticCase; workshop: Workshop; technician: User | null };
   /** Oldest first. */
   revisions: FindingsRevision[];
   photos: Attachment[];
@@ -84,7 +92,7 @@ export function presentRepairOrderReview(options: {
   if (!current) throw new Error('A case with findings has at least one revision.');
   const approved = [...shown].reverse().find((r) => r.approvedAt !== null) ?? null;
   const reviewer = can(actor, 'findings.review');
-  const diagnosed = kase.status === 'diagnosed';
+  const reviewable = isOpenToReview(kase);
   return {
     caseId: kase.id,
     reference: caseReference(kase.number),
@@ -111,8 +119,8 @@ export function presentRepairOrderReview(options: {
     photos: options.photos.map((p) => presentRepairOrderPhoto(p, version.definition)),
     sends: options.sends.map(presentRepairOrderSend),
     can: {
-      edit: reviewer && diagnosed,
-      approve: reviewer && diagnosed && current.approvedAt === null,
+      edit: reviewer && reviewable,
+      approve: reviewer && reviewable && current.approvedAt === null,
       send: reviewer && approved !== null,
     },
   };

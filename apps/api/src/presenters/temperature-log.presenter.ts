@@ -9,7 +9,7 @@ import type {
 import { candidateReadings } from '@heatpath/temperature-log';
 import type { NeedsMappingResult, TemperatureLogAnalysis } from '@heatpath/temperature-log';
 import type { Attachment, TemperatureLog, TemperatureLogUpload, User } from '../db/models/index';
-import { channelsOf } from '../services/temperature-logs/series-columns';
+import { channelsOf } from '../lib/log-channels';
 
 const unknownPerson = { id: '00000000-0000-0000-0000-000000000000', name: 'Unknown' };
 

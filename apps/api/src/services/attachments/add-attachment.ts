@@ -4,11 +4,13 @@
 import { randomUUID } from 'node:crypto';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { Attachment, CaseEvent, DiagnosticCase } from '../../db/models/index';
+import { Attachment } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import type { FileStore } from '../../lib/storage/file-store';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { appendCaseEvent } from '../cases/append-case-event';
 import { findCase } from '../cases/find-case';
 
 export const attachmentLimits = {
@@ -137,9 +139,7 @@ export async function addAttachment(options: {
       await store.put(thumbnailKey, thumb, 'image/webp');
       stored.push(thumbnailKey);
     }
-    const sequelize = Attachment.sequelize;
-    if (!sequelize) throw new Error('Models are not initialised.');
-    return await sequelize.transaction(async (transaction) => {
+    return await withTransaction(async (transaction) => {
       const locked = await findCase({ actor, caseId, transaction, lock: true });
       const count = await Attachment.count({ where: { caseId: locked.id }, transaction });
       if (count >= attachmentLimits.maxPerCase) {
@@ -166,23 +166,14 @@ export async function addAttachment(options: {
         },
         { transaction },
       );
-      await CaseEvent.create(
-        {
-          caseId: locked.id,
-          workshopId: actor.workshopId,
-          seq: locked.eventCount + 1,
-          kind: 'attachment',
-          nodeId,
-          payload: { attachmentId: attachment.id, name: attachment.originalName },
-          idempotencyKey: null,
-          actorId: actor.userId,
-        },
-        { transaction },
-      );
-      await DiagnosticCase.update(
-        { eventCount: locked.eventCount + 1 },
-        { where: { id: locked.id }, transaction },
-      );
+      await appendCaseEvent({
+        actor,
+        kase: locked,
+        kind: 'attachment',
+        nodeId,
+        payload: { attachmentId: attachment.id, name: attachment.originalName },
+        transaction,
+      });
       return attachment;
     });
   } catch (error) {

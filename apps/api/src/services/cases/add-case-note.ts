@@ -1,9 +1,11 @@
 // A free note on a case or one of its steps, kept in the case's history with who and when.
 import type { AddNoteRequest } from '@heatpath/contracts';
 import { CaseEvent } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { appendCaseEvent } from './append-case-event';
 import { findCase } from './find-case';
 
 export async function addCaseNote(options: {
@@ -13,9 +15,7 @@ export async function addCaseNote(options: {
 }) {
   const { actor, caseId, input } = options;
   assertCan(actor, 'cases.walk');
-  const sequelize = CaseEvent.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true });
     const earlier = await CaseEvent.findOne({
       where: { caseId: kase.id, idempotencyKey: input.idempotencyKey },
@@ -35,20 +35,14 @@ export async function addCaseNote(options: {
       }
       return earlier;
     }
-    const note = await CaseEvent.create(
-      {
-        caseId: kase.id,
-        workshopId: actor.workshopId,
-        seq: kase.eventCount + 1,
-        kind: 'note',
-        nodeId: input.nodeId ?? null,
-        payload: { text: input.text },
-        idempotencyKey: input.idempotencyKey,
-        actorId: actor.userId,
-      },
-      { transaction },
-    );
-    await kase.update({ eventCount: kase.eventCount + 1 }, { transaction });
-    return note;
+    return appendCaseEvent({
+      actor,
+      kase,
+      kind: 'note',
+      nodeId: input.nodeId ?? null,
+      payload: { text: input.text },
+      idempotencyKey: input.idempotencyKey,
+      transaction,
+    });
   });
 }

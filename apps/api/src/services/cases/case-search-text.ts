@@ -1,7 +1,9 @@
 // The lower-case text a case is found by: its reference, plate, VIN, customer and vehicle.
 import { plateKey } from '@heatpath/contracts';
+import { caseReference } from '../../lib/case-reference';
 
-export const caseReference = (number: number) => `C-${String(number).padStart(5, '0')}`;
+// Still reached here by services outside cases (trees, training) until they import lib directly.
+export { caseReference };
 
 export function caseSearchText(parts: {
   number: number;

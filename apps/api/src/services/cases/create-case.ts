@@ -3,6 +3,7 @@
 import type { CreateCaseRequest } from '@heatpath/contracts';
 import { QueryTypes } from 'sequelize';
 import { DiagnosticCase, User } from '../../db/models/index';
+import { database, withTransaction } from '../../db/with-transaction';
 import { AppError, notFound } from '../../errors';
 import { assertCan, can } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
@@ -16,8 +17,6 @@ import { startNodeOf } from './walk-state';
 export async function createCase(options: { actor: Actor; input: CreateCaseRequest }) {
   const { actor, input } = options;
   assertCan(actor, 'cases.create');
-  const sequelize = DiagnosticCase.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
   const vehicle = await getVehicle({ actor, vehicleId: input.vehicleId });
 
   let assignedTo: string | null = null;
@@ -36,7 +35,7 @@ export async function createCase(options: { actor: Actor; input: CreateCaseReque
     assignedTo = actor.userId;
   }
 
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const version = await latestPublishedVersion({ actor, treeId: input.treeId, transaction });
     let customerId = input.customerId ?? vehicle.customerId ?? null;
     let customerName = vehicle.customer?.name ?? null;
@@ -50,7 +49,7 @@ export async function createCase(options: { actor: Actor; input: CreateCaseReque
       // A car with no owner on file gets the one entered at intake, so it shows next time.
       if (!vehicle.customerId) await vehicle.update({ customerId: customer.id }, { transaction });
     }
-    const [counter] = await sequelize.query<{ case_counter: number }>(
+    const [counter] = await database().query<{ case_counter: number }>(
       'UPDATE workshops SET case_counter = case_counter + 1 WHERE id = $1 RETURNING case_counter',
       { bind: [actor.workshopId], type: QueryTypes.SELECT, transaction },
     );

@@ -5,6 +5,7 @@ import type { WhereOptions } from 'sequelize';
 import type { CaseListQuery } from '@heatpath/contracts';
 import { z } from 'zod';
 import { Customer, DiagnosticCase, User, Vehicle } from '../../db/models/index';
+import { database } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
@@ -28,8 +29,7 @@ function decodeCursor(cursor: string) {
 export async function listCases(options: { actor: Actor; query: CaseListQuery }) {
   const { actor, query } = options;
   assertCan(actor, 'cases.read');
-  const sequelize = DiagnosticCase.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
+  const sequelize = database();
   const conditions: WhereOptions[] = [{ workshopId: actor.workshopId }];
   if (query.scope === 'mine') conditions.push({ assignedTo: actor.userId });
   if (query.technicianId) conditions.push({ assignedTo: query.technicianId });

@@ -4,11 +4,14 @@
 // was not kept. A retry with the same idempotency key gets the stored result, not a second answer.
 import { applyWalkEvent, describeWalk, replayWalk } from '@heatpath/fault-tree';
 import type { CompiledTree, WalkEvent, WalkSummary } from '@heatpath/fault-tree';
-import { CaseEvent, DiagnosticCase, TreeVersion } from '../../db/models/index';
+import { TreeVersion } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import { compiledPublishedTree } from '../../lib/compiled-trees';
+import { isOpenToWalking, statusAfterWalking } from '../../policies/case-policy';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { appendCaseEvent } from './append-case-event';
 import { draftFindings } from './draft-findings';
 import { findCase } from './find-case';
 import { walkEventsAndKey } from './walk-state';
@@ -47,10 +50,8 @@ export async function submitWalkEvent(options: {
 }): Promise<SubmitResult> {
   const { actor, caseId, idempotencyKey } = options;
   assertCan(actor, 'cases.walk');
-  const sequelize = DiagnosticCase.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
 
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true, bare: true });
     const tree = await compiledPublishedTree(kase.treeVersionId, (id) =>
       TreeVersion.findByPk(id, { transaction }),
@@ -74,7 +75,7 @@ export async function submitWalkEvent(options: {
       return { walk: summary(), repeated: true };
     }
 
-    if (kase.status === 'diagnosed' || kase.status === 'closed') {
+    if (!isOpenToWalking(kase)) {
       throw new AppError(
         'conflict',
         `This case is already ${kase.status === 'closed' ? 'closed' : 'diagnosed'}; reopen it before changing the walk.`,
@@ -104,30 +105,22 @@ export async function submitWalkEvent(options: {
       );
     }
     const stored: WalkEvent = result.event;
-    await CaseEvent.create(
-      {
-        caseId: kase.id,
-        workshopId: actor.workshopId,
-        seq: kase.eventCount + 1,
-        kind: stored.type === 'walk.back' ? 'back' : 'answer',
-        nodeId: stored.nodeId,
-        payload: { event: stored },
-        idempotencyKey,
-        actorId: actor.userId,
-      },
-      { transaction },
-    );
     const walk = summary(result.snapshot, replay.applied + 1);
-    await kase.update(
-      {
-        eventCount: kase.eventCount + 1,
+    await appendCaseEvent({
+      actor,
+      kase,
+      kind: stored.type === 'walk.back' ? 'back' : 'answer',
+      nodeId: stored.nodeId,
+      payload: { event: stored },
+      idempotencyKey,
+      caseChanges: {
         currentNodeId: walk.currentNodeId,
         currentStepTitle: walk.currentNode.title.slice(0, 200),
         outcomeNodeId: walk.outcome?.id ?? null,
-        status: kase.status === 'open' ? 'in_diagnosis' : kase.status,
+        status: statusAfterWalking(kase),
       },
-      { transaction },
-    );
+      transaction,
+    });
     await draftFindings({ kase, walk, actorId: actor.userId, transaction });
     return { walk, repeated: false };
   });

@@ -4,10 +4,13 @@
 // a revision, and may choose the case's photos that go into the repair order.
 import type { UpdateFindingsRequest } from '@heatpath/contracts';
 import { Op } from 'sequelize';
-import { Attachment, CaseEvent, Finding } from '../../db/models/index';
+import { Attachment, Finding } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError, conflict } from '../../errors';
+import { findingsSavePermission } from '../../policies/case-policy';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { appendCaseEvent } from './append-case-event';
 import { findCase } from './find-case';
 import { recordFindingsRevision } from './record-findings-revision';
 
@@ -18,14 +21,13 @@ export async function updateFindings(options: {
 }) {
   const { actor, caseId, input } = options;
   assertCan(actor, 'findings.save');
-  const sequelize = Finding.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const kase = await findCase({ actor, caseId, transaction, lock: true });
-    if (kase.status === 'closed')
-      throw new AppError('conflict', 'This case is closed; its findings can no longer change.');
     // Before diagnosis the findings are the technician's; after it, the advisor's to review.
-    assertCan(actor, kase.status === 'diagnosed' ? 'findings.review' : 'findings.edit');
+    const permission = findingsSavePermission(kase);
+    if (!permission)
+      throw new AppError('conflict', 'This case is closed; its findings can no longer change.');
+    assertCan(actor, permission);
     const finding = await Finding.findOne({
       where: { caseId: kase.id },
       transaction,
@@ -63,20 +65,14 @@ export async function updateFindings(options: {
       { transaction },
     );
     await recordFindingsRevision({ finding, savedBy: actor.userId, transaction });
-    await CaseEvent.create(
-      {
-        caseId: kase.id,
-        workshopId: actor.workshopId,
-        seq: kase.eventCount + 1,
-        kind: 'findings',
-        nodeId: finding.outcomeNodeId,
-        payload: { revision: finding.revision },
-        idempotencyKey: null,
-        actorId: actor.userId,
-      },
-      { transaction },
-    );
-    await kase.update({ eventCount: kase.eventCount + 1 }, { transaction });
+    await appendCaseEvent({
+      actor,
+      kase,
+      kind: 'findings',
+      nodeId: finding.outcomeNodeId,
+      payload: { revision: finding.revision },
+      transaction,
+    });
     return finding;
   });
 }

@@ -1,10 +1,13 @@
 // The advisor (or lead) approves the latest revision of a diagnosed case's findings for the
 // repair order. From then on the database refuses any change to it (migration 0004's trigger);
 // later edits become a new revision that needs its own approval.
-import { CaseEvent, FindingsRevision } from '../../db/models/index';
+import { FindingsRevision } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError, conflict } from '../../errors';
+import { isOpenToReview } from '../../policies/case-policy';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { appendCaseEvent } from '../cases/append-case-event';
 import { loadRepairOrderCase } from './load-repair-order';
 
 export async function approveFindingsRevision(options: {
@@ -14,11 +17,9 @@ export async function approveFindingsRevision(options: {
 }): Promise<void> {
   const { actor, revision } = options;
   assertCan(actor, 'findings.review');
-  const sequelize = FindingsRevision.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(async (transaction) => {
     const { kase, finding } = await loadRepairOrderCase({ ...options, transaction, lock: true });
-    if (kase.status !== 'diagnosed')
+    if (!isOpenToReview(kase))
       throw new AppError('conflict', 'This case is closed; its repair order can no longer change.');
     if (finding.revision !== revision)
       throw conflict(
@@ -31,19 +32,13 @@ export async function approveFindingsRevision(options: {
     if (!row) throw new Error(`findings revision ${revision} of case ${kase.id} was never kept`);
     if (row.approvedAt) return;
     await row.update({ approvedAt: new Date(), approvedBy: actor.userId }, { transaction });
-    await CaseEvent.create(
-      {
-        caseId: kase.id,
-        workshopId: actor.workshopId,
-        seq: kase.eventCount + 1,
-        kind: 'approval',
-        nodeId: finding.outcomeNodeId,
-        payload: { revision },
-        idempotencyKey: null,
-        actorId: actor.userId,
-      },
-      { transaction },
-    );
-    await kase.update({ eventCount: kase.eventCount + 1 }, { transaction });
+    await appendCaseEvent({
+      actor,
+      kase,
+      kind: 'approval',
+      nodeId: finding.outcomeNodeId,
+      payload: { revision },
+      transaction,
+    });
   });
 }

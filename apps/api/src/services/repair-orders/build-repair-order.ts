@@ -12,8 +12,9 @@ import { Attachment, FindingsRevision, User } from '../../db/models/index';
 import { AppError } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
-import { caseReference } from '../cases/case-search-text';
-import { loadRepairOrderCase, nodeTitle, readingDisplay, treeTitle } from './load-repair-order';
+import { caseReference } from '../../lib/case-reference';
+import { nodeTitle, readingDisplay, treeTitle } from '../../lib/tree-text';
+import { loadRepairOrderCase } from './load-repair-order';
 
 export interface RepairOrderPhotoRef {
   id: string;

@@ -2,11 +2,13 @@
 // themself or another address. The message and the case's audit entry are written in one
 // transaction; the outbox worker delivers it, retrying while the mail server is away.
 import type { RepairOrderExport, SendRepairOrderRequest } from '@heatpath/contracts';
-import { CaseEvent, OutboxMessage, User } from '../../db/models/index';
+import { OutboxMessage, User } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import type { MailContext } from '../../lib/mail/mail-context';
 import type { FileStore } from '../../lib/storage/file-store';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { appendCaseEvent } from '../cases/append-case-event';
 import { findCase } from '../cases/find-case';
 import { enqueueMail, headerSafe } from '../mail/enqueue-mail';
 import { buildRepairOrder, repairOrderFilename } from './build-repair-order';
@@ -65,9 +67,7 @@ export async function sendRepairOrder(options: {
   // Built and rendered before the transaction: reading photos must not hold the case's lock.
   const { document, photos } = await buildRepairOrder({ ...options, revision: input.revision });
   const pdf = await renderRepairOrderPdf(document, photos, options.store);
-  const sequelize = OutboxMessage.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  const id = await sequelize.transaction(async (transaction) => {
+  const id = await withTransaction(async (transaction) => {
     const kase = await findCase({
       actor,
       caseId: options.caseId,
@@ -96,25 +96,19 @@ export async function sendRepairOrder(options: {
       mail: options.mail,
       transaction,
     });
-    await CaseEvent.create(
-      {
-        caseId: kase.id,
-        workshopId: actor.workshopId,
-        seq: kase.eventCount + 1,
-        kind: 'mail',
-        nodeId: null,
-        payload: {
-          messageId: message.id,
-          revision: document.findings.revision,
-          to: input.to.address,
-          audience: input.audience,
-        },
-        idempotencyKey: null,
-        actorId: actor.userId,
+    await appendCaseEvent({
+      actor,
+      kase,
+      kind: 'mail',
+      nodeId: null,
+      payload: {
+        messageId: message.id,
+        revision: document.findings.revision,
+        to: input.to.address,
+        audience: input.audience,
       },
-      { transaction },
-    );
-    await kase.update({ eventCount: kase.eventCount + 1 }, { transaction });
+      transaction,
+    });
     return message.id;
   });
   const message = await OutboxMessage.findByPk(id, { include: [{ model: User, as: 'creator' }] });

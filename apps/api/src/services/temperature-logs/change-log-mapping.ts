@@ -4,6 +4,7 @@
 import type { TemperatureLogDetail } from '@heatpath/contracts';
 import type { ColumnMapping } from '@heatpath/temperature-log';
 import { TemperatureLog } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import type { FileStore } from '../../lib/storage/file-store';
 import { assertCan } from '../../policies/permissions';
@@ -34,9 +35,7 @@ export async function changeLogMapping(options: {
   }
   const { series } = result;
   const analysis = analyseCaseLog(series, await engineFactsForCase({ actor, caseId }));
-  const sequelize = TemperatureLog.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(async (transaction) => {
     await TemperatureLog.update(
       {
         sourceSignature: series.sourceSignature,

@@ -4,6 +4,7 @@ import { randomUUID } from 'node:crypto';
 import type { ResolvedMapping } from '@heatpath/temperature-log';
 import type { Transaction } from 'sequelize';
 import { TemperatureLogMapping } from '../../db/models/index';
+import { database } from '../../db/with-transaction';
 import type { Actor } from '../../policies/permissions';
 
 export async function findRememberedMapping(options: {
@@ -23,10 +24,8 @@ export async function rememberMapping(options: {
   transaction: Transaction;
 }): Promise<void> {
   const { actor, sourceSignature, mapping, transaction } = options;
-  const sequelize = TemperatureLogMapping.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
   // One row per workshop and source: a later confirmation replaces the earlier one.
-  await sequelize.query(
+  await database().query(
     `INSERT INTO temperature_log_mappings
        (id, workshop_id, source_signature, mapping, confirmed_by, created_at, updated_at)
      VALUES (:id, :workshopId, :sourceSignature, :mapping, :userId, now(), now())

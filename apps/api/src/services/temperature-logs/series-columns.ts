@@ -3,7 +3,7 @@
 // buffer rather than a JSON parse of a multi-megabyte text, so a long log does not stall the
 // event loop when its chart is opened.
 import type { LogChannel } from '@heatpath/contracts';
-import type { ColumnMapping, TemperatureSeries } from '@heatpath/temperature-log';
+import type { TemperatureSeries } from '@heatpath/temperature-log';
 import type { TemperatureLog } from '../../db/models/index';
 
 export const logChannels: readonly LogChannel[] = [
@@ -75,25 +75,4 @@ export function storedSeries(log: SeriesColumns): StoredSeries {
     engineSpeedRpm: optional(log.engineSpeedRpm),
     fanDuty: optional(log.fanDuty),
   };
-}
-
-const channelOfRole = {
-  intakeAir: 'intakeAirC',
-  ambient: 'ambientC',
-  vehicleSpeed: 'vehicleSpeedKph',
-  engineSpeed: 'engineSpeedRpm',
-  fanDuty: 'fanDuty',
-} as const satisfies Record<
-  keyof Omit<
-    ColumnMapping,
-    'time' | 'coolant' | 'temperatureUnit' | 'vehicleSpeedUnit' | 'timeUnit'
-  >,
-  LogChannel
->;
-
-/** The optional channels a log has: those its mapping reads. */
-export function channelsOf(mapping: ColumnMapping): LogChannel[] {
-  return (Object.keys(channelOfRole) as (keyof typeof channelOfRole)[])
-    .filter((role) => mapping[role] !== null && mapping[role] !== undefined)
-    .map((role) => channelOfRole[role]);
 }

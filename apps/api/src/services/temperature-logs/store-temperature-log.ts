@@ -3,16 +3,12 @@
 // confirmed mapping for its source. Either all of it is written or none of it is.
 import type { MappingSource } from '@heatpath/contracts';
 import type { CandidateColumn, TemperatureSeries } from '@heatpath/temperature-log';
-import {
-  Attachment,
-  CaseEvent,
-  DiagnosticCase,
-  TemperatureLog,
-  TemperatureLogUpload,
-} from '../../db/models/index';
+import { Attachment, TemperatureLog, TemperatureLogUpload } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import type { Actor } from '../../policies/permissions';
 import { attachmentLimits } from '../attachments/add-attachment';
+import { appendCaseEvent } from '../cases/append-case-event';
 import { findCase } from '../cases/find-case';
 import { analyseCaseLog, engineFactsForCase } from './log-analysis';
 import { rememberMapping } from './remembered-mappings';
@@ -42,9 +38,7 @@ export async function storeTemperatureLog(options: {
   // Outside the transaction: the analysis is the slow part and needs no lock.
   const analysis = analyseCaseLog(series, await engineFactsForCase({ actor, caseId }));
   const columns = seriesColumns(series);
-  const sequelize = TemperatureLog.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const locked = await findCase({ actor, caseId, transaction, lock: true, bare: true });
     if (options.pendingUploadId) {
       const pending = await TemperatureLogUpload.findOne({
@@ -102,23 +96,14 @@ export async function storeTemperatureLog(options: {
       },
       { transaction },
     );
-    await CaseEvent.create(
-      {
-        caseId: locked.id,
-        workshopId: actor.workshopId,
-        seq: locked.eventCount + 1,
-        kind: 'attachment',
-        nodeId,
-        payload: { attachmentId: attachment.id, name: attachment.originalName, logId: log.id },
-        idempotencyKey: null,
-        actorId: actor.userId,
-      },
-      { transaction },
-    );
-    await DiagnosticCase.update(
-      { eventCount: locked.eventCount + 1 },
-      { where: { id: locked.id }, transaction },
-    );
+    await appendCaseEvent({
+      actor,
+      kase: locked,
+      kind: 'attachment',
+      nodeId,
+      payload: { attachmentId: attachment.id, name: attachment.originalName, logId: log.id },
+      transaction,
+    });
     if (options.remember) {
       await rememberMapping({
         actor,

@@ -20,13 +20,12 @@ import {
 } from '../../db/models/index';
 import { AppError, conflict, notFound } from '../../errors';
 import { compiledTreeOf } from '../../lib/compiled-trees';
+import { finishedCaseStatuses as finishedStatuses } from '../../policies/case-policy';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { caseReference } from '../cases/case-search-text';
 import { trainingCaseIncludes } from './find-training-case';
 import type { LoadedTrainingCase } from './find-training-case';
-
-const finishedStatuses = ['diagnosed', 'closed'] as const;
 
 function outcomeTitle(kase: DiagnosticCase & { treeVersion?: TreeVersion }): string {
   if (!kase.treeVersion || !kase.outcomeNodeId) return 'No outcome';
