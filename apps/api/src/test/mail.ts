@@ -11,8 +11,10 @@ import { testConfig, testSequelize } from './context';
 export const testMailSettings = {
   enabled: true,
   pollMs: 50,
-  retryBaseMs: 40,
-  retryMaxMs: 200,
+  // Retries wait minutes, as in production, so a slow machine never makes one fall due by
+  // itself within a test; tests move the stored times on instead (mail.test.ts).
+  retryBaseMs: 60_000,
+  retryMaxMs: 600_000,
   maxRejections: 3,
 };
 

@@ -5,7 +5,7 @@ import { describe, expect, it, vi } from 'vitest';
 import { OutboxMessage } from '../../db/models/index';
 import { startSmtpFake } from '../../dev/smtp-fake';
 import { testApp, testSequelize } from '../../test/context';
-import { parseMail, testWorker } from '../../test/mail';
+import { parseMail, testMailSettings, testWorker } from '../../test/mail';
 import { approveLatest, diagnosedCase } from '../../test/repair-orders';
 
 const app = testApp();
@@ -41,6 +41,9 @@ async function letTimePassForMailOf(workshopId: string, ms: number): Promise<voi
     { bind: [workshopId, ms] },
   );
 }
+
+/** Longer than any retry waits (testMailSettings.retryMaxMs plus its jitter). */
+const retryWait = 2 * testMailSettings.retryMaxMs;
 
 const customer = { name: 'Morwenna Tregarth', address: 'morwenna.tregarth@example.test' };
 
@@ -125,7 +128,7 @@ describe('sending a repair order by e-mail', () => {
         new Date(waiting.lastAttemptAt).getTime(),
       );
       // Still down at the next try: it waits longer, and nothing is lost.
-      await letTimePassForMailOf(w.workshop.id, 120);
+      await letTimePassForMailOf(w.workshop.id, retryWait);
       await worker.runOnce();
       expect((await lead.get('/api/outbox')).body.messages[0]).toMatchObject({
         status: 'queued',
@@ -133,7 +136,7 @@ describe('sending a repair order by e-mail', () => {
       });
 
       fake = await startSmtpFake({ port });
-      await letTimePassForMailOf(w.workshop.id, 260);
+      await letTimePassForMailOf(w.workshop.id, retryWait);
       expect(await worker.runOnce()).toEqual({ sent: 1, failed: 0 });
       const received = await fake.waitForMessage();
       expect(received.to).toEqual(['front-desk@example.test']);
@@ -198,7 +201,7 @@ describe('sending a repair order by e-mail', () => {
         .send({ revision, to: { address: 'nobody@example.test' }, audience: 'other' });
       for (let attempt = 1; attempt <= 3; attempt += 1) {
         await worker.runOnce();
-        await letTimePassForMailOf(w.workshop.id, 260);
+        await letTimePassForMailOf(w.workshop.id, retryWait);
       }
       const message = (await lead.get('/api/outbox')).body.messages[0];
       expect(message).toMatchObject({ status: 'failed', attempts: 3, nextAttemptAt: null });
