@@ -1,5 +1,5 @@
 // Parses a request part with a zod schema; failures become 400 with one message per field.
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import type { z } from 'zod';
 import { AppError } from '../errors';
 import { unstorableTextPath } from '../lib/storable-text';
@@ -16,28 +16,38 @@ export function describeZodError(error: z.ZodError): AppError {
   return new AppError('validation_failed', message, fields);
 }
 
-type Part = 'body' | 'query' | 'params';
+export type RequestPart = 'body' | 'query' | 'params';
 
 /**
- * Validate `req[part]` and store the parsed value in `res.locals[part]`. Every request part
+ * Parses `req[part]` with `schema`, throwing the 400 a handler answers with. Every request part
  * passes here, so this is also the one place text PostgreSQL cannot store is refused.
  */
-export function validate<S extends z.ZodType>(part: Part, schema: S): RequestHandler {
-  return (req, res, next) => {
-    const source: unknown = part === 'body' ? (req.body ?? {}) : req[part];
-    const badText = unstorableTextPath(source);
-    if (badText !== null) {
-      return next(
-        new AppError(
-          'bad_request',
-          `The text${badText === '_' ? '' : ` in ${badText}`} contains characters that cannot be stored (a NUL character or half of a character pair); remove them and try again.`,
-          { [badText]: 'Contains a character that cannot be stored.' },
-        ),
-      );
-    }
-    const parsed = schema.safeParse(source);
-    if (!parsed.success) return next(describeZodError(parsed.error));
-    res.locals[part] = parsed.data;
+export function parseRequestPart<S extends z.ZodType>(
+  req: Request,
+  part: RequestPart,
+  schema: S,
+): z.output<S> {
+  const source: unknown = part === 'body' ? (req.body ?? {}) : req[part];
+  const badText = unstorableTextPath(source);
+  if (badText !== null) {
+    throw new AppError(
+      'bad_request',
+      `The text${badText === '_' ? '' : ` in ${badText}`} contains characters that cannot be stored (a NUL character or half of a character pair); remove them and try again.`,
+      { [badText]: 'Contains a character that cannot be stored.' },
+    );
+  }
+  const parsed = schema.safeParse(source);
+  if (!parsed.success) throw describeZodError(parsed.error);
+  return parsed.data;
+}
+
+/**
+ * Refuses a request whose part does not parse, before any later handler runs (e.g. on
+ * `router.use('/:caseId', …)`). Handlers read the parsed values through `typedRoute`.
+ */
+export function validate<S extends z.ZodType>(part: RequestPart, schema: S): RequestHandler {
+  return (req, _res, next) => {
+    parseRequestPart(req, part, schema);
     next();
   };
 }

@@ -8,7 +8,6 @@ import type { Request, Response } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Sequelize } from 'sequelize';
 import { unlockSignInRequestSchema } from '@heatpath/contracts';
-import type { SetPasswordRequest, SignInRequest, UnlockSignInRequest } from '@heatpath/contracts';
 import type { Config } from '../../config';
 import type { User } from '../../db/models/index';
 import { AppError } from '../../errors';
@@ -27,7 +26,7 @@ import { startSession } from '../../services/auth/start-session';
 import { findAccountToken } from '../../services/accounts/find-account-token';
 import { requestPasswordReset } from '../../services/accounts/request-password-reset';
 import { setPasswordWithToken } from '../../services/accounts/set-password-with-token';
-import { validate } from '../../middlewares/validate';
+import { typedRoute } from '../typed-route';
 import { presentMe } from '../../presenters/me.presenter';
 import { signInUser } from '../../services/auth/sign-in-user';
 import {
@@ -103,30 +102,32 @@ export function authRouter(deps: {
     res.cookie(deviceCookieName, await devices.sign(deviceId), deviceCookieOptions);
   }
 
-  router.post('/sign-in', validate('body', signInRequestSchema), async (req, res) => {
-    const input = res.locals.body as SignInRequest;
-    const now = clock();
-    try {
-      const { user, deviceId } = await signInUser({
-        ...input,
-        deviceId: await devices.verify(cookiesOf(req)[deviceCookieName]),
-        address: ipKeyGenerator(req.ip ?? '0.0.0.0'),
-        limits: config.signInLimits,
-        now,
-        mail: deps.mail,
-        unlockTtlMinutes: config.accountTokens.passwordResetTtlMinutes,
-      });
-      await signIn(res, user, deviceId, now);
-      res.json({ me: presentMe(user) });
-    } catch (error) {
-      if (error instanceof SignInPaused)
-        res.set(
-          'Retry-After',
-          String(Math.max(1, Math.ceil((error.until.getTime() - now.getTime()) / 1000))),
-        );
-      throw error;
-    }
-  });
+  router.post(
+    '/sign-in',
+    typedRoute({ body: signInRequestSchema }, async ({ body: input }, res, req) => {
+      const now = clock();
+      try {
+        const { user, deviceId } = await signInUser({
+          ...input,
+          deviceId: await devices.verify(cookiesOf(req)[deviceCookieName]),
+          address: ipKeyGenerator(req.ip ?? '0.0.0.0'),
+          limits: config.signInLimits,
+          now,
+          mail: deps.mail,
+          unlockTtlMinutes: config.accountTokens.passwordResetTtlMinutes,
+        });
+        await signIn(res, user, deviceId, now);
+        res.json({ me: presentMe(user) });
+      } catch (error) {
+        if (error instanceof SignInPaused)
+          res.set(
+            'Retry-After',
+            String(Math.max(1, Math.ceil((error.until.getTime() - now.getTime()) / 1000))),
+          );
+        throw error;
+      }
+    }),
+  );
 
   // "Forgot password" is limited like sign-in, per address and per account; the account count
   // runs whether or not the account exists, so even a 429 reveals nothing.
@@ -166,31 +167,25 @@ export function authRouter(deps: {
     '/password-reset',
     resetPerAddress,
     resetPerAccount,
-    validate('body', passwordResetRequestSchema),
-    async (_req, res) => {
-      const { email } = res.locals.body as { email: string };
+    typedRoute({ body: passwordResetRequestSchema }, async ({ body: { email } }, res) => {
       const ttlMinutes = config.accountTokens.passwordResetTtlMinutes;
       await requestPasswordReset({ email, ttlMinutes, mail: deps.mail });
       res.status(202).json({ message: passwordResetAnswer(ttlMinutes) });
-    },
+    }),
   );
 
   router.post(
     '/set-password/check',
     linkPerAddress,
-    validate('body', accountTokenCheckRequestSchema),
-    async (_req, res) => {
-      const { token } = res.locals.body as { token: string };
+    typedRoute({ body: accountTokenCheckRequestSchema }, async ({ body: { token } }, res) => {
       res.json(await findAccountToken({ token }));
-    },
+    }),
   );
 
   router.post(
     '/set-password',
     linkPerAddress,
-    validate('body', setPasswordRequestSchema),
-    async (req, res) => {
-      const input = res.locals.body as SetPasswordRequest;
+    typedRoute({ body: setPasswordRequestSchema }, async ({ body: input }, res, req) => {
       const user = await setPasswordWithToken(input);
       // The link proved the address and the new password ended every other session: the
       // person is signed in here at once, and this browser becomes one they have signed in on.
@@ -199,18 +194,16 @@ export function authRouter(deps: {
       await rememberDevice({ deviceId, user, now });
       await signIn(res, user, deviceId, now);
       res.json({ me: presentMe(user) });
-    },
+    }),
   );
 
   router.post(
     '/unlock',
     linkPerAddress,
-    validate('body', unlockSignInRequestSchema),
-    async (_req, res) => {
-      const { token } = res.locals.body as UnlockSignInRequest;
+    typedRoute({ body: unlockSignInRequestSchema }, async ({ body: { token } }, res) => {
       await unlockSignIn({ token });
       res.json({ message: signInUnlockedMessage });
-    },
+    }),
   );
 
   // Ends this browser's session for every API process; the device cookie stays, so the

@@ -7,12 +7,12 @@ import { AppError, notFound } from '../../errors';
 import type { FileStore } from '../../lib/storage/file-store';
 import { actorOf, userOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
-import { validate } from '../../middlewares/validate';
 import { presentAttachment } from '../../presenters/case.presenter';
 import { addAttachment, attachmentLimits } from '../../services/attachments/add-attachment';
 import { assertCan } from '../../policies/permissions';
 import { findCase } from '../../services/cases/find-case';
-import { attachmentFieldsSchema, attachmentParamsSchema } from './cases.schema';
+import { attachmentFieldsSchema, attachmentParamsSchema, caseParamsSchema } from './cases.schema';
+import { typedRoute } from '../typed-route';
 
 const upload = multer({
   storage: multer.memoryStorage(),
@@ -51,34 +51,30 @@ export function attachmentsRouter(deps: { store: FileStore }) {
     '/',
     requirePermission('cases.walk'),
     receiveOneFile,
-    validate('body', attachmentFieldsSchema),
-    async (req, res) => {
-      const { caseId } = res.locals.params as { caseId: string };
-      if (!req.file)
-        throw new AppError('bad_request', 'Choose a file to attach (form field "file").');
-      const fields = res.locals.body as { nodeId?: string; photoOnly?: 'true' | 'false' };
-      const attachment = await addAttachment({
-        actor: actorOf(res),
-        caseId,
-        nodeId: fields.nodeId ?? null,
-        photoOnly: fields.photoOnly === 'true',
-        file: { originalName: req.file.originalname, bytes: req.file.buffer },
-        store: deps.store,
-      });
-      res.status(201).json(presentAttachment(attachment, userOf(res)));
-    },
+    typedRoute(
+      { params: caseParamsSchema, body: attachmentFieldsSchema },
+      async ({ params: { caseId }, body: fields }, res, req) => {
+        if (!req.file)
+          throw new AppError('bad_request', 'Choose a file to attach (form field "file").');
+        const attachment = await addAttachment({
+          actor: actorOf(res),
+          caseId,
+          nodeId: fields.nodeId ?? null,
+          photoOnly: fields.photoOnly === 'true',
+          file: { originalName: req.file.originalname, bytes: req.file.buffer },
+          store: deps.store,
+        });
+        res.status(201).json(presentAttachment(attachment, userOf(res)));
+      },
+    ),
   );
 
   const sendStored = (which: 'file' | 'thumbnail'): RequestHandler[] => [
     requirePermission('cases.read'),
-    validate('params', attachmentParamsSchema),
-    async (_req, res) => {
+    typedRoute({ params: attachmentParamsSchema }, async ({ params }, res) => {
       const actor = actorOf(res);
       assertCan(actor, 'cases.read');
-      const { caseId, attachmentId } = res.locals.params as {
-        caseId: string;
-        attachmentId: string;
-      };
+      const { caseId, attachmentId } = params;
       const kase = await findCase({ actor, caseId });
       const a = await Attachment.findOne({
         where: { id: attachmentId, caseId: kase.id, workshopId: actor.workshopId },
@@ -105,7 +101,7 @@ export function attachmentsRouter(deps: { store: FileStore }) {
         );
       }
       stream.pipe(res);
-    },
+    }),
   ];
   router.get('/:attachmentId/file', ...sendStored('file'));
   router.get('/:attachmentId/thumbnail', ...sendStored('thumbnail'));

@@ -1,15 +1,8 @@
 // /api/cases: intake, the list, the case, its walk, notes, findings and audit trail; the
 // repair order of a diagnosed case is in repair-order.router.ts.
 import { Router } from 'express';
-import type {
-  AddNoteRequest,
-  CaseListQuery,
-  CreateCaseRequest,
-  UpdateFindingsRequest,
-  WalkEventRequest,
-  WalkEventResponse,
-} from '@heatpath/contracts';
-import { actorOf } from '../../middlewares/authenticate';
+import type { WalkEventResponse } from '@heatpath/contracts';
+import { actorOf, userOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
 import { validate } from '../../middlewares/validate';
 import { presentCaseSummary, presentNote } from '../../presenters/case.presenter';
@@ -34,98 +27,101 @@ import { attachmentsRouter } from './attachments.router';
 import { repairOrderRouter } from './repair-order.router';
 import { temperatureLogsRouter } from './temperature-logs.router';
 import type { MailContext } from '../../lib/mail/mail-context';
+import { typedRoute } from '../typed-route';
 
 export function casesRouter(deps: { store: FileStore; mail: MailContext }) {
   const router = Router();
-  const caseId = (res: { locals: Record<string, unknown> }) =>
-    (res.locals.params as { caseId: string }).caseId;
 
   router.get(
     '/',
     requirePermission('cases.read'),
-    validate('query', caseListQuerySchema),
-    async (_req, res) => {
-      const page = await listCases({
-        actor: actorOf(res),
-        query: res.locals.query as CaseListQuery,
-      });
+    typedRoute({ query: caseListQuerySchema }, async ({ query }, res) => {
+      const page = await listCases({ actor: actorOf(res), query });
       res.json({ cases: page.cases.map(presentCaseSummary), nextCursor: page.nextCursor });
-    },
+    }),
   );
 
   router.post(
     '/',
     requirePermission('cases.create'),
-    validate('body', createCaseRequestSchema),
-    async (_req, res) => {
+    typedRoute({ body: createCaseRequestSchema }, async ({ body }, res) => {
       const actor = actorOf(res);
-      const kase = await createCase({ actor, input: res.locals.body as CreateCaseRequest });
+      const kase = await createCase({ actor, input: body });
       res.status(201).json(await getCaseDetail({ actor, caseId: kase.id }));
-    },
+    }),
   );
 
   router.use('/:caseId', validate('params', caseParamsSchema));
 
-  router.get('/:caseId', requirePermission('cases.read'), async (_req, res) => {
-    res.json(await getCaseDetail({ actor: actorOf(res), caseId: caseId(res) }));
-  });
+  router.get(
+    '/:caseId',
+    requirePermission('cases.read'),
+    typedRoute({ params: caseParamsSchema }, async ({ params }, res) => {
+      res.json(await getCaseDetail({ actor: actorOf(res), caseId: params.caseId }));
+    }),
+  );
 
   router.post(
     '/:caseId/walk',
     requirePermission('cases.walk'),
-    validate('body', walkEventRequestSchema),
-    async (_req, res) => {
-      const body = res.locals.body as WalkEventRequest;
-      const result = await submitWalkEvent({
-        actor: actorOf(res),
-        caseId: caseId(res),
-        event: body.event,
-        idempotencyKey: body.idempotencyKey,
-      });
-      const response: WalkEventResponse = { walk: result.walk, repeated: result.repeated };
-      res.status(result.repeated ? 200 : 201).json(response);
-    },
+    typedRoute(
+      { params: caseParamsSchema, body: walkEventRequestSchema },
+      async ({ params, body }, res) => {
+        const result = await submitWalkEvent({
+          actor: actorOf(res),
+          caseId: params.caseId,
+          event: body.event,
+          idempotencyKey: body.idempotencyKey,
+        });
+        const response: WalkEventResponse = { walk: result.walk, repeated: result.repeated };
+        res.status(result.repeated ? 200 : 201).json(response);
+      },
+    ),
   );
 
   router.post(
     '/:caseId/notes',
     requirePermission('cases.walk'),
-    validate('body', addNoteRequestSchema),
-    async (_req, res) => {
-      const note = await addCaseNote({
-        actor: actorOf(res),
-        caseId: caseId(res),
-        input: res.locals.body as AddNoteRequest,
-      });
-      note.actor = res.locals.user as typeof note.actor;
-      res.status(201).json(presentNote(note));
-    },
+    typedRoute(
+      { params: caseParamsSchema, body: addNoteRequestSchema },
+      async ({ params, body }, res) => {
+        const note = await addCaseNote({ actor: actorOf(res), caseId: params.caseId, input: body });
+        note.actor = userOf(res);
+        res.status(201).json(presentNote(note));
+      },
+    ),
   );
 
   router.put(
     '/:caseId/findings',
     requirePermission('findings.save'),
-    validate('body', updateFindingsRequestSchema),
-    async (_req, res) => {
-      const actor = actorOf(res);
-      await updateFindings({
-        actor,
-        caseId: caseId(res),
-        input: res.locals.body as UpdateFindingsRequest,
-      });
-      res.json(await getCaseDetail({ actor, caseId: caseId(res) }));
-    },
+    typedRoute(
+      { params: caseParamsSchema, body: updateFindingsRequestSchema },
+      async ({ params: { caseId }, body }, res) => {
+        const actor = actorOf(res);
+        await updateFindings({ actor, caseId, input: body });
+        res.json(await getCaseDetail({ actor, caseId }));
+      },
+    ),
   );
 
-  router.post('/:caseId/diagnosed', requirePermission('cases.walk'), async (_req, res) => {
-    const actor = actorOf(res);
-    await markDiagnosed({ actor, caseId: caseId(res) });
-    res.json(await getCaseDetail({ actor, caseId: caseId(res) }));
-  });
+  router.post(
+    '/:caseId/diagnosed',
+    requirePermission('cases.walk'),
+    typedRoute({ params: caseParamsSchema }, async ({ params: { caseId } }, res) => {
+      const actor = actorOf(res);
+      await markDiagnosed({ actor, caseId });
+      res.json(await getCaseDetail({ actor, caseId }));
+    }),
+  );
 
-  router.get('/:caseId/events', requirePermission('cases.read'), async (_req, res) => {
-    res.json({ events: await listCaseEvents({ actor: actorOf(res), caseId: caseId(res) }) });
-  });
+  router.get(
+    '/:caseId/events',
+    requirePermission('cases.read'),
+    typedRoute({ params: caseParamsSchema }, async ({ params: { caseId } }, res) => {
+      res.json({ events: await listCaseEvents({ actor: actorOf(res), caseId }) });
+    }),
+  );
 
   router.use('/:caseId/attachments', attachmentsRouter(deps));
   router.use('/:caseId/findings', repairOrderRouter(deps));

@@ -4,14 +4,11 @@
 import { Router } from 'express';
 import type { RequestHandler } from 'express';
 import multer from 'multer';
-import type { LogDetailQuery, LogMappingRequest } from '@heatpath/contracts';
 import { temperatureLogMaxBytes } from '@heatpath/contracts';
-import type { ColumnMapping } from '@heatpath/temperature-log';
 import { AppError } from '../../errors';
 import type { FileStore } from '../../lib/storage/file-store';
 import { actorOf, userOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
-import { validate } from '../../middlewares/validate';
 import { changeLogMapping } from '../../services/temperature-logs/change-log-mapping';
 import { getTemperatureLog } from '../../services/temperature-logs/get-temperature-log';
 import { listTemperatureLogs } from '../../services/temperature-logs/list-temperature-logs';
@@ -24,6 +21,8 @@ import {
   logUploadFieldsSchema,
   pendingUploadParamsSchema,
 } from './temperature-logs.schema';
+import { caseParamsSchema } from './cases.schema';
+import { typedRoute } from '../typed-route';
 
 const maxMegabytes = temperatureLogMaxBytes / 1024 / 1024;
 
@@ -61,87 +60,83 @@ const receiveLogFile: RequestHandler = (req, res, next) => {
 
 export function temperatureLogsRouter(deps: { store: FileStore }) {
   const router = Router({ mergeParams: true });
-  const caseIdOf = (res: { locals: Record<string, unknown> }) =>
-    (res.locals.params as { caseId: string }).caseId;
 
-  router.get('/', requirePermission('logs.read'), async (_req, res) => {
-    res.json(await listTemperatureLogs({ actor: actorOf(res), caseId: caseIdOf(res) }));
-  });
+  router.get(
+    '/',
+    requirePermission('logs.read'),
+    typedRoute({ params: caseParamsSchema }, async ({ params: { caseId } }, res) => {
+      res.json(await listTemperatureLogs({ actor: actorOf(res), caseId }));
+    }),
+  );
 
   router.post(
     '/',
     requirePermission('logs.upload'),
     receiveLogFile,
-    validate('body', logUploadFieldsSchema),
-    async (req, res) => {
-      const fields = res.locals.body as { nodeId?: string; mapping?: ColumnMapping };
-      const result = await uploadTemperatureLog({
-        actor: actorOf(res),
-        uploader: userOf(res),
-        caseId: caseIdOf(res),
-        nodeId: fields.nodeId ?? null,
-        mapping: fields.mapping,
-        file: req.file ? { originalName: req.file.originalname, bytes: req.file.buffer } : null,
-        store: deps.store,
-      });
-      res.status(result.status === 'stored' ? 201 : 200).json(result);
-    },
+    typedRoute(
+      { params: caseParamsSchema, body: logUploadFieldsSchema },
+      async ({ params: { caseId }, body: fields }, res, req) => {
+        const result = await uploadTemperatureLog({
+          actor: actorOf(res),
+          uploader: userOf(res),
+          caseId,
+          nodeId: fields.nodeId ?? null,
+          mapping: fields.mapping,
+          file: req.file ? { originalName: req.file.originalname, bytes: req.file.buffer } : null,
+          store: deps.store,
+        });
+        res.status(result.status === 'stored' ? 201 : 200).json(result);
+      },
+    ),
   );
 
   router.post(
     '/:pendingUploadId/mapping',
     requirePermission('logs.upload'),
-    validate('params', pendingUploadParamsSchema),
-    validate('body', logMappingRequestSchema),
-    async (_req, res) => {
-      const { pendingUploadId } = res.locals.params as { pendingUploadId: string };
-      const result = await mapPendingUpload({
-        actor: actorOf(res),
-        uploader: userOf(res),
-        caseId: caseIdOf(res),
-        uploadId: pendingUploadId,
-        mapping: (res.locals.body as LogMappingRequest).mapping,
-        store: deps.store,
-      });
-      res.status(result.status === 'stored' ? 201 : 200).json(result);
-    },
+    typedRoute(
+      { params: pendingUploadParamsSchema, body: logMappingRequestSchema },
+      async ({ params, body }, res) => {
+        const result = await mapPendingUpload({
+          actor: actorOf(res),
+          uploader: userOf(res),
+          caseId: params.caseId,
+          uploadId: params.pendingUploadId,
+          mapping: body.mapping,
+          store: deps.store,
+        });
+        res.status(result.status === 'stored' ? 201 : 200).json(result);
+      },
+    ),
   );
 
   router.put(
     '/:logId/mapping',
     requirePermission('logs.upload'),
-    validate('params', logParamsSchema),
-    validate('body', logMappingRequestSchema),
-    async (_req, res) => {
-      const { logId } = res.locals.params as { logId: string };
-      res.json(
-        await changeLogMapping({
-          actor: actorOf(res),
-          caseId: caseIdOf(res),
-          logId,
-          mapping: (res.locals.body as LogMappingRequest).mapping,
-          store: deps.store,
-        }),
-      );
-    },
+    typedRoute(
+      { params: logParamsSchema, body: logMappingRequestSchema },
+      async ({ params: { caseId, logId }, body }, res) => {
+        res.json(
+          await changeLogMapping({
+            actor: actorOf(res),
+            caseId,
+            logId,
+            mapping: body.mapping,
+            store: deps.store,
+          }),
+        );
+      },
+    ),
   );
 
   router.get(
     '/:logId',
     requirePermission('logs.read'),
-    validate('params', logParamsSchema),
-    validate('query', logDetailQuerySchema),
-    async (_req, res) => {
-      const { logId } = res.locals.params as { logId: string };
-      res.json(
-        await getTemperatureLog({
-          actor: actorOf(res),
-          caseId: caseIdOf(res),
-          logId,
-          query: res.locals.query as LogDetailQuery,
-        }),
-      );
-    },
+    typedRoute(
+      { params: logParamsSchema, query: logDetailQuerySchema },
+      async ({ params: { caseId, logId }, query }, res) => {
+        res.json(await getTemperatureLog({ actor: actorOf(res), caseId, logId, query }));
+      },
+    ),
   );
 
   return router;

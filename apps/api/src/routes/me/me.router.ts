@@ -1,11 +1,10 @@
 // GET /api/me, PATCH /api/me/preferences.
 import { Router } from 'express';
 import { updatePreferencesRequestSchema } from '@heatpath/contracts';
-import type { UpdatePreferencesRequest } from '@heatpath/contracts';
 import { actorOf, userOf } from '../../middlewares/authenticate';
-import { validate } from '../../middlewares/validate';
 import { presentMe } from '../../presenters/me.presenter';
 import { updatePreferences } from '../../services/preferences/update-preferences';
+import { typedRoute } from '../typed-route';
 
 export function meRouter() {
   const router = Router();
@@ -16,15 +15,11 @@ export function meRouter() {
 
   router.patch(
     '/preferences',
-    validate('body', updatePreferencesRequestSchema),
-    async (_req, res) => {
-      const updated = await updatePreferences({
-        actor: actorOf(res),
-        input: res.locals.body as UpdatePreferencesRequest,
-      });
+    typedRoute({ body: updatePreferencesRequestSchema }, async ({ body }, res) => {
+      const updated = await updatePreferences({ actor: actorOf(res), input: body });
       updated.workshop = userOf(res).workshop;
       res.json(presentMe(updated));
-    },
+    }),
   );
 
   return router;

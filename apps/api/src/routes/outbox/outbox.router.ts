@@ -3,7 +3,6 @@
 import { Router } from 'express';
 import { actorOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
-import { validate } from '../../middlewares/validate';
 import { presentOutboxMessage } from '../../presenters/outbox.presenter';
 import { getOutboxAttachment } from '../../services/outbox/get-outbox-attachment';
 import { listOutbox } from '../../services/outbox/list-outbox';
@@ -13,6 +12,7 @@ import {
   outboxListQuerySchema,
   outboxMessageParamsSchema,
 } from './outbox.schema';
+import { typedRoute } from '../typed-route';
 
 export function outboxRouter() {
   const router = Router();
@@ -20,25 +20,17 @@ export function outboxRouter() {
   router.get(
     '/',
     requirePermission('outbox.read'),
-    validate('query', outboxListQuerySchema),
-    async (_req, res) => {
-      const page = await listOutbox({
-        actor: actorOf(res),
-        query: res.locals.query as { cursor?: string; limit: number },
-      });
+    typedRoute({ query: outboxListQuerySchema }, async ({ query }, res) => {
+      const page = await listOutbox({ actor: actorOf(res), query });
       res.json({ messages: page.messages.map(presentOutboxMessage), nextCursor: page.nextCursor });
-    },
+    }),
   );
 
   router.get(
     '/:messageId/attachments/:attachmentId',
     requirePermission('outbox.read'),
-    validate('params', outboxAttachmentParamsSchema),
-    async (_req, res) => {
-      const { messageId, attachmentId } = res.locals.params as {
-        messageId: string;
-        attachmentId: string;
-      };
+    typedRoute({ params: outboxAttachmentParamsSchema }, async ({ params }, res) => {
+      const { messageId, attachmentId } = params;
       const file = await getOutboxAttachment({ actor: actorOf(res), messageId, attachmentId });
       res.set('Content-Type', file.mediaType);
       res.set(
@@ -47,18 +39,19 @@ export function outboxRouter() {
       );
       res.set('X-Content-Type-Options', 'nosniff');
       res.send(file.content);
-    },
+    }),
   );
 
   router.post(
     '/:messageId/retry',
     requirePermission('outbox.manage'),
-    validate('params', outboxMessageParamsSchema),
-    async (_req, res) => {
-      const { messageId } = res.locals.params as { messageId: string };
-      const message = await retryOutboxMessage({ actor: actorOf(res), messageId });
+    typedRoute({ params: outboxMessageParamsSchema }, async ({ params }, res) => {
+      const message = await retryOutboxMessage({
+        actor: actorOf(res),
+        messageId: params.messageId,
+      });
       res.json(presentOutboxMessage(message));
-    },
+    }),
   );
 
   return router;

@@ -1,22 +1,17 @@
 // The lead's staff management: GET/POST /api/staff, PATCH /api/staff/:userId, and invitations
 // by e-mail: POST /api/staff/invitations, POST /api/staff/:userId/invitation (send again).
 import { Router } from 'express';
-import type {
-  CreateStaffRequest,
-  InviteStaffRequest,
-  UpdateStaffRequest,
-} from '@heatpath/contracts';
 import type { Config } from '../../config';
 import type { MailContext } from '../../lib/mail/mail-context';
 import { actorOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
-import { validate } from '../../middlewares/validate';
 import { presentStaffMember } from '../../presenters/staff-member.presenter';
 import { createStaffMember } from '../../services/staff/create-staff-member';
 import { inviteStaffMember } from '../../services/staff/invite-staff-member';
 import { resendInvitation } from '../../services/staff/resend-invitation';
 import { listStaff } from '../../services/staff/list-staff';
 import { updateStaffMember } from '../../services/staff/update-staff-member';
+import { typedRoute } from '../typed-route';
 import {
   createStaffRequestSchema,
   inviteStaffRequestSchema,
@@ -34,48 +29,53 @@ export function staffRouter(deps: { config: Config; mail: MailContext }) {
     res.json({ staff: staff.map(presentStaffMember) });
   });
 
-  router.post('/', validate('body', createStaffRequestSchema), async (_req, res) => {
-    const user = await createStaffMember({
-      actor: actorOf(res),
-      input: res.locals.body as CreateStaffRequest,
-    });
-    res.status(201).json(presentStaffMember(user));
-  });
+  router.post(
+    '/',
+    typedRoute({ body: createStaffRequestSchema }, async ({ body }, res) => {
+      const user = await createStaffMember({ actor: actorOf(res), input: body });
+      res.status(201).json(presentStaffMember(user));
+    }),
+  );
 
-  router.post('/invitations', validate('body', inviteStaffRequestSchema), async (_req, res) => {
-    const user = await inviteStaffMember({
-      actor: actorOf(res),
-      input: res.locals.body as InviteStaffRequest,
-      ttlMinutes,
-      mail: deps.mail,
-    });
-    res.status(201).json(presentStaffMember(user));
-  });
+  router.post(
+    '/invitations',
+    typedRoute({ body: inviteStaffRequestSchema }, async ({ body }, res) => {
+      const user = await inviteStaffMember({
+        actor: actorOf(res),
+        input: body,
+        ttlMinutes,
+        mail: deps.mail,
+      });
+      res.status(201).json(presentStaffMember(user));
+    }),
+  );
 
-  router.post('/:userId/invitation', validate('params', staffParamsSchema), async (_req, res) => {
-    const { userId } = res.locals.params as { userId: string };
-    const user = await resendInvitation({
-      actor: actorOf(res),
-      userId,
-      ttlMinutes,
-      mail: deps.mail,
-    });
-    res.status(201).json(presentStaffMember(user));
-  });
+  router.post(
+    '/:userId/invitation',
+    typedRoute({ params: staffParamsSchema }, async ({ params }, res) => {
+      const user = await resendInvitation({
+        actor: actorOf(res),
+        userId: params.userId,
+        ttlMinutes,
+        mail: deps.mail,
+      });
+      res.status(201).json(presentStaffMember(user));
+    }),
+  );
 
   router.patch(
     '/:userId',
-    validate('params', staffParamsSchema),
-    validate('body', updateStaffRequestSchema),
-    async (_req, res) => {
-      const { userId } = res.locals.params as { userId: string };
-      const user = await updateStaffMember({
-        actor: actorOf(res),
-        userId,
-        changes: res.locals.body as UpdateStaffRequest,
-      });
-      res.json(presentStaffMember(user));
-    },
+    typedRoute(
+      { params: staffParamsSchema, body: updateStaffRequestSchema },
+      async ({ params, body }, res) => {
+        const user = await updateStaffMember({
+          actor: actorOf(res),
+          userId: params.userId,
+          changes: body,
+        });
+        res.json(presentStaffMember(user));
+      },
+    ),
   );
 
   return router;

@@ -1,23 +1,15 @@
 // /api/training: the lead marks finished cases, builds courses, reads progress and signs off;
 // learners read the casebook, replay a case, and make scored prediction attempts.
 import { Router } from 'express';
-import type { RequestHandler } from 'express';
-import type {
-  CourseRequest,
-  MarkTrainingCaseRequest,
-  PredictionRequest,
-  SignOffRequest,
-  UpdateTrainingCaseRequest,
-} from '@heatpath/contracts';
-import { Attachment } from '../../db/models/index';
 import { notFound } from '../../errors';
 import type { FileStore } from '../../lib/storage/file-store';
 import { actorOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
-import { validate } from '../../middlewares/validate';
+import { presentTrainingTree } from '../../presenters/training.presenter';
 import { getCasebook, getReplay } from '../../services/training/casebook';
 import { listCourses, saveCourse } from '../../services/training/courses';
 import { findTrainingCase } from '../../services/training/find-training-case';
+import { findTrainingPhoto } from '../../services/training/find-training-photo';
 import {
   listCandidates,
   listTrainingCases,
@@ -35,6 +27,7 @@ import {
   startAttempt,
   submitPrediction,
 } from '../../services/training/training-attempts';
+import { typedRoute } from '../typed-route';
 import {
   apprenticeParamsSchema,
   attemptParamsSchema,
@@ -48,19 +41,12 @@ import {
   updateTrainingCaseRequestSchema,
 } from './training.schema';
 
-// Set by validate('params', …) before any handler below reads it.
-type Params = {
-  trainingCaseId: string;
-  courseId: string;
-  attemptId: string;
-  apprenticeId: string;
-};
-const params = (res: { locals: Record<string, unknown> }) => res.locals.params as Params;
-
 export function trainingRouter(deps: { store: FileStore }) {
   const router = Router();
   const manage = requirePermission('training.manage');
   const learn = requirePermission('training.learn');
+  const trainingCase = { params: trainingCaseParamsSchema };
+  const attempt = { params: attemptParamsSchema };
 
   // ---- The lead ----
   router.get('/candidates', manage, async (_req, res) => {
@@ -74,73 +60,55 @@ export function trainingRouter(deps: { store: FileStore }) {
   router.post(
     '/cases',
     manage,
-    validate('body', markTrainingCaseRequestSchema),
-    async (_req, res) => {
-      const marked = await markTrainingCase({
-        actor: actorOf(res),
-        request: res.locals.body as MarkTrainingCaseRequest,
-      });
-      res.status(201).json(marked);
-    },
+    typedRoute({ body: markTrainingCaseRequestSchema }, async ({ body }, res) => {
+      res.status(201).json(await markTrainingCase({ actor: actorOf(res), request: body }));
+    }),
   );
 
   router.patch(
     '/cases/:trainingCaseId',
     manage,
-    validate('params', trainingCaseParamsSchema),
-    validate('body', updateTrainingCaseRequestSchema),
-    async (_req, res) => {
-      res.json(
-        await updateTrainingCase({
-          actor: actorOf(res),
-          trainingCaseId: params(res).trainingCaseId,
-          request: res.locals.body as UpdateTrainingCaseRequest,
-        }),
-      );
-    },
+    typedRoute(
+      { params: trainingCaseParamsSchema, body: updateTrainingCaseRequestSchema },
+      async ({ params: { trainingCaseId }, body }, res) => {
+        res.json(await updateTrainingCase({ actor: actorOf(res), trainingCaseId, request: body }));
+      },
+    ),
   );
 
   router.get('/courses', manage, async (_req, res) => {
     res.json({ courses: await listCourses(actorOf(res)) });
   });
 
-  router.post('/courses', manage, validate('body', courseRequestSchema), async (_req, res) => {
-    const course = await saveCourse({
-      actor: actorOf(res),
-      request: res.locals.body as CourseRequest,
-    });
-    res.status(201).json(course);
-  });
+  router.post(
+    '/courses',
+    manage,
+    typedRoute({ body: courseRequestSchema }, async ({ body }, res) => {
+      res.status(201).json(await saveCourse({ actor: actorOf(res), request: body }));
+    }),
+  );
 
   router.put(
     '/courses/:courseId',
     manage,
-    validate('params', courseParamsSchema),
-    validate('body', courseRequestSchema),
-    async (_req, res) => {
-      res.json(
-        await saveCourse({
-          actor: actorOf(res),
-          courseId: params(res).courseId,
-          request: res.locals.body as CourseRequest,
-        }),
-      );
-    },
+    typedRoute(
+      { params: courseParamsSchema, body: courseRequestSchema },
+      async ({ params: { courseId }, body }, res) => {
+        res.json(await saveCourse({ actor: actorOf(res), courseId, request: body }));
+      },
+    ),
   );
 
   router.post(
     '/courses/:courseId/sign-offs',
     manage,
-    validate('params', courseParamsSchema),
-    validate('body', signOffRequestSchema),
-    async (_req, res) => {
-      const signed = await signOffCourse({
-        actor: actorOf(res),
-        courseId: params(res).courseId,
-        request: res.locals.body as SignOffRequest,
-      });
-      res.status(201).json(signed);
-    },
+    typedRoute(
+      { params: courseParamsSchema, body: signOffRequestSchema },
+      async ({ params: { courseId }, body }, res) => {
+        const signed = await signOffCourse({ actor: actorOf(res), courseId, request: body });
+        res.status(201).json(signed);
+      },
+    ),
   );
 
   router.get('/progress', manage, async (_req, res) => {
@@ -150,15 +118,9 @@ export function trainingRouter(deps: { store: FileStore }) {
   router.get(
     '/progress/:apprenticeId',
     manage,
-    validate('params', apprenticeParamsSchema),
-    async (_req, res) => {
-      res.json(
-        await apprenticeProgress({
-          actor: actorOf(res),
-          apprenticeId: params(res).apprenticeId,
-        }),
-      );
-    },
+    typedRoute({ params: apprenticeParamsSchema }, async ({ params: { apprenticeId } }, res) => {
+      res.json(await apprenticeProgress({ actor: actorOf(res), apprenticeId }));
+    }),
   );
 
   // ---- Learners ----
@@ -173,106 +135,67 @@ export function trainingRouter(deps: { store: FileStore }) {
   router.get(
     '/cases/:trainingCaseId/replay',
     learn,
-    validate('params', trainingCaseParamsSchema),
-    async (_req, res) => {
-      res.json(
-        await getReplay({ actor: actorOf(res), trainingCaseId: params(res).trainingCaseId }),
-      );
-    },
+    typedRoute(trainingCase, async ({ params: { trainingCaseId } }, res) => {
+      res.json(await getReplay({ actor: actorOf(res), trainingCaseId }));
+    }),
   );
 
   // Apprentices read the tree version a training case was walked on (and no other tree).
   router.get(
     '/cases/:trainingCaseId/tree',
     learn,
-    validate('params', trainingCaseParamsSchema),
-    async (_req, res) => {
+    typedRoute(trainingCase, async ({ params: { trainingCaseId } }, res) => {
       const training = await findTrainingCase({
         actor: actorOf(res),
-        trainingCaseId: params(res).trainingCaseId,
+        trainingCaseId,
         forLearner: true,
       });
-      const version = training.case.treeVersion;
-      res.json({
-        version: version.version,
-        status: version.status,
-        definition: version.definition,
-      });
-    },
+      res.json(presentTrainingTree(training.case.treeVersion));
+    }),
   );
 
-  const sendPhoto: RequestHandler = async (_req, res) => {
-    const actor = actorOf(res);
-    const { trainingCaseId, attachmentId, which } = res.locals.params as {
-      trainingCaseId: string;
-      attachmentId: string;
-      which: 'file' | 'thumbnail';
-    };
-    const training = await findTrainingCase({ actor, trainingCaseId, forLearner: true });
-    // Only photos, and only those the lead has not hidden.
-    const photo = training.hiddenAttachmentIds.includes(attachmentId)
-      ? null
-      : await Attachment.findOne({
-          where: {
-            id: attachmentId,
-            caseId: training.caseId,
-            workshopId: actor.workshopId,
-            kind: 'photo',
-          },
-        });
-    if (!photo) throw notFound('That photo');
-    const key = which === 'file' ? photo.storageKey : photo.thumbnailKey;
-    if (!key) throw notFound('A thumbnail for that photo');
-    const stream = await deps.store.get(key);
-    res.set('Content-Type', which === 'file' ? photo.mediaType : 'image/webp');
-    res.set('X-Content-Type-Options', 'nosniff');
-    // Photos of customers' cars must not outlive sign-out in a shared workshop PC's cache.
-    res.set('Cache-Control', 'no-store');
-    stream.pipe(res);
-  };
   router.get(
     '/cases/:trainingCaseId/photos/:attachmentId/:which',
     learn,
-    validate('params', trainingPhotoParamsSchema),
-    sendPhoto,
+    typedRoute({ params: trainingPhotoParamsSchema }, async ({ params }, res) => {
+      const { trainingCaseId, attachmentId, which } = params;
+      const photo = await findTrainingPhoto({ actor: actorOf(res), trainingCaseId, attachmentId });
+      const key = which === 'file' ? photo.storageKey : photo.thumbnailKey;
+      if (!key) throw notFound('A thumbnail for that photo');
+      const stream = await deps.store.get(key);
+      res.set('Content-Type', which === 'file' ? photo.mediaType : 'image/webp');
+      res.set('X-Content-Type-Options', 'nosniff');
+      // Photos of customers' cars must not outlive sign-out in a shared workshop PC's cache.
+      res.set('Cache-Control', 'no-store');
+      stream.pipe(res);
+    }),
   );
 
   router.post(
     '/cases/:trainingCaseId/attempts',
     learn,
-    validate('params', trainingCaseParamsSchema),
-    async (_req, res) => {
-      const attempt = await startAttempt({
-        actor: actorOf(res),
-        trainingCaseId: params(res).trainingCaseId,
-      });
-      res.status(201).json(attempt);
-    },
+    typedRoute(trainingCase, async ({ params: { trainingCaseId } }, res) => {
+      res.status(201).json(await startAttempt({ actor: actorOf(res), trainingCaseId }));
+    }),
   );
 
   router.get(
     '/attempts/:attemptId',
     learn,
-    validate('params', attemptParamsSchema),
-    async (_req, res) => {
-      res.json(await getAttempt({ actor: actorOf(res), attemptId: params(res).attemptId }));
-    },
+    typedRoute(attempt, async ({ params: { attemptId } }, res) => {
+      res.json(await getAttempt({ actor: actorOf(res), attemptId }));
+    }),
   );
 
   router.post(
     '/attempts/:attemptId/predictions',
     learn,
-    validate('params', attemptParamsSchema),
-    validate('body', predictionRequestSchema),
-    async (_req, res) => {
-      res.json(
-        await submitPrediction({
-          actor: actorOf(res),
-          attemptId: params(res).attemptId,
-          prediction: res.locals.body as PredictionRequest,
-        }),
-      );
-    },
+    typedRoute(
+      { params: attemptParamsSchema, body: predictionRequestSchema },
+      async ({ params: { attemptId }, body }, res) => {
+        res.json(await submitPrediction({ actor: actorOf(res), attemptId, prediction: body }));
+      },
+    ),
   );
 
   return router;

@@ -5,15 +5,14 @@ import type { MailContext } from '../../lib/mail/mail-context';
 import { enqueueMail } from '../mail/enqueue-mail';
 import { issueAccountToken } from './account-tokens';
 import { passwordResetMessage } from './link-messages';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function requestPasswordReset(options: {
   email: string;
   ttlMinutes: number;
   mail: MailContext;
 }): Promise<void> {
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(async (transaction) => {
     const user = await User.findOne({
       where: { email: options.email.toLowerCase(), active: true },
       include: [{ model: Workshop, as: 'workshop' }],

@@ -5,6 +5,7 @@ import type { MailContext } from '../../lib/mail/mail-context';
 import { enqueueMail } from '../mail/enqueue-mail';
 import { issueAccountToken } from './account-tokens';
 import { signInUnlockMessage } from './link-messages';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function sendSignInUnlock(options: {
   user: User;
@@ -12,10 +13,9 @@ export async function sendSignInUnlock(options: {
   mail: MailContext;
 }): Promise<void> {
   const { user } = options;
-  const sequelize = user.sequelize;
   if (!user.workshop) throw new Error('sendSignInUnlock needs the workshop loaded.');
   const workshopName = user.workshop.name;
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(async (transaction) => {
     const { token } = await issueAccountToken({
       user,
       purpose: 'sign-in-unlock',

@@ -9,16 +9,15 @@ import { AppError } from '../../errors';
 import { hashPassword } from '../../lib/passwords';
 import { allowanceKeys, clearAllowance } from '../auth/sign-in-allowance';
 import { hashToken, tokenNoLongerValid } from './account-tokens';
+import { database, withTransaction } from '../../db/with-transaction';
 
 export async function setPasswordWithToken(options: {
   token: string;
   password: string;
 }): Promise<User> {
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
   const passwordHash = await hashPassword(options.password);
-  return sequelize.transaction(async (transaction) => {
-    const spent = await sequelize.query<{ user_id: string }>(
+  return withTransaction(async (transaction) => {
+    const spent = await database().query<{ user_id: string }>(
       `UPDATE account_tokens SET used_at = now()
         WHERE token_hash = $1 AND purpose IN ('invitation', 'password-reset')
           AND used_at IS NULL AND expires_at > now()

@@ -5,12 +5,11 @@ import { User } from '../../db/models/index';
 import { AppError } from '../../errors';
 import { allowanceKeys, clearAllowance } from '../auth/sign-in-allowance';
 import { hashToken, tokenNoLongerValid } from './account-tokens';
+import { database, withTransaction } from '../../db/with-transaction';
 
 export async function unlockSignIn(options: { token: string }): Promise<void> {
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  await sequelize.transaction(async (transaction) => {
-    const spent = await sequelize.query<{ user_id: string }>(
+  await withTransaction(async (transaction) => {
+    const spent = await database().query<{ user_id: string }>(
       `UPDATE account_tokens SET used_at = now()
         WHERE token_hash = $1 AND purpose = 'sign-in-unlock' AND used_at IS NULL
           AND expires_at > now()

@@ -5,7 +5,7 @@
 // failure that uses the last attempt pauses the key for one window, whatever password follows.
 import { QueryTypes } from 'sequelize';
 import type { Transaction } from 'sequelize';
-import { User } from '../../db/models/index';
+import { database, withTransaction } from '../../db/with-transaction';
 
 export interface AllowanceRule {
   limit: number;
@@ -29,12 +29,6 @@ export const allowanceKeys = {
   address: (address: string) => `address:${address}`.slice(0, 300),
 };
 
-function db() {
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize;
-}
-
 interface Row {
   attempts: number;
   window_started_at: Date;
@@ -46,14 +40,13 @@ export async function takeAttempt(
   rule: AllowanceRule,
   now: Date,
 ): Promise<TakeResult> {
-  const sequelize = db();
-  return sequelize.transaction(async (transaction) => {
-    await sequelize.query(
+  return withTransaction(async (transaction) => {
+    await database().query(
       `INSERT INTO sign_in_allowances (key, attempts, window_started_at) VALUES ($1, 0, $2)
        ON CONFLICT (key) DO NOTHING`,
       { bind: [key, now], transaction },
     );
-    const [row] = await sequelize.query<Row>(
+    const [row] = await database().query<Row>(
       `SELECT attempts, window_started_at, locked_until FROM sign_in_allowances
         WHERE key = $1 FOR UPDATE`,
       { bind: [key], type: QueryTypes.SELECT, transaction },
@@ -71,7 +64,7 @@ export async function takeAttempt(
     // Only attempts still in flight can fill the allowance without a pause: refuse the extra.
     if (attempts >= rule.limit)
       return { taken: false, until: new Date(windowStartedAt.getTime() + rule.windowMs) };
-    await sequelize.query(
+    await database().query(
       `UPDATE sign_in_allowances SET attempts = $2, window_started_at = $3, locked_until = NULL
         WHERE key = $1`,
       { bind: [key, attempts + 1, windowStartedAt], transaction },
@@ -82,7 +75,7 @@ export async function takeAttempt(
 
 /** A successful attempt does not count against the allowance. */
 export async function giveBack(attempt: TakenAttempt): Promise<void> {
-  await db().query(
+  await database().query(
     `UPDATE sign_in_allowances SET attempts = greatest(attempts - 1, 0)
       WHERE key = $1 AND window_started_at = $2 AND locked_until IS NULL`,
     { bind: [attempt.key, attempt.windowStartedAt] },
@@ -98,7 +91,7 @@ export async function recordFailure(
   rule: AllowanceRule,
   now: Date,
 ): Promise<{ pauseStarted: boolean }> {
-  const rows = await db().query<{ key: string }>(
+  const rows = await database().query<{ key: string }>(
     `UPDATE sign_in_allowances SET locked_until = $3
       WHERE key = $1 AND window_started_at = $2 AND attempts >= $4 AND locked_until IS NULL
       RETURNING key`,
@@ -117,7 +110,7 @@ export async function recordFailure(
 
 /** Lifts a pause and forgets the failures (an unlock link, a new password). */
 export async function clearAllowance(key: string, transaction?: Transaction): Promise<void> {
-  await db().query('DELETE FROM sign_in_allowances WHERE key = $1', {
+  await database().query('DELETE FROM sign_in_allowances WHERE key = $1', {
     bind: [key],
     transaction,
   });

@@ -11,6 +11,7 @@ import type { Actor } from '../../policies/permissions';
 import { issueAccountToken } from '../accounts/account-tokens';
 import { invitationMessage } from '../accounts/link-messages';
 import { enqueueMail } from '../mail/enqueue-mail';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function sendInvitation(options: {
   actor: Actor;
@@ -60,10 +61,8 @@ export async function inviteStaffMember(options: {
 }): Promise<User> {
   const { actor, input } = options;
   assertCan(actor, 'staff.manage');
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
   try {
-    return await sequelize.transaction(async (transaction) => {
+    return await withTransaction(async (transaction) => {
       const user = await User.create(
         {
           workshopId: actor.workshopId,

@@ -6,6 +6,7 @@ import type { MailContext } from '../../lib/mail/mail-context';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { sendInvitation } from './invite-staff-member';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function resendInvitation(options: {
   actor: Actor;
@@ -15,9 +16,7 @@ export async function resendInvitation(options: {
 }): Promise<User> {
   const { actor, userId } = options;
   assertCan(actor, 'staff.manage');
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const user = await User.findOne({
       where: { id: userId, workshopId: actor.workshopId },
       transaction,

@@ -6,6 +6,7 @@ import { User } from '../../db/models/index';
 import { AppError, notFound } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function updateStaffMember(options: {
   actor: Actor;
@@ -14,9 +15,7 @@ export async function updateStaffMember(options: {
 }): Promise<User> {
   const { actor, userId, changes } = options;
   assertCan(actor, 'staff.manage');
-  const sequelize = User.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const user = await User.findOne({
       where: { id: userId, workshopId: actor.workshopId },
       transaction,

@@ -12,6 +12,7 @@ import {
 import { AppError, notFound } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { withTransaction } from '../../db/with-transaction';
 
 async function presentCourse(actor: Actor, course: TrainingCourse): Promise<TrainingCourseView> {
   const items = await TrainingCourseItem.findAll({
@@ -90,9 +91,7 @@ export async function saveCourse(options: {
   )
     throw notFound('That course');
   await checkRequest(actor, request);
-  const sequelize = TrainingCourse.sequelize;
-  if (!sequelize) throw new Error('models are not initialised');
-  const course = await sequelize.transaction(async (transaction) => {
+  const course = await withTransaction(async (transaction) => {
     const fields = {
       title: request.title,
       description: request.description ?? null,

@@ -18,6 +18,7 @@ import { findTrainingCase } from './find-training-case';
 import { concealed, trainingStoryOf } from './training-story';
 import type { TrainingStory } from './training-story';
 import { learnerEntry } from './casebook';
+import { withTransaction } from '../../db/with-transaction';
 
 /** The first step still waiting for a prediction, or null when every asked step is answered. */
 function currentIndex(story: TrainingStory, predicted: ReadonlySet<number>): number | null {
@@ -144,10 +145,8 @@ export async function submitPrediction(options: {
 }): Promise<TrainingAttemptView> {
   const { actor, attemptId, prediction } = options;
   assertCan(actor, 'training.learn');
-  const sequelize = TrainingAttempt.sequelize;
-  if (!sequelize) throw new Error('models are not initialised');
   try {
-    return await sequelize.transaction(async (transaction) => {
+    return await withTransaction(async (transaction) => {
       const attempt = await loadAttempt(actor, attemptId, transaction);
       if (attempt.apprenticeId !== actor.userId) throw notFound('That attempt');
       const { story, predictions, present } = await view(actor, attempt, transaction);

@@ -11,6 +11,7 @@ import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { blankTree, keyFromTitle } from './blank-tree';
 import { findTree } from './find-tree';
+import { withTransaction } from '../../db/with-transaction';
 
 interface Envelope {
   id: string;
@@ -58,9 +59,7 @@ async function freeKey(
 export async function createTree(options: { actor: Actor; input: CreateTreeRequest }) {
   const { actor, input } = options;
   assertCan(actor, 'trees.edit');
-  const sequelize = Tree.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     let definition: Record<string, unknown>;
     if (input.mode === 'blank') {
       const key = await freeKey(actor.workshopId, keyFromTitle(input.title), transaction);

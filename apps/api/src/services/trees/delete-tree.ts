@@ -7,13 +7,12 @@ import { conflict } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findTree } from './find-tree';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function deleteUnpublishedTree(options: { actor: Actor; treeId: string }) {
   const { actor } = options;
   assertCan(actor, 'trees.delete');
-  const sequelize = TreeVersion.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  await sequelize.transaction(async (transaction) => {
+  await withTransaction(async (transaction) => {
     // Locking the tree row holds off a publish of its draft (which locks it too) until we finish.
     const tree = await findTree({ actor, treeId: options.treeId, transaction, lock: true });
     const published = await TreeVersion.count({

@@ -6,12 +6,7 @@ import { AppError, conflict } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findDraft, findTree, findTreeVersion } from './find-tree';
-
-function sequelizeOf() {
-  const sequelize = TreeVersion.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize;
-}
+import { withTransaction } from '../../db/with-transaction';
 
 export async function startDraft(options: {
   actor: Actor;
@@ -20,7 +15,7 @@ export async function startDraft(options: {
 }) {
   const { actor, treeId } = options;
   assertCan(actor, 'trees.edit');
-  return sequelizeOf().transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const tree = await findTree({ actor, treeId, transaction, lock: true });
     const existing = await TreeVersion.findOne({
       where: { treeId: tree.id, status: 'draft' },
@@ -74,7 +69,7 @@ export async function saveDraft(options: {
   ) {
     throw new AppError('validation_failed', 'The draft must be a tree definition object.');
   }
-  return sequelizeOf().transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const draft = await findDraft({ actor, treeId, transaction, lock: true });
     if (draft.revision !== input.revision) {
       throw conflict(
@@ -104,7 +99,7 @@ export async function saveDraft(options: {
 
 export async function discardDraft(options: { actor: Actor; treeId: string }) {
   assertCan(options.actor, 'trees.edit');
-  return sequelizeOf().transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const draft = await findDraft({ ...options, transaction, lock: true });
     const versions = await TreeVersion.count({ where: { treeId: options.treeId }, transaction });
     if (versions === 1)
@@ -122,7 +117,7 @@ export async function discardDraft(options: { actor: Actor; treeId: string }) {
  */
 export async function retireVersion(options: { actor: Actor; treeId: string; versionId: string }) {
   assertCan(options.actor, 'trees.edit');
-  return sequelizeOf().transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const version = await findTreeVersion({ ...options, transaction, lock: true });
     if (version.status === 'retired')
       throw conflict(`Version ${version.version} is already retired; nothing was changed.`);

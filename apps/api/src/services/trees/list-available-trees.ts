@@ -3,15 +3,13 @@
 // as a reminder to publish it.
 import { QueryTypes } from 'sequelize';
 import type { AvailableTree } from '@heatpath/contracts';
-import { Tree } from '../../db/models/index';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { database } from '../../db/with-transaction';
 
 export async function listAvailableTrees(options: { actor: Actor }): Promise<AvailableTree[]> {
   assertCan(options.actor, 'trees.read');
-  const sequelize = Tree.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  const rows = await sequelize.query<{
+  const rows = await database().query<{
     id: string;
     key: string;
     title: string;

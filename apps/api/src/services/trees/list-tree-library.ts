@@ -3,6 +3,7 @@
 import { QueryTypes } from 'sequelize';
 import type { TreeLibraryEntry } from '@heatpath/contracts';
 import { Tree, TreeVersion, User } from '../../db/models/index';
+import { database } from '../../db/with-transaction';
 import { presentVersionInfo } from '../../presenters/tree.presenter';
 import { assertCan, can } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
@@ -11,9 +12,8 @@ export async function caseCountsByVersion(
   workshopId: string,
   treeIds: string[],
 ): Promise<Map<string, number>> {
-  const sequelize = Tree.sequelize;
-  if (!sequelize || treeIds.length === 0) return new Map();
-  const rows = await sequelize.query<{ tree_version_id: string; n: string }>(
+  if (treeIds.length === 0) return new Map();
+  const rows = await database().query<{ tree_version_id: string; n: string }>(
     `SELECT c.tree_version_id, count(*) AS n FROM cases c JOIN tree_versions v ON v.id = c.tree_version_id
       WHERE c.workshop_id = $1 AND v.tree_id = ANY($2::uuid[]) GROUP BY c.tree_version_id`,
     { bind: [workshopId, treeIds], type: QueryTypes.SELECT },

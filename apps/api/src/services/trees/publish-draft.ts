@@ -4,12 +4,12 @@
 import type { PublishDraftRequest } from '@heatpath/contracts';
 import { compileTree } from '@heatpath/fault-tree';
 import { AppError } from '../../errors';
-import { TreeVersion } from '../../db/models/index';
 import type { PublishConfirmation } from '../../db/models/tree-version';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findDraft, findTree } from './find-tree';
 import { replayRegression } from './replay-regression';
+import { withTransaction } from '../../db/with-transaction';
 
 /** Why a publish came back 409, as `error.reason`. */
 export const publishRefusals = {
@@ -25,9 +25,7 @@ export async function publishDraft(options: {
 }) {
   const { actor, treeId, input } = options;
   assertCan(actor, 'trees.edit');
-  const sequelize = TreeVersion.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     await findTree({ actor, treeId, transaction, lock: true });
     const draft = await findDraft({ actor, treeId, transaction, lock: true });
     if (draft.revision !== input.revision) {

@@ -5,6 +5,7 @@ import { AppError } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { findTree } from './find-tree';
+import { withTransaction } from '../../db/with-transaction';
 
 export async function setRegressionSet(options: {
   actor: Actor;
@@ -13,9 +14,7 @@ export async function setRegressionSet(options: {
 }) {
   const { actor, treeId } = options;
   assertCan(actor, 'trees.edit');
-  const sequelize = RegressionCase.sequelize;
-  if (!sequelize) throw new Error('Models are not initialised.');
-  return sequelize.transaction(async (transaction) => {
+  return withTransaction(async (transaction) => {
     const tree = await findTree({ actor, treeId, transaction, lock: true });
     const caseIds = [...new Set(options.caseIds)];
     const versionIds = (
