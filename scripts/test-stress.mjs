@@ -10,21 +10,36 @@ import { root } from './lib/run.mjs';
 const runs = Number(process.env.HEATPATH_STRESS_RUNS ?? 3);
 const loopCount = Number(process.env.HEATPATH_STRESS_LOOPS ?? 2);
 const loops = [];
+let current = null;
 
 function stopLoops() {
   for (const loop of loops) if (loop.exitCode === null && loop.signalCode === null) loop.kill();
 }
 process.once('exit', stopLoops);
+// Stopped by hand: the loops go, and so does the test run in progress (its whole process group,
+// so its cluster, server and browser stop with it).
 for (const signal of ['SIGINT', 'SIGTERM'])
   process.once(signal, () => {
     stopLoops();
+    if (current?.exitCode === null) {
+      try {
+        process.kill(-current.pid, 'SIGTERM');
+      } catch {
+        /* already gone */
+      }
+    }
     process.exit(1);
   });
 
 /** One `npm test`, its output passed through; resolves with its exit code and summary line. */
 function testRun() {
   return new Promise((resolve, reject) => {
-    const child = spawn('npm', ['test'], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
+    const child = spawn('npm', ['test'], {
+      cwd: root,
+      stdio: ['ignore', 'pipe', 'inherit'],
+      detached: true,
+    });
+    current = child;
     let tail = '';
     child.stdout.on('data', (chunk) => {
       process.stdout.write(chunk);
