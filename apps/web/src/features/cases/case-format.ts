@@ -1,7 +1,6 @@
 // Words and small formats the case screens share: how a vehicle, a status, a time and a hazard
 // are written. No fault-tree code at run time, so the case list stays out of the walk's chunk.
 import { caseStatusLabels, type CaseStatus } from '@heatpath/contracts';
-import type { HazardKind } from '@heatpath/fault-tree';
 import type { BadgeTone } from '../../components/ui/badge';
 
 export interface VehicleLike {
@@ -59,14 +58,3 @@ const mileage = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
 export function formatMileage(value: number | null, unit: 'km' | 'mi'): string | null {
   return value === null ? null : `${mileage.format(value)} ${unit}`;
 }
-
-/** Each hazard named in a few words, leading its caution. */
-export const hazardLabels: Record<HazardKind, string> = {
-  'hot-pressurised-coolant': 'Hot coolant under pressure',
-  'hot-surface': 'Hot surfaces',
-  fan: 'Fan and belt can start',
-  glycol: 'Coolant is poisonous',
-  lifting: 'Raised vehicle',
-  'belt-drive': 'Timing-belt work',
-  'road-test': 'Road test',
-};

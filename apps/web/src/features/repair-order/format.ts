@@ -42,10 +42,3 @@ export function formatBytes(bytes: number): string {
     ? `${Math.max(1, Math.round(bytes / 1024))} KB`
     : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
 }
-
-/** A typed number, accepting a decimal comma; NaN for something that is not one. */
-export function readNumber(typed: string): number | undefined {
-  const text = typed.trim().replace(',', '.');
-  if (text === '') return undefined;
-  return /^-?\d+(\.\d+)?$/.test(text) ? Number(text) : Number.NaN;
-}

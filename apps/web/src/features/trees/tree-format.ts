@@ -1,19 +1,8 @@
-// Words for the tree screens: hazards, version statuses and verdicts, and how dates and typed
-// numbers are read. No fault-tree code, so the library screens load without mathjs; quantities
-// and units are in units-format.ts.
+// Words for the tree screens: version statuses and verdicts, and how dates are shown. No
+// fault-tree code, so the library screens load without mathjs; quantities and units are in
+// units-format.ts.
 import type { RegressionVerdict, TreeVersionInfo, TreeVersionStatus } from '@heatpath/contracts';
-import type { HazardKind } from '@heatpath/fault-tree';
 import type { BadgeTone } from '../../components/ui/badge';
-
-export const hazardLabels: Record<HazardKind, string> = {
-  'hot-pressurised-coolant': 'Hot coolant under pressure',
-  'hot-surface': 'Hot surfaces',
-  fan: 'Fan and belt can start',
-  glycol: 'Coolant is poisonous',
-  lifting: 'Raised vehicle',
-  'belt-drive': 'Timing-belt work',
-  'road-test': 'Road test',
-};
 
 export const statusWords: Record<TreeVersionStatus, string> = {
   draft: 'Draft',
@@ -68,14 +57,6 @@ export function formatWhen(iso: string | null): string {
 
 export function versionName(version: Pick<TreeVersionInfo, 'version' | 'status'>): string {
   return version.status === 'draft' ? `Draft v${version.version}` : `v${version.version}`;
-}
-
-/** A number as typed at the car: a decimal comma is accepted; null when the box is empty. */
-export function readNumber(text: string): number | null {
-  const trimmed = text.trim().replace(/^−/, '-').replace(',', '.');
-  if (trimmed === '') return null;
-  const value = Number(trimmed);
-  return Number.isFinite(value) ? value : Number.NaN;
 }
 
 export function problemCount(count: number): string {

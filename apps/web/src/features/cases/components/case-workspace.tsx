@@ -16,7 +16,7 @@ import { AuditTrail } from './audit-trail';
 import { CaseFacts } from './case-facts';
 import { CaseHeader } from './case-header';
 import { CaseNotes } from './case-notes';
-import { ComputedValues } from './computed-values';
+import { ComputedValues } from '../../../components/walk-step/computed-values';
 import { CurrentStep } from './current-step';
 import { FindingsEditor } from './findings-editor';
 import { FindingsView } from './findings-view';

@@ -4,14 +4,14 @@
 import type { CaseDetail, UnitPreferences } from '@heatpath/contracts';
 import type { NodeKind } from '@heatpath/fault-tree';
 import { Button } from '../../../components/ui/button';
+import { MeasurementForm } from '../../../components/walk-step/measurement-form';
+import { OutcomeSummary } from '../../../components/walk-step/outcome-summary';
+import { ProcedureAnswers } from '../../../components/walk-step/procedure-answers';
+import { QuestionAnswers } from '../../../components/walk-step/question-answers';
+import { StepCautions } from '../../../components/walk-step/step-cautions';
 import type { WalkModel } from '../case-tree';
 import type { WalkAnswers } from '../hooks/use-walk-answers';
 import { AnswerStatus } from './answer-status';
-import { MeasurementForm } from './measurement-form';
-import { OutcomeSummary } from './outcome-summary';
-import { ProcedureAnswers } from './procedure-answers';
-import { QuestionAnswers } from './question-answers';
-import { StepCautions } from './step-cautions';
 import { StepEvidence } from './step-evidence';
 
 const kindLabels: Record<NodeKind, string> = {

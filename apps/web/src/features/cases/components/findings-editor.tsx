@@ -15,7 +15,7 @@ import { isApiError } from '../../../lib/api-client';
 import { useMarkDiagnosed } from '../api/mark-diagnosed';
 import { useSaveFindings } from '../api/save-findings';
 import { formatDateTime } from '../case-format';
-import { readNumber } from '../units';
+import { readOptionalNumber } from '../../../lib/read-number';
 
 function toValues(findings: Findings): FindingsFormValues {
   return {
@@ -33,11 +33,6 @@ function toValues(findings: Findings): FindingsFormValues {
     })),
     followUps: findings.followUps.map((text) => ({ text })),
   };
-}
-
-function toNumber(text: string): number | undefined {
-  const value = readNumber(text);
-  return value === null || Number.isNaN(value) ? undefined : value;
 }
 
 interface FindingsEditorProps {
@@ -71,12 +66,12 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
       correction: values.correction,
       parts: values.parts.map((part) => ({
         description: part.description,
-        quantity: toNumber(part.quantity),
+        quantity: readOptionalNumber(part.quantity),
         partNumber: part.partNumber.trim() || null,
       })),
       labour: values.labour.map((line) => ({
         operation: line.operation,
-        hours: toNumber(line.hours),
+        hours: readOptionalNumber(line.hours),
       })),
       followUps: values.followUps.map((followUp) => followUp.text),
     };

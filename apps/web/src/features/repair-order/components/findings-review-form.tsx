@@ -18,8 +18,8 @@ import { Button } from '../../../components/ui/button';
 import { TextAreaField } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { useSaveFindingsRevision } from '../api/save-findings-revision';
-import { readNumber } from '../format';
 import { PhotoPicker } from './photo-picker';
+import { readNumber } from '../../../lib/read-number';
 
 function toValues(f: FindingsRevision): FindingsFormValues {
   return {
@@ -68,10 +68,13 @@ export function FindingsReviewForm({
       correction: values.correction,
       parts: values.parts.map((p) => ({
         description: p.description,
-        quantity: readNumber(p.quantity),
+        quantity: readNumber(p.quantity) ?? undefined,
         partNumber: p.partNumber.trim() || null,
       })),
-      labour: values.labour.map((l) => ({ operation: l.operation, hours: readNumber(l.hours) })),
+      labour: values.labour.map((l) => ({
+        operation: l.operation,
+        hours: readNumber(l.hours) ?? undefined,
+      })),
       followUps: values.followUps.map((f) => f.text),
       photoIds: values.photoIds,
     };

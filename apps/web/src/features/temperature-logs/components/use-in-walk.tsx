@@ -9,7 +9,6 @@ import {
   formatNumber,
   formatWithUnit,
   fromCanonical,
-  quantityInfo,
   toCanonical,
   unitSymbol,
   type MeasurementInput,
@@ -23,6 +22,9 @@ import { useId, useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
+import { allowedRange } from '../../../components/walk-step/measurement-form';
+import { readNumber } from '../../../lib/read-number';
+import { preferredUnit } from '../../../lib/reading-units';
 
 export interface WalkStep {
   nodeId: string;
@@ -50,21 +52,6 @@ interface UseInWalkProps {
   onRetry: () => void;
 }
 
-function boxUnit(quantity: Quantity, preferences: UnitPreferences): UnitCode {
-  const info = quantityInfo[quantity];
-  const wanted: UnitCode | null =
-    quantity === 'temperature'
-      ? preferences.temperature === 'F'
-        ? 'degF'
-        : 'degC'
-      : quantity === 'temperatureDelta'
-        ? preferences.temperature === 'F'
-          ? 'degF'
-          : 'K'
-        : null;
-  return wanted && info.entryUnits.includes(wanted) ? wanted : info.canonical;
-}
-
 /** Candidates that can fill a box: the ones named for it first, then any of the same quantity. */
 export function fittingCandidates(
   input: MeasurementInput,
@@ -74,12 +61,6 @@ export function fittingCandidates(
     .filter((c) => c.quantity === input.quantity)
     .map((candidate) => ({ candidate, suggested: candidate.matchesInputs.includes(input.name) }))
     .sort((a, b) => Number(b.suggested) - Number(a.suggested));
-}
-
-function readNumber(text: string): number | null {
-  const t = text.trim().replace('−', '-').replace(',', '.');
-  if (t === '') return null;
-  return /^[-+]?(\d+(\.\d*)?|\.\d+)$/.test(t) ? Number(t) : Number.NaN;
 }
 
 function shown(value: number, unit: UnitCode, quantity: Quantity): string {
@@ -119,8 +100,8 @@ export function UseInWalk(props: UseInWalkProps) {
   } else {
     body = (
       <StepReadingsForm
-        // A new step, or the other unit, starts afresh.
-        key={`${step.nodeId}:${step.position}:${props.preferences.temperature}`}
+        // A new step, or other units, start afresh.
+        key={`${step.nodeId}:${step.position}:${Object.values(props.preferences).join(':')}`}
         {...props}
         step={step}
       />
@@ -179,7 +160,7 @@ function StepReadingsForm({
     const found: Record<string, string> = {};
     const readings: Record<string, Reading> = {};
     for (const input of step.inputs) {
-      const unit = boxUnit(input.quantity, preferences);
+      const unit = preferredUnit(input.quantity, preferences);
       const value = readNumber(boxes[input.name]?.text ?? '');
       if (value === null) {
         found[input.name] = `Enter “${input.label}”.`;
@@ -188,9 +169,7 @@ function StepReadingsForm({
       } else {
         const canonical = toCanonical(value, unit, input.quantity);
         if (canonical < input.range.min || canonical > input.range.max) {
-          found[input.name] =
-            `Allowed ${shown(input.range.min, unit, input.quantity)} to ` +
-            `${formatWithUnit(fromCanonical(input.range.max, unit, input.quantity), unit)}.`;
+          found[input.name] = `${allowedRange(input, unit)}.`;
         }
         readings[input.name] = { value, unit };
       }
@@ -230,7 +209,7 @@ function StepReadingsForm({
         The case stands at <span className="font-semibold">“{step.title}”</span>.
       </p>
       {step.inputs.map((input) => {
-        const unit = boxUnit(input.quantity, preferences);
+        const unit = preferredUnit(input.quantity, preferences);
         const box = boxes[input.name] ?? { text: '', from: null };
         const fitting = fittingCandidates(input, candidates);
         const refused = save.status === 'refused' ? save.fields[input.name] : undefined;
@@ -239,7 +218,7 @@ function StepReadingsForm({
             <div className="grid gap-3 md:grid-cols-2 md:items-start">
               <TextField
                 label={input.label}
-                labelAside={`Allowed ${shown(input.range.min, unit, input.quantity)} to ${formatWithUnit(fromCanonical(input.range.max, unit, input.quantity), unit)}`}
+                labelAside={allowedRange(input, unit)}
                 value={box.text}
                 disabled={busy}
                 inputMode={input.range.min < 0 ? 'text' : 'decimal'}

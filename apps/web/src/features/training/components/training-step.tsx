@@ -5,8 +5,8 @@
 import type { TrainingAnswer, TrainingPhoto, TrainingStep } from '@heatpath/contracts';
 import type { ReactNode } from 'react';
 import { SafetyNote } from '../../../components/ui/alert';
-import { hazardLabels } from '../../cases/case-format';
-import { StepCautions } from '../../cases/components/step-cautions';
+import { StepCautions } from '../../../components/walk-step/step-cautions';
+import { hazardLabels } from '../../../lib/hazard-labels';
 import { stepKindLabels } from '../training-format';
 
 function AnswerGiven({ answer, Sub }: { answer: TrainingAnswer; Sub: 'h3' | 'h4' }) {

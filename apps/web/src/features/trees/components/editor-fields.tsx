@@ -7,7 +7,8 @@ import { memo, useId, useState, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FieldError, SelectField, TextField } from '../../../components/ui/field';
 import { hazardKinds, pathKey } from '../draft-model';
-import { hazardLabels, readNumber } from '../tree-format';
+import { readNumber } from '../../../lib/read-number';
+import { hazardLabels } from '../../../lib/hazard-labels';
 
 export type Path = readonly (string | number)[];
 

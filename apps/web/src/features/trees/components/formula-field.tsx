@@ -12,7 +12,7 @@ import {
 import { useId, useMemo } from 'react';
 import { FieldError, TextField } from '../../../components/ui/field';
 import { pathKey } from '../draft-model';
-import { readNumber } from '../tree-format';
+import { readNumber } from '../../../lib/read-number';
 import { canonicalUnit, quantityLabels, unitLabel } from '../units-format';
 import type { ErrorAt, Path } from './editor-fields';
 

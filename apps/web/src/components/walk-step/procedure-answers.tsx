@@ -1,23 +1,26 @@
 // A procedure's two answers, "Done" and "Could not do", with an optional note that is stored on
-// the step with the answer.
+// the step with the answer (where the feature keeps notes). The feature decides what an answer does.
 import type { ProcedureNode, ProcedureResult, WalkEvent } from '@heatpath/fault-tree';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { TextAreaField } from '../../../components/ui/field';
+import { Button } from '../ui/button';
+import { TextAreaField } from '../ui/field';
 
 interface ProcedureAnswersProps {
   node: ProcedureNode & { id: string };
   position: number;
-  disabled: boolean;
-  pendingResult: ProcedureResult | null;
+  disabled?: boolean;
+  pendingResult?: ProcedureResult | null;
+  /** Offer "Add a note"; off where nothing keeps it (Try it). */
+  withNote?: boolean;
   onAnswer: (event: WalkEvent, label: string, note?: string) => void;
 }
 
 export function ProcedureAnswers({
   node,
   position,
-  disabled,
-  pendingResult,
+  disabled = false,
+  pendingResult = null,
+  withNote = true,
   onAnswer,
 }: ProcedureAnswersProps) {
   const [note, setNote] = useState('');
@@ -52,7 +55,7 @@ export function ProcedureAnswers({
           </Button>
         ) : null}
       </div>
-      {writing ? (
+      {!withNote ? null : writing ? (
         <TextAreaField
           label="Note on this step (optional)"
           hint="What you found, or why it could not be done. Saved with your answer."

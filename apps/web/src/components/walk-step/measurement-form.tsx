@@ -1,38 +1,53 @@
 // A measurement step: one box per reading with its own unit, checked and worked out as it is
 // typed by the same fault-tree code the server runs (range problems under the box, computed
 // values, and the step it would lead to). The readings are sent as typed, with their units; the
-// server converts them, so a reading in °F is stored as entered and in °C.
+// server converts them, so a reading in °F is stored as entered and in °C. The feature decides
+// what a saved answer does: the case page sends it, Try it applies it in the browser.
 import type { UnitPreferences } from '@heatpath/contracts';
 import {
   formatNumber,
   formatWithUnit,
   fromCanonical,
   previewReadings,
+  type CompiledTree,
   type MeasurementInput,
   type MeasurementNode,
   type Reading,
   type UnitCode,
   type WalkEvent,
+  type WalkSnapshot,
 } from '@heatpath/fault-tree';
 import { useMemo, useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
-import type { WalkModel } from '../case-tree';
-import { computedDisplay, preferredUnit, readNumber, unitOptions, unitsAsEntered } from '../units';
+import { readNumber } from '../../lib/read-number';
+import {
+  computedDisplay,
+  preferredUnit,
+  unitOptions,
+  unitsAsEntered,
+} from '../../lib/reading-units';
+import { Button } from '../ui/button';
+import { TextField } from '../ui/field';
+
+/** The compiled tree and the walk so far, from which readings are previewed as they are typed. */
+export interface WalkModel {
+  tree: CompiledTree;
+  snapshot: WalkSnapshot;
+}
 
 interface MeasurementFormProps {
   node: MeasurementNode & { id: string };
   position: number;
   model: WalkModel | null;
-  preferences: UnitPreferences;
-  disabled: boolean;
+  /** The person's units; without them (Try it) boxes start in the unit the tree names. */
+  preferences?: UnitPreferences;
+  disabled?: boolean;
   /** What the server said was wrong with each reading of the last attempt. */
-  refusedFields: Readonly<Record<string, string>>;
+  refusedFields?: Readonly<Record<string, string>>;
   onAnswer: (event: WalkEvent, label: string) => void;
 }
 
 /** "Allowed 32 to 302 °F": the input's range in the unit chosen for the box. */
-function allowedRange(input: MeasurementInput, unit: UnitCode): string {
+export function allowedRange(input: MeasurementInput, unit: UnitCode): string {
   const min = fromCanonical(input.range.min, unit, input.quantity);
   const max = fromCanonical(input.range.max, unit, input.quantity);
   return `Allowed ${withMinus(formatNumber(min))} to ${withMinus(formatWithUnit(max, unit))}`;
@@ -47,14 +62,17 @@ export function MeasurementForm({
   position,
   model,
   preferences,
-  disabled,
-  refusedFields,
+  disabled = false,
+  refusedFields = {},
   onAnswer,
 }: MeasurementFormProps) {
   const [typed, setTyped] = useState<Record<string, string>>({});
   const [units, setUnits] = useState<Record<string, UnitCode>>(() =>
     Object.fromEntries(
-      node.inputs.map((input) => [input.name, preferredUnit(input.quantity, preferences)]),
+      node.inputs.map((input) => [
+        input.name,
+        preferences ? preferredUnit(input.quantity, preferences) : input.unit,
+      ]),
     ),
   );
   const [tried, setTried] = useState(false);
@@ -83,7 +101,7 @@ export function MeasurementForm({
         .map((entry) => entry.value.name)
     : [];
   const liveValues = (preview?.computed ?? []).filter((view) => relevant.includes(view.name));
-  const shownUnits = unitsAsEntered(preferences, Object.values(units));
+  const shownUnits = preferences ? unitsAsEntered(preferences, Object.values(units)) : null;
   const next = preview?.toNodeId ? model?.tree.nodes.get(preview.toNodeId) : undefined;
 
   const problemFor = (input: MeasurementInput): string | undefined => {
@@ -234,7 +252,7 @@ export function MeasurementForm({
               >
                 <dt>{view.label}</dt>
                 <dd className="text-xl font-bold">
-                  {computedDisplay(view, shownUnits) ?? (
+                  {(shownUnits ? computedDisplay(view, shownUnits) : view.display) ?? (
                     <span className="text-base font-normal text-ink-muted">
                       waiting for readings
                     </span>

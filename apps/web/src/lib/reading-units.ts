@@ -1,6 +1,7 @@
-// Which unit a reading box starts in, how a typed number is read, and how a computed value is
-// shown in the person's own units. Conversions are the fault-tree package's (mathjs), never done
-// by hand here. Part of the case page's lazily loaded chunk.
+// The person's preferred units applied to readings: which unit a reading box starts in (the one
+// rule for the case page, Try it and the temperature log's "use in the walk"), the units a box
+// offers, and how a computed value is shown in the person's own units. Conversions are the
+// fault-tree package's (mathjs), never done by hand here.
 import type { UnitPreferences } from '@heatpath/contracts';
 import {
   formatComputed,
@@ -39,19 +40,6 @@ export function unitOptions(quantity: Quantity): { value: UnitCode; label: strin
     value: unit,
     label: unitSymbol(unit) || 'number',
   }));
-}
-
-const plainNumber = /^[-+−]?(?:\d+(?:[.,]\d*)?|[.,]\d+)$/;
-
-/**
- * A typed reading as a number: null while the box is empty, NaN when it is not a number.
- * A decimal comma and a true minus sign are read as many phones type them.
- */
-export function readNumber(typed: string): number | null {
-  const text = typed.trim();
-  if (text === '') return null;
-  if (!plainNumber.test(text)) return Number.NaN;
-  return Number(text.replace(',', '.').replace('−', '-'));
 }
 
 /** "97 °F (36.1 °C)" in the person's unit first, or just the canonical figure. */

@@ -1,22 +1,23 @@
 // A question's choices as large buttons, one tap each; the button is named by the choice alone,
-// with its hint read as a description.
+// with its hint read as a description. The feature decides what an answer does (the case page
+// sends it; Try it applies it in the browser).
 import type { QuestionNode, WalkEvent } from '@heatpath/fault-tree';
 import { useId } from 'react';
 
 interface QuestionAnswersProps {
   node: QuestionNode & { id: string };
   position: number;
-  disabled: boolean;
+  disabled?: boolean;
   /** The choice waiting to be stored, marked while it is sent. */
-  pendingChoiceId: string | null;
+  pendingChoiceId?: string | null;
   onAnswer: (event: WalkEvent, label: string) => void;
 }
 
 export function QuestionAnswers({
   node,
   position,
-  disabled,
-  pendingChoiceId,
+  disabled = false,
+  pendingChoiceId = null,
   onAnswer,
 }: QuestionAnswersProps) {
   const baseId = useId();

@@ -2,7 +2,7 @@
 // beside it. Values still waiting for readings are not listed.
 import type { UnitPreferences } from '@heatpath/contracts';
 import type { WalkSummary } from '@heatpath/fault-tree';
-import { computedDisplay } from '../units';
+import { computedDisplay } from '../../lib/reading-units';
 
 export function ComputedValues({
   walk,
