@@ -8,8 +8,8 @@ import { addCaseNote } from '../../services/cases/add-case-note';
 import { createCase } from '../../services/cases/create-case';
 import { markDiagnosed } from '../../services/cases/mark-diagnosed';
 import { submitWalkEvent } from '../../services/cases/submit-walk-event';
-import { saveCourse } from '../../services/training/courses';
-import { markTrainingCase } from '../../services/training/manage-training-cases';
+import { saveCourse } from '../../services/training/save-course';
+import { markTrainingCase } from '../../services/training/mark-training-case';
 import { confirmedLeakPath, overheatingTreeKey, stuckShroudPath } from './demo-walks';
 
 const actorOf = (user: User): Actor => ({

@@ -6,27 +6,23 @@ import type { FileStore } from '../../lib/storage/file-store';
 import { actorOf } from '../../middlewares/authenticate';
 import { requirePermission } from '../../middlewares/require-permission';
 import { presentTrainingTree } from '../../presenters/training.presenter';
-import { getCasebook, getReplay } from '../../services/training/casebook';
-import { listCourses, saveCourse } from '../../services/training/courses';
 import { findTrainingCase } from '../../services/training/find-training-case';
 import { findTrainingPhoto } from '../../services/training/find-training-photo';
-import {
-  listCandidates,
-  listTrainingCases,
-  markTrainingCase,
-  updateTrainingCase,
-} from '../../services/training/manage-training-cases';
-import {
-  apprenticeProgress,
-  listProgress,
-  myProgress,
-  signOffCourse,
-} from '../../services/training/progress';
-import {
-  getAttempt,
-  startAttempt,
-  submitPrediction,
-} from '../../services/training/training-attempts';
+import { getApprenticeProgress } from '../../services/training/get-apprentice-progress';
+import { getCasebook } from '../../services/training/get-casebook';
+import { getMyProgress } from '../../services/training/get-my-progress';
+import { getTrainingAttempt } from '../../services/training/get-training-attempt';
+import { getTrainingReplay } from '../../services/training/get-training-replay';
+import { listCourses } from '../../services/training/list-courses';
+import { listProgress } from '../../services/training/list-progress';
+import { listTrainingCandidates } from '../../services/training/list-training-candidates';
+import { listTrainingCases } from '../../services/training/list-training-cases';
+import { markTrainingCase } from '../../services/training/mark-training-case';
+import { saveCourse } from '../../services/training/save-course';
+import { signOffCourse } from '../../services/training/sign-off-course';
+import { startTrainingAttempt } from '../../services/training/start-training-attempt';
+import { submitPrediction } from '../../services/training/submit-prediction';
+import { updateTrainingCase } from '../../services/training/update-training-case';
 import { typedRoute } from '../typed-route';
 import {
   apprenticeParamsSchema,
@@ -50,11 +46,11 @@ export function trainingRouter(deps: { store: FileStore }) {
 
   // ---- The lead ----
   router.get('/candidates', manage, async (_req, res) => {
-    res.json({ cases: await listCandidates(actorOf(res)) });
+    res.json({ cases: await listTrainingCandidates({ actor: actorOf(res) }) });
   });
 
   router.get('/cases', manage, async (_req, res) => {
-    res.json({ trainingCases: await listTrainingCases(actorOf(res)) });
+    res.json({ trainingCases: await listTrainingCases({ actor: actorOf(res) }) });
   });
 
   router.post(
@@ -77,7 +73,7 @@ export function trainingRouter(deps: { store: FileStore }) {
   );
 
   router.get('/courses', manage, async (_req, res) => {
-    res.json({ courses: await listCourses(actorOf(res)) });
+    res.json({ courses: await listCourses({ actor: actorOf(res) }) });
   });
 
   router.post(
@@ -112,31 +108,31 @@ export function trainingRouter(deps: { store: FileStore }) {
   );
 
   router.get('/progress', manage, async (_req, res) => {
-    res.json({ apprentices: await listProgress(actorOf(res)) });
+    res.json({ apprentices: await listProgress({ actor: actorOf(res) }) });
   });
 
   router.get(
     '/progress/:apprenticeId',
     manage,
     typedRoute({ params: apprenticeParamsSchema }, async ({ params: { apprenticeId } }, res) => {
-      res.json(await apprenticeProgress({ actor: actorOf(res), apprenticeId }));
+      res.json(await getApprenticeProgress({ actor: actorOf(res), apprenticeId }));
     }),
   );
 
   // ---- Learners ----
   router.get('/casebook', learn, async (_req, res) => {
-    res.json(await getCasebook(actorOf(res)));
+    res.json(await getCasebook({ actor: actorOf(res) }));
   });
 
   router.get('/me/progress', learn, async (_req, res) => {
-    res.json(await myProgress(actorOf(res)));
+    res.json(await getMyProgress({ actor: actorOf(res) }));
   });
 
   router.get(
     '/cases/:trainingCaseId/replay',
     learn,
     typedRoute(trainingCase, async ({ params: { trainingCaseId } }, res) => {
-      res.json(await getReplay({ actor: actorOf(res), trainingCaseId }));
+      res.json(await getTrainingReplay({ actor: actorOf(res), trainingCaseId }));
     }),
   );
 
@@ -175,7 +171,7 @@ export function trainingRouter(deps: { store: FileStore }) {
     '/cases/:trainingCaseId/attempts',
     learn,
     typedRoute(trainingCase, async ({ params: { trainingCaseId } }, res) => {
-      res.status(201).json(await startAttempt({ actor: actorOf(res), trainingCaseId }));
+      res.status(201).json(await startTrainingAttempt({ actor: actorOf(res), trainingCaseId }));
     }),
   );
 
@@ -183,7 +179,7 @@ export function trainingRouter(deps: { store: FileStore }) {
     '/attempts/:attemptId',
     learn,
     typedRoute(attempt, async ({ params: { attemptId } }, res) => {
-      res.json(await getAttempt({ actor: actorOf(res), attemptId }));
+      res.json(await getTrainingAttempt({ actor: actorOf(res), attemptId }));
     }),
   );
 

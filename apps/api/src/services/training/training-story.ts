@@ -178,8 +178,3 @@ export async function trainingStoryOf(training: LoadedTrainingCase): Promise<Tra
       : null,
   };
 }
-
-/** The step as shown before its prediction: where it led, and why, stay hidden. */
-export function concealed(step: TrainingStep): TrainingStep {
-  return { ...step, routeLabel: null, next: null, why: null };
-}

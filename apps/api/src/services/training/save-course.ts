@@ -2,53 +2,12 @@
 // course replaces its list in one transaction, so the order is never half written.
 import { Op } from 'sequelize';
 import type { CourseRequest, TrainingCourse as TrainingCourseView } from '@heatpath/contracts';
-import {
-  DiagnosticCase,
-  TrainingCase,
-  TrainingCourse,
-  TrainingCourseItem,
-  User,
-} from '../../db/models/index';
+import { TrainingCase, TrainingCourse, TrainingCourseItem, User } from '../../db/models/index';
+import { withTransaction } from '../../db/with-transaction';
 import { AppError, notFound } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
-import { withTransaction } from '../../db/with-transaction';
-
-async function presentCourse(actor: Actor, course: TrainingCourse): Promise<TrainingCourseView> {
-  const items = await TrainingCourseItem.findAll({
-    where: { courseId: course.id },
-    include: [
-      {
-        model: TrainingCase,
-        as: 'trainingCase',
-        where: { workshopId: actor.workshopId },
-        include: [{ model: DiagnosticCase, as: 'case', attributes: ['symptom'] }],
-      },
-    ],
-    order: [['position', 'ASC']],
-  });
-  const apprentice = course.apprenticeId
-    ? await User.findOne({
-        where: { id: course.apprenticeId, workshopId: actor.workshopId },
-        attributes: ['id', 'name'],
-      })
-    : null;
-  return {
-    id: course.id,
-    title: course.title,
-    description: course.description,
-    apprentice: apprentice ? { id: apprentice.id, name: apprentice.name } : null,
-    items: items.map((item) => ({
-      trainingCaseId: item.trainingCaseId,
-      symptom:
-        (item.trainingCase as (TrainingCase & { case?: DiagnosticCase }) | undefined)?.case
-          ?.symptom ?? '',
-      difficulty: item.trainingCase?.difficulty ?? 'starter',
-    })),
-    createdAt: course.createdAt.toISOString(),
-    updatedAt: course.updatedAt.toISOString(),
-  };
-}
+import { loadCourseView } from './course-view';
 
 async function checkRequest(actor: Actor, request: CourseRequest) {
   if (request.apprenticeId) {
@@ -67,15 +26,6 @@ async function checkRequest(actor: Actor, request: CourseRequest) {
     throw new AppError('validation_failed', 'Some of those cases are not in the casebook.', {
       trainingCaseIds: 'Choose training cases of this workshop.',
     });
-}
-
-export async function listCourses(actor: Actor): Promise<TrainingCourseView[]> {
-  assertCan(actor, 'training.manage');
-  const courses = await TrainingCourse.findAll({
-    where: { workshopId: actor.workshopId },
-    order: [['createdAt', 'ASC']],
-  });
-  return Promise.all(courses.map((course) => presentCourse(actor, course)));
 }
 
 export async function saveCourse(options: {
@@ -123,5 +73,5 @@ export async function saveCourse(options: {
     );
     return saved;
   });
-  return presentCourse(actor, course);
+  return loadCourseView({ actor, course });
 }

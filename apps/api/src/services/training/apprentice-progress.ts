@@ -1,13 +1,8 @@
 // Apprentices' progress as the lead reads it (and each apprentice reads their own): cases
-// reviewed, attempts, the average of their best scores, the steps they most often got wrong,
-// each course's completion, and signing a course off.
-import { Op, UniqueConstraintError } from 'sequelize';
-import type {
-  ApprenticeProgress,
-  ApprenticeProgressDetail,
-  SignOffRequest,
-  WeakSpot,
-} from '@heatpath/contracts';
+// reviewed, attempts, the average of their best scores, the steps they most often got wrong and
+// each course's completion.
+import { Op } from 'sequelize';
+import type { ApprenticeProgressDetail, WeakSpot } from '@heatpath/contracts';
 import {
   DiagnosticCase,
   TrainingAttempt,
@@ -18,8 +13,6 @@ import {
   TrainingSignOff,
   User,
 } from '../../db/models/index';
-import { AppError, conflict, notFound } from '../../errors';
-import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 
 const weakSpotCount = 3;
@@ -43,7 +36,12 @@ function weakSpotsOf(predictions: readonly TrainingPrediction[]): WeakSpot[] {
     .slice(0, weakSpotCount);
 }
 
-async function progressOf(actor: Actor, apprentice: User): Promise<ApprenticeProgressDetail> {
+/** One apprentice's progress: attempts, best scores, weak spots and each course's completion. */
+export async function loadApprenticeProgress(options: {
+  actor: Actor;
+  apprentice: User;
+}): Promise<ApprenticeProgressDetail> {
+  const { actor, apprentice } = options;
   const attempts = await TrainingAttempt.findAll({
     where: { workshopId: actor.workshopId, apprenticeId: apprentice.id },
     include: [
@@ -118,80 +116,4 @@ async function progressOf(actor: Actor, apprentice: User): Promise<ApprenticePro
       finishedAt: a.finishedAt?.toISOString() ?? null,
     })),
   };
-}
-
-async function findApprentice(actor: Actor, apprenticeId: string): Promise<User> {
-  const apprentice = await User.findOne({
-    where: { id: apprenticeId, workshopId: actor.workshopId, role: 'apprentice' },
-  });
-  if (!apprentice) throw notFound('That apprentice');
-  return apprentice;
-}
-
-export async function listProgress(actor: Actor): Promise<ApprenticeProgress[]> {
-  assertCan(actor, 'training.manage');
-  const apprentices = await User.findAll({
-    where: { workshopId: actor.workshopId, role: 'apprentice', active: true },
-    order: [['name', 'ASC']],
-  });
-  const all = await Promise.all(apprentices.map((a) => progressOf(actor, a)));
-  return all.map(({ history: _history, ...progress }) => progress);
-}
-
-export async function apprenticeProgress(options: {
-  actor: Actor;
-  apprenticeId: string;
-}): Promise<ApprenticeProgressDetail> {
-  assertCan(options.actor, 'training.manage');
-  return progressOf(options.actor, await findApprentice(options.actor, options.apprenticeId));
-}
-
-/** The caller's own progress: an apprentice never reads another's. */
-export async function myProgress(actor: Actor): Promise<ApprenticeProgressDetail> {
-  assertCan(actor, 'training.learn');
-  const me = await User.findOne({ where: { id: actor.userId, workshopId: actor.workshopId } });
-  if (!me) throw notFound('Your account');
-  return progressOf(actor, me);
-}
-
-export async function signOffCourse(options: {
-  actor: Actor;
-  courseId: string;
-  request: SignOffRequest;
-}) {
-  const { actor, courseId, request } = options;
-  assertCan(actor, 'training.manage');
-  const course = await TrainingCourse.findOne({
-    where: { id: courseId, workshopId: actor.workshopId },
-  });
-  if (!course) throw notFound('That course');
-  const apprentice = await User.findOne({
-    where: { id: request.apprenticeId, workshopId: actor.workshopId },
-  });
-  if (!apprentice) throw notFound('That apprentice');
-  if (apprentice.role !== 'apprentice')
-    throw new AppError('validation_failed', `${apprentice.name} is not an apprentice.`, {
-      apprenticeId: 'Choose an apprentice.',
-    });
-  if (course.apprenticeId !== null && course.apprenticeId !== apprentice.id)
-    throw conflict(`“${course.title}” is a course for another apprentice.`);
-  try {
-    const signed = await TrainingSignOff.create({
-      courseId: course.id,
-      apprenticeId: apprentice.id,
-      workshopId: actor.workshopId,
-      signedBy: actor.userId,
-      note: request.note ?? null,
-    });
-    const signer = await User.findByPk(actor.userId, { attributes: ['id', 'name'] });
-    return {
-      signedAt: signed.signedAt.toISOString(),
-      signedBy: { id: actor.userId, name: signer?.name ?? 'Unknown' },
-      note: signed.note,
-    };
-  } catch (error) {
-    if (error instanceof UniqueConstraintError)
-      throw conflict(`${apprentice.name} is already signed off for “${course.title}”.`);
-    throw error;
-  }
 }
