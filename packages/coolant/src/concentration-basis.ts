@@ -19,7 +19,7 @@ export function convertBasis(options: ConvertBasisOptions): number | null {
   const glycol = readGlycol(options.glycol);
   const from = readBasis(options.from, 'from');
   const to = readBasis(options.to, 'to');
-  const percent = toCanonical(options.percent, 'percent', 'percent');
+  const percent = toCanonical(options.percent, 'percentage', 'percent');
   return convertPercent(glycol, percent, from, to);
 }
 

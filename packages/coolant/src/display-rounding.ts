@@ -3,7 +3,8 @@
 // source and the readings behind it support — showing −37.17 °C for a mix a refractometer reads
 // to ±1 K claims a precision nobody has.
 import { fromCanonical, formatQuantity } from './units.js';
-import type { DisplayUnit, Quantity } from './units.js';
+import type { DisplayUnit } from './units.js';
+import type { Quantity } from './units/quantities.js';
 
 interface QuantityPrecision<Q extends Quantity> {
   readonly quantity: Q;
@@ -25,7 +26,7 @@ export const QUANTITY_FIGURES = {
     why: 'IAPWS-IF97 is exact, but a cap opens within about ±0.1 bar of its rating, ±2 K of boiling point.',
   },
   boilingMargin: {
-    quantity: 'temperatureDifference',
+    quantity: 'temperatureDelta',
     decimals: 0,
     why: 'A difference from a boiling point shown to 1 K cannot be finer than 1 K.',
   },
@@ -35,7 +36,7 @@ export const QUANTITY_FIGURES = {
     why: 'Readings typed by the person, or their mean; shown as read.',
   },
   temperatureDifference: {
-    quantity: 'temperatureDifference',
+    quantity: 'temperatureDelta',
     decimals: 1,
     why: 'The difference of two typed readings; shown as read.',
   },
@@ -60,7 +61,7 @@ export const QUANTITY_FIGURES = {
     why: 'Workshop flow meters read to a few per cent.',
   },
   concentration: {
-    quantity: 'percent',
+    quantity: 'percentage',
     decimals: 0,
     why: 'A ±1 K refractometer reading is about ±1 vol % near 50 %.',
   },
@@ -92,7 +93,7 @@ function decimalsIn<Q extends Quantity>(
   decimals: number,
   unit: DisplayUnit<Q>,
 ): number {
-  if (quantity === 'percent') return decimals;
+  if (quantity === 'percentage' || quantity === 'number') return decimals;
   // The canonical step expressed in the display unit (°C → °F: 1 K is 1.8 °F).
   const step = 10 ** -decimals;
   const shownStep = Math.abs(

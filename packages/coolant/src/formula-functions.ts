@@ -16,7 +16,7 @@ function numberArgument(value: unknown, field: string): number {
 }
 
 function freezeByVolume(glycol: Glycol, volPercent: unknown, field: string): number {
-  const percent = toCanonical(numberArgument(volPercent, field), 'percent', field);
+  const percent = toCanonical(numberArgument(volPercent, field), 'percentage', field);
   const result = freezePointOf(glycol, percent, 'volume');
   if (result.celsius === null) {
     throw new CoolantInputError(field, result.warnings[0]?.message ?? 'No freezing point here.');

@@ -40,7 +40,7 @@ export function overConcentratedWarning(glycol: Glycol): CoolantWarning {
 export function freezePoint(options: FreezePointOptions): FreezePointResult {
   const glycol = readGlycol(options.glycol);
   const basis = readBasis(options.basis);
-  const percent = toCanonical(options.percent, 'percent', 'percent');
+  const percent = toCanonical(options.percent, 'percentage', 'percent');
   return freezePointOf(glycol, percent, basis);
 }
 

@@ -68,7 +68,7 @@ function readTemperature(
 export function heatFlow(options: HeatFlowOptions): HeatFlowResult {
   const glycol = readGlycol(options.glycol);
   const basis = readBasis(options.basis);
-  const percent = toCanonical(options.percent, 'percent', 'percent');
+  const percent = toCanonical(options.percent, 'percentage', 'percent');
   const flow = toCanonical(options.litresPerMinute, 'volumeFlow', 'litresPerMinute');
   if (flow > HEAT_FLOW_LIMITS.maxLitresPerMinute) {
     throw new CoolantInputError(

@@ -10,7 +10,24 @@ export {
   fromCanonical,
   toCanonical,
 } from './units.js';
-export type { DisplayUnit, FormatOptions, Quantity, QuantityInput } from './units.js';
+export type { DisplayUnit, FormatOptions, QuantityInput } from './units.js';
+export {
+  acceptsUnit,
+  canonicalUnitOf,
+  quantities,
+  quantityInfo,
+  unitCodes,
+  unitSymbol,
+} from './units/quantities.js';
+export type { Quantity, QuantityInfo, UnitCode } from './units/quantities.js';
+export {
+  applyMap,
+  convertDifference,
+  convertUnit,
+  IDENTITY_MAP,
+  linearMap,
+} from './units/unit-math.js';
+export type { LinearMap } from './units/unit-math.js';
 export type { Basis, FreezeTableRow, Glycol } from './glycol-tables.js';
 export { ETHYLENE_GLYCOL_FREEZE_TABLE, PROPYLENE_GLYCOL_FREEZE_TABLE } from './glycol-tables.js';
 export { convertBasis } from './concentration-basis.js';

@@ -65,15 +65,15 @@ export function mixAdjustment(options: MixAdjustmentOptions): MixAdjustmentResul
       `${system.toPrecision(3)} L is more coolant than any road vehicle holds (cars about 5–15 L, heavy trucks and coaches up to about 100–150 L); check the capacity in the maker's data and the unit.`,
     );
   }
-  const current = toCanonical(options.currentPercent, 'percent', 'currentPercent');
-  const target = toCanonical(options.targetPercent, 'percent', 'targetPercent');
+  const current = toCanonical(options.currentPercent, 'percentage', 'currentPercent');
+  const target = toCanonical(options.targetPercent, 'percentage', 'targetPercent');
   const strengthening = target > current;
   const add =
     options.addPercent === undefined
       ? strengthening
         ? 100
         : 0
-      : toCanonical(options.addPercent, 'percent', 'addPercent');
+      : toCanonical(options.addPercent, 'percentage', 'addPercent');
 
   if (target === current) {
     return result(glycol, system, current, add, 0, target);

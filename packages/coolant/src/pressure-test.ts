@@ -103,7 +103,7 @@ function readInputs(options: PressureTestOptions): Readings {
   const rating = checkCapRating(toCanonical(options.capRatingBar, 'pressure', 'capRatingBar'));
   const start = toCanonical(options.startBar, 'pressure', 'startBar');
   const end = toCanonical(options.endBar, 'pressure', 'endBar');
-  const minutes = toCanonical(options.minutes, 'duration', 'minutes');
+  const minutes = toCanonical(options.minutes, 'time', 'minutes');
   if (start <= 0) {
     throw new CoolantInputError(
       'startBar',

@@ -46,11 +46,11 @@ describe('toCanonical — against js-quantities (npm registry)', () => {
   });
 
   it('temperature difference 9 degF is 5 K (no offset)', () => {
-    close(toCanonical('9 degF', 'temperatureDifference'), Qty('9 degF').to('degC').scalar);
+    close(toCanonical('9 degF', 'temperatureDelta'), Qty('9 degF').to('degC').scalar);
   });
 
   it('duration 0.5 h', () => {
-    close(toCanonical('0.5 h', 'duration'), Qty('0.5 h').to('min').scalar);
+    close(toCanonical('0.5 h', 'time'), Qty('0.5 h').to('min').scalar);
   });
 
   it('accepts mathjs Unit objects from another instance', () => {
@@ -74,7 +74,7 @@ describe('fromCanonical and formatQuantity — against js-quantities', () => {
     close(fromCanonical(90, 'temperature', 'degF'), Qty('90 tempC').to('tempF').scalar);
     close(fromCanonical(1.1, 'pressure', 'psi'), Qty('1.1 bar').to('psi').scalar);
     close(fromCanonical(8, 'volume', 'qt'), Qty('8 l').to('qt').scalar);
-    close(fromCanonical(5, 'temperatureDifference', 'degF'), Qty('5 degC').to('degF').scalar);
+    close(fromCanonical(5, 'temperatureDelta', 'degF'), Qty('5 degC').to('degF').scalar);
   });
 
   it('formats with symbols and digits', () => {
@@ -84,7 +84,7 @@ describe('fromCanonical and formatQuantity — against js-quantities', () => {
     expect(formatQuantity(1.1, 'pressure', { unit: 'psi', digits: 0 })).toBe('16 psi');
     expect(formatQuantity(-37.04, 'temperature')).toBe('-37.0 °C');
     expect(formatQuantity(-0.01, 'temperature')).toBe('0.0 °C');
-    expect(formatQuantity(50, 'percent', { digits: 0 })).toBe('50 %');
+    expect(formatQuantity(50, 'percentage', { digits: 0 })).toBe('50 %');
   });
 });
 
@@ -103,10 +103,10 @@ describe('toCanonical — rejects nonsense with CoolantInputError', () => {
     ['-1 L', 'volume'],
     ['-2 qt', 'volume'],
     ['5 psi', 'volume'],
-    ['101', 'percent'],
-    ['-1 %', 'percent'],
-    ['fifty', 'percent'],
-    ['-5 min', 'duration'],
+    ['101', 'percentage'],
+    ['-1 %', 'percentage'],
+    ['fifty', 'percentage'],
+    ['-5 min', 'time'],
   ])('%s as %s', (typed, quantity) => {
     const q = quantity === 'nothing' ? 'temperature' : quantity;
     const value = quantity === 'nothing' ? { value: typed } : typed;

@@ -1,82 +1,55 @@
 // Reads the quantities a technician types ("195 degF", "15 psi", "6 qt") into Heatpath's canonical
-// units, and formats canonical values back for display. mathjs is built with `create` and only the
-// unit factory, so a screen that imports this does not pull in the whole library.
-import { create, isUnit, unitDependencies } from 'mathjs';
-import type { FactoryFunctionMap, Unit } from 'mathjs';
+// units, and formats canonical values back for display. The quantities, canonical units and symbols
+// are Heatpath's one table (units/quantities.ts); conversions use its one mathjs instance.
 import { CoolantInputError } from './errors.js';
-
-// mathjs types its dependency bundles as possibly undefined under noUncheckedIndexedAccess.
-function present(factories: FactoryFunctionMap | undefined): FactoryFunctionMap {
-  if (factories === undefined) {
-    throw new Error('The mathjs unit factory is missing from this build.');
-  }
-  return factories;
-}
-
-const math = create({ unitDependencies: present(unitDependencies) }, {});
+import {
+  CANONICAL_UNITS as TABLE_CANONICAL_UNITS,
+  quantityInfo,
+  unitSymbol,
+} from './units/quantities.js';
+import type { Quantity } from './units/quantities.js';
+import {
+  convertDifference,
+  convertUnit,
+  differenceInKelvin,
+  isUnit,
+  parseUnitText,
+  unitOf,
+} from './units/unit-math.js';
+import type { Unit } from './units/unit-math.js';
 
 /** A value as a plain number in canonical units, a typed string, or a mathjs Unit. */
 export type QuantityInput = number | string | Unit;
 
-export type Quantity =
-  | 'temperature'
-  | 'temperatureDifference'
-  | 'pressure'
-  | 'volume'
-  | 'volumeFlow'
-  | 'duration'
-  | 'percent';
-
-/** Units Heatpath offers for display, per quantity. The first of each list is the canonical unit. */
+/**
+ * Units a calculator figure may be shown in, per quantity. The first of each list is the canonical
+ * unit (checked against the quantity table below).
+ */
 export const DISPLAY_UNITS = {
   temperature: ['degC', 'degF', 'K'],
-  temperatureDifference: ['K', 'degF'],
+  temperatureDelta: ['K', 'degF'],
   pressure: ['bar', 'psi', 'kPa'],
+  time: ['min', 's', 'h'],
   volume: ['L', 'qt', 'gal'],
   volumeFlow: ['L/min', 'gal/min'],
-  duration: ['min', 's', 'h'],
-  percent: ['%'],
+  percentage: ['%'],
+  number: ['none'],
 } as const satisfies Record<Quantity, readonly string[]>;
 
 export type DisplayUnit<Q extends Quantity = Quantity> = (typeof DISPLAY_UNITS)[Q][number];
 
-/** Canonical units: °C, K (differences), bar gauge, litres, L/min, minutes, percent. */
-export const CANONICAL_UNITS: { readonly [Q in Quantity]: DisplayUnit<Q> } = {
-  temperature: 'degC',
-  temperatureDifference: 'K',
-  pressure: 'bar',
-  volume: 'L',
-  volumeFlow: 'L/min',
-  duration: 'min',
-  percent: '%',
-};
+/** Canonical units (the quantity table's), each one of its quantity's display units. */
+export const CANONICAL_UNITS: { readonly [Q in Quantity]: DisplayUnit<Q> } = TABLE_CANONICAL_UNITS;
 
-const QUANTITY_WORDS: Record<Quantity, string> = {
-  temperature: 'a temperature',
-  temperatureDifference: 'a temperature difference',
-  pressure: 'a pressure',
-  volume: 'a volume',
-  volumeFlow: 'a volume flow',
-  duration: 'a duration',
-  percent: 'a percentage',
-};
+function wordsFor(quantity: Quantity): string {
+  return quantityInfo[quantity].words;
+}
 
-const DISPLAY_SYMBOLS: Record<string, string> = {
-  degC: '°C',
-  degF: '°F',
-  K: 'K',
-  bar: 'bar',
-  psi: 'psi',
-  kPa: 'kPa',
-  L: 'L',
+// Calculator figures sit beside a unit picker, so US units are written without the "US".
+const COMPACT_SYMBOLS: Partial<Record<DisplayUnit, string>> = {
   qt: 'qt',
   gal: 'gal',
-  'L/min': 'L/min',
   'gal/min': 'gal/min',
-  min: 'min',
-  s: 's',
-  h: 'h',
-  '%': '%',
 };
 
 const ABSOLUTE_ZERO_CELSIUS = -273.15;
@@ -96,7 +69,7 @@ function normaliseTyped(text: string, quantity: Quantity): string {
     .replace(/℃/g, ' degC')
     .replace(/℉/g, ' degF');
   t = t.replace(/deg([cf])\b/g, (_m, c: string) => `deg${c.toUpperCase()}`);
-  if (quantity === 'temperature' || quantity === 'temperatureDifference') {
+  if (quantity === 'temperature' || quantity === 'temperatureDelta') {
     t = t.replace(
       /^([-+]?[\d.eE+-]+)\s*([CF])$/i,
       (_m, n: string, c: string) => `${n} deg${c.toUpperCase()}`,
@@ -110,11 +83,11 @@ function normaliseTyped(text: string, quantity: Quantity): string {
 
 function parseUnit(text: string, quantity: Quantity, field: string): Unit {
   try {
-    return math.unit(normaliseTyped(text, quantity));
+    return parseUnitText(normaliseTyped(text, quantity));
   } catch {
     throw new CoolantInputError(
       field,
-      `Could not read "${text}" as ${QUANTITY_WORDS[quantity]}. Type a number with a unit, for example ${example(quantity)}.`,
+      `Could not read "${text}" as ${wordsFor(quantity)}. Type a number with a unit, for example ${example(quantity)}.`,
     );
   }
 }
@@ -123,7 +96,7 @@ function example(quantity: Quantity): string {
   switch (quantity) {
     case 'temperature':
       return '"90 degC" or "195 degF"';
-    case 'temperatureDifference':
+    case 'temperatureDelta':
       return '"6 K" or "10 degF"';
     case 'pressure':
       return '"1.2 bar" or "15 psi"';
@@ -131,25 +104,26 @@ function example(quantity: Quantity): string {
       return '"6 L" or "6 qt"';
     case 'volumeFlow':
       return '"40 L/min" or "10 gal/min"';
-    case 'duration':
+    case 'time':
       return '"15 min"';
-    case 'percent':
+    case 'percentage':
       return '"50 %"';
+    case 'number':
+      return '"3"';
   }
 }
 
 function unitToCanonical(u: Unit, quantity: Quantity, field: string, shown: string): number {
   const canonical = CANONICAL_UNITS[quantity];
-  if (u.units.length === 0 || !u.equalBase(math.unit(canonical))) {
+  if (u.units.length === 0 || !u.equalBase(unitOf(1, canonical))) {
     throw new CoolantInputError(
       field,
-      `"${shown}" is not ${QUANTITY_WORDS[quantity]}; expected something like ${example(quantity)}.`,
+      `"${shown}" is not ${wordsFor(quantity)}; expected something like ${example(quantity)}.`,
     );
   }
-  if (quantity === 'temperatureDifference') {
+  if (quantity === 'temperatureDelta') {
     // A difference has no offset: 9 °F of difference is 5 K, not −12.8 °C.
-    const name = u.formatUnits();
-    return u.toNumber('K') - math.unit(0, name).toNumber('K');
+    return differenceInKelvin(u);
   }
   return u.toNumber(canonical);
 }
@@ -174,20 +148,21 @@ function checkPhysical(value: number, quantity: Quantity, field: string, shown: 
       break;
     case 'volume':
     case 'volumeFlow':
-    case 'duration':
+    case 'time':
       if (value < 0) {
         throw new CoolantInputError(
           field,
-          `"${shown}" is negative; ${QUANTITY_WORDS[quantity]} cannot be.`,
+          `"${shown}" is negative; ${wordsFor(quantity)} cannot be.`,
         );
       }
       break;
-    case 'percent':
+    case 'percentage':
       if (value < 0 || value > 100) {
         throw new CoolantInputError(field, `"${shown}" is outside 0–100 %.`);
       }
       break;
-    case 'temperatureDifference':
+    case 'temperatureDelta':
+    case 'number':
       break;
   }
   return value;
@@ -211,9 +186,9 @@ export function toCanonical(
   if (typeof value === 'string') {
     const text = value.trim();
     if (text === '') {
-      throw new CoolantInputError(field, `Enter ${QUANTITY_WORDS[quantity]}.`);
+      throw new CoolantInputError(field, `Enter ${wordsFor(quantity)}.`);
     }
-    if (quantity === 'percent') {
+    if (quantity === 'percentage') {
       const bare = text.replace(/\s*%$/, '');
       if (!PLAIN_NUMBER.test(bare)) {
         throw new CoolantInputError(
@@ -230,13 +205,13 @@ export function toCanonical(
     return checkPhysical(unitToCanonical(u, quantity, field, text), quantity, field, text);
   }
   if (isUnit(value)) {
-    if (quantity === 'percent') {
+    if (quantity === 'percentage' || quantity === 'number') {
       throw new CoolantInputError(field, 'A percentage is a plain number, not a unit.');
     }
     const shown = value.toString();
     return checkPhysical(unitToCanonical(value, quantity, field, shown), quantity, field, shown);
   }
-  throw new CoolantInputError(field, `Expected ${QUANTITY_WORDS[quantity]}.`);
+  throw new CoolantInputError(field, `Expected ${wordsFor(quantity)}.`);
 }
 
 /** Converts a canonical value to one of the display units offered for its quantity. */
@@ -246,13 +221,13 @@ export function fromCanonical<Q extends Quantity>(
   unit: DisplayUnit<Q>,
 ): number {
   const canonical = CANONICAL_UNITS[quantity];
-  if (unit === canonical || quantity === 'percent') {
+  if (unit === canonical || quantity === 'percentage' || quantity === 'number') {
     return value;
   }
-  if (quantity === 'temperatureDifference') {
-    return math.unit(value, 'K').toNumber(unit) - math.unit(0, 'K').toNumber(unit);
+  if (quantity === 'temperatureDelta') {
+    return convertDifference(value, 'K', unit);
   }
-  return math.unit(value, canonical).toNumber(unit);
+  return convertUnit(value, canonical, unit);
 }
 
 export interface FormatOptions<Q extends Quantity> {
@@ -271,9 +246,10 @@ export function formatQuantity<Q extends Quantity>(
   const unit = options.unit ?? CANONICAL_UNITS[quantity];
   const digits = options.digits ?? 1;
   const shown = fromCanonical(value, quantity, unit);
-  const symbol = DISPLAY_SYMBOLS[unit] ?? unit;
+  const symbol = COMPACT_SYMBOLS[unit] ?? unitSymbol(unit);
   const number = Object.is(Number(shown.toFixed(digits)), -0)
     ? (0).toFixed(digits)
     : shown.toFixed(digits);
+  if (symbol === '') return number;
   return symbol === '%' ? `${number} %` : `${number} ${symbol}`;
 }

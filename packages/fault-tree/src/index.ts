@@ -1,6 +1,6 @@
 // Public API of @heatpath/fault-tree: Heatpath's decision-tree format (schema and types),
-// validation, formula checking, compiling a tree to an XState machine, walking, replaying and
-// persisting walks. No I/O; the shipped trees are at "@heatpath/fault-tree/trees".
+// validation, formula checking, compiling a tree to an XState machine, walking and replaying
+// walks (a walk is stored as its events and replayed). No I/O; the shipped trees are at "@heatpath/fault-tree/trees".
 
 // Format
 export {
@@ -58,7 +58,7 @@ export {
   canonicalUnitOf,
   acceptsUnit,
 } from './units/quantities.js';
-export type { Quantity, QuantityInfo, UnitCode } from './units/quantities.js';
+export type { Quantity, QuantityInfo, TreeQuantity, UnitCode } from './units/quantities.js';
 export { fromCanonical, toCanonical } from './units/convert-units.js';
 export {
   formatCanonical,
@@ -135,14 +135,6 @@ export type {
 } from './walk/walk-view.js';
 export { replayWalk, summariseWalk } from './walk/replay-walk.js';
 export type { Divergence, ReplayResult, WalkSummary } from './walk/replay-walk.js';
-export {
-  createWalkActor,
-  persistedWalkSchema,
-  persistWalk,
-  restoreWalk,
-  WALK_FORMAT,
-} from './walk/persist-walk.js';
-export type { PersistedWalk, RestoreResult } from './walk/persist-walk.js';
 
 // Diff between versions
 export { diffTrees } from './diff/diff-trees.js';

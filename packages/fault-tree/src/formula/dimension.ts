@@ -45,6 +45,8 @@ export function dimensionOfQuantity(quantity: Quantity): Dimension {
       return quantityDimension({ min: 1 });
     case 'volume':
       return quantityDimension({ L: 1 });
+    case 'volumeFlow':
+      return quantityDimension({ L: 1, min: -1 });
     case 'percentage':
       return quantityDimension({ '%': 1 });
     case 'number':

@@ -1,19 +1,7 @@
-// Converts readings between the units a technician types and Heatpath's canonical units, using
-// mathjs units (built with `create` and only the unit factory) rather than hand-written factors.
-import { create, unitDependencies } from 'mathjs';
-import type { FactoryFunctionMap } from 'mathjs';
-import type { Quantity, UnitCode } from './quantities.js';
-import { acceptsUnit, canonicalUnitOf } from './quantities.js';
-
-// mathjs types its dependency bundles as possibly undefined under noUncheckedIndexedAccess.
-function present(factories: FactoryFunctionMap | undefined): FactoryFunctionMap {
-  if (factories === undefined) {
-    throw new Error('The mathjs unit factory is missing from this build.');
-  }
-  return factories;
-}
-
-const math = create({ unitDependencies: present(unitDependencies) }, {});
+// Converts tree readings between the units a technician types and Heatpath's canonical units,
+// with the one mathjs unit instance in @heatpath/coolant (never hand-written factors).
+import { acceptsUnit, canonicalUnitOf, convertDifference, convertUnit } from '@heatpath/coolant';
+import type { Quantity, UnitCode } from '@heatpath/coolant';
 
 // Heatpath's unit codes are chosen to be mathjs unit names, except the two that have no unit.
 const dimensionless = new Set<UnitCode>(['%', 'none']);
@@ -24,12 +12,6 @@ function roundCanonical(value: number): number {
   return Number(value.toPrecision(12));
 }
 
-function convertDifference(value: number, from: UnitCode, to: UnitCode): number {
-  // A difference has no offset: 9 °F of difference is 5 K, never −12.8 °C.
-  const scaled = math.unit(value, from).toNumber('K') - math.unit(0, from).toNumber('K');
-  return math.unit(scaled, 'K').toNumber(to) - math.unit(0, 'K').toNumber(to);
-}
-
 function convert(value: number, from: UnitCode, to: UnitCode, quantity: Quantity): number {
   if (from === to || dimensionless.has(from)) {
     return value;
@@ -37,7 +19,7 @@ function convert(value: number, from: UnitCode, to: UnitCode, quantity: Quantity
   if (quantity === 'temperatureDelta') {
     return convertDifference(value, from, to);
   }
-  return math.unit(value, from).toNumber(to);
+  return convertUnit(value, from, to);
 }
 
 function assertAccepted(quantity: Quantity, unit: UnitCode): void {

@@ -1,9 +1,9 @@
+import { createActor } from 'xstate';
 import { describe, expect, it } from 'vitest';
 import { compileTree } from '../compile/compile-tree.js';
 import type { CompiledTree } from '../compile/compile-tree.js';
 import type { TreeDefinitionInput } from '../schema/tree-schema.js';
 import { back, choose, done, measure, runScript } from '../testing/walk-script.js';
-import { persistWalk, restoreWalk, createWalkActor } from './persist-walk.js';
 import { replayWalk, summariseWalk } from './replay-walk.js';
 import { applyWalkEvent, checkAnswer, previewReadings, startWalk } from './walk-api.js';
 import { describeWalk } from './walk-view.js';
@@ -307,49 +307,15 @@ describe('replay', () => {
   });
 });
 
-describe('persisting a walk', () => {
+describe('the walk machine as an XState actor', () => {
   const events = [
     choose('ask', 'yes'),
     measure('hoses', { inletTemp: [90, 'degC'], outletTemp: [84, 'degC'] }),
     done('work'),
   ];
 
-  it('round-trips through JSON and resumes with an XState actor', () => {
-    const snapshot = runScript(tree, events.slice(0, 2));
-    const stored = JSON.parse(JSON.stringify(persistWalk(tree, snapshot))) as unknown;
-    const restored = restoreWalk(tree, stored);
-    if (!restored.ok) throw new Error(restored.reason);
-    expect(restored.snapshot.value).toBe('work');
-    expect(restored.snapshot.context).toEqual(snapshot.context);
-
-    const actor = createWalkActor(tree, restored.snapshot);
-    actor.start();
-    actor.send(done('work'));
-    expect(actor.getSnapshot().value).toBe('fix');
-    expect(actor.getSnapshot().context.history).toEqual(events);
-    actor.stop();
-  });
-
-  it('refuses a snapshot that was edited, or saved on other tree content', () => {
-    const stored = JSON.parse(JSON.stringify(persistWalk(tree, runScript(tree, events)))) as {
-      treeFingerprint: string;
-      snapshot: { value: string };
-    };
-    expect(
-      restoreWalk(tree, { ...stored, snapshot: { ...stored.snapshot, value: 'fine' } }),
-    ).toMatchObject({
-      ok: false,
-      code: 'snapshot-mismatch',
-    });
-    expect(restoreWalk(tree, { ...stored, treeFingerprint: '0' })).toMatchObject({
-      ok: false,
-      code: 'tree-changed',
-    });
-    expect(restoreWalk(tree, { nonsense: true })).toMatchObject({ ok: false, code: 'malformed' });
-  });
-
   it('an actor driven by events agrees with the pure functions, and ignores what the checker refuses', () => {
-    const actor = createWalkActor(tree);
+    const actor = createActor(tree.machine);
     actor.start();
     actor.send(events[0] as never);
     // A malformed measurement at a measurement step, a stale answer, and an out-of-sequence back.

@@ -29,8 +29,9 @@ import type {
   ResolvedMapping,
   TemperatureSeries,
 } from '../series/temperature-series.js';
-import { IDENTITY, speedToKph, temperatureToCelsius } from '../units/unit-conversion.js';
-import type { LinearMap } from '../units/unit-conversion.js';
+import { IDENTITY_MAP } from '@heatpath/coolant';
+import type { LinearMap } from '@heatpath/coolant';
+import { speedToKph, temperatureToCelsius } from '../units/unit-conversion.js';
 import { VALUE_BOUNDS } from './value-bounds.js';
 import type { ValueBounds } from './value-bounds.js';
 
@@ -229,7 +230,7 @@ export function planReading(
       index,
       name: columnName(proposal.columns, index),
       label: ROLE_LABELS[role],
-      map: isTemperature ? temperatureMap : isSpeed ? speedToKph(vehicleSpeedUnit) : IDENTITY,
+      map: isTemperature ? temperatureMap : isSpeed ? speedToKph(vehicleSpeedUnit) : IDENTITY_MAP,
       bounds: VALUE_BOUNDS[role],
       fileUnit: isTemperature
         ? temperatureShown

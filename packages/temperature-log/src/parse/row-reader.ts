@@ -7,7 +7,7 @@ import { readNumber } from '../format/number-value.js';
 import { describeTimeFormat, readTime } from '../format/time-value.js';
 import type { LinePiece } from '../input/line-pieces.js';
 import type { TemperatureSeries } from '../series/temperature-series.js';
-import { applyMap } from '../units/unit-conversion.js';
+import { applyMap } from '@heatpath/coolant';
 import type { ChannelKey, ColumnPlan, ReadingPlan } from './reading-plan.js';
 
 const DAY_SECONDS = 24 * 3600;

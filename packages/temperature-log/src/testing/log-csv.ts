@@ -2,7 +2,8 @@
 // benchmark can check the parser on every format with data whose values are known. Header
 // names are Heatpath's own invention, not any scan tool's.
 import type { TemperatureUnit } from '../columns/stated-units.js';
-import { applyMap, celsiusTo } from '../units/unit-conversion.js';
+import { applyMap } from '@heatpath/coolant';
+import { celsiusTo } from '../units/unit-conversion.js';
 
 export interface CsvLayout {
   readonly delimiter?: ',' | ';' | '\t';

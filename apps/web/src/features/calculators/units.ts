@@ -6,7 +6,7 @@ import type { DisplayUnit } from '@heatpath/coolant';
 
 export interface DisplayUnits {
   temperature: DisplayUnit<'temperature'>;
-  temperatureDifference: DisplayUnit<'temperatureDifference'>;
+  temperatureDifference: DisplayUnit<'temperatureDelta'>;
   pressure: DisplayUnit<'pressure'>;
   volume: DisplayUnit<'volume'>;
   volumeFlow: DisplayUnit<'volumeFlow'>;

@@ -7,6 +7,7 @@ export const quantityLabels: Record<Quantity, string> = {
   pressure: 'Pressure (gauge)',
   time: 'Time',
   volume: 'Volume',
+  volumeFlow: 'Volume flow',
   percentage: 'Percentage',
   number: 'Plain number',
 };

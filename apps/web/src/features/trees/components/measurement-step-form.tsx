@@ -5,7 +5,7 @@ import {
   type Branch,
   type MeasurementInput,
   type MeasurementNode,
-  type Quantity,
+  type TreeQuantity,
 } from '@heatpath/fault-tree';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
@@ -112,7 +112,7 @@ export function MeasurementFields({
                   data-path={pathKey([...at, 'quantity'])}
                   error={errorAt([...at, 'quantity'])}
                   onChange={(event) => {
-                    const quantity = event.target.value as Quantity;
+                    const quantity = event.target.value as TreeQuantity;
                     updateInput(index, input, { quantity, unit: canonicalUnit(quantity) });
                   }}
                 />

@@ -1,6 +1,6 @@
 // The tree's own fields: title, symptom, summary, where it applies, the first step, and the
 // computed values worked out from readings (each a formula of a declared quantity).
-import { quantities, type ComputedValue, type Quantity } from '@heatpath/fault-tree';
+import { quantities, type ComputedValue, type TreeQuantity } from '@heatpath/fault-tree';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/field';
 import { pathKey, valueNameFrom, type EditableTree } from '../draft-model';
 import { canonicalUnit, quantityLabels, unitLabel } from '../units-format';
@@ -136,7 +136,7 @@ export function TreeDetailsForm({
                   data-path={pathKey([...at, 'quantity'])}
                   error={errorAt([...at, 'quantity'])}
                   onChange={(event) => {
-                    const quantity = event.target.value as Quantity;
+                    const quantity = event.target.value as TreeQuantity;
                     update(index, value, { quantity, unit: canonicalUnit(quantity) });
                   }}
                 />
