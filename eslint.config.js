@@ -3,9 +3,17 @@
 // components/lib -> features -> app).
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
+import boundaries from 'eslint-plugin-boundaries';
 import checkFile from 'eslint-plugin-check-file';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
+import { createRequire } from 'node:module';
+
+// The boundaries plugin resolves imports with the node resolver it depends on; named by path, as
+// pnpm keeps it beside the plugin rather than at the top of node_modules.
+const nodeResolver = createRequire(import.meta.resolve('eslint-plugin-boundaries')).resolve(
+  'eslint-import-resolver-node',
+);
 
 export default tseslint.config(
   {
@@ -93,6 +101,53 @@ export default tseslint.config(
       'no-restricted-imports': [
         'error',
         { patterns: [{ group: ['**/app/**'], message: 'Features never import the app layer.' }] },
+      ],
+    },
+  },
+  {
+    // Web import boundaries: a feature may use components, lib, the packages and its own files,
+    // never another feature; shared code (components, lib, test helpers) knows no feature.
+    files: ['apps/web/src/**/*.{ts,tsx}'],
+    plugins: { boundaries },
+    settings: {
+      'boundaries/elements': [
+        {
+          type: 'web-feature',
+          pattern: 'apps/web/src/features/*',
+          capture: ['feature'],
+        },
+        { type: 'web-app', pattern: 'apps/web/src/app' },
+        { type: 'web-shared', pattern: 'apps/web/src/{components,lib,test,styles}' },
+      ],
+      'boundaries/legacy-templates': false,
+      'import/resolver': { [nodeResolver]: { extensions: ['.ts', '.tsx', '.js', '.mjs'] } },
+    },
+    rules: {
+      'boundaries/dependencies': [
+        'error',
+        {
+          default: 'allow',
+          policies: [
+            {
+              from: { element: { type: 'web-feature' } },
+              disallow: {
+                to: {
+                  element: {
+                    type: 'web-feature',
+                    captured: { feature: '!{{ from.element.captured.feature }}' },
+                  },
+                },
+              },
+              message:
+                'Features never import each other: move what two features share to apps/web/src/components or apps/web/src/lib, or let the route pass it in.',
+            },
+            {
+              from: { element: { type: 'web-shared' } },
+              disallow: { to: { element: { type: 'web-feature' } } },
+              message: 'Shared code (components, lib) knows no feature.',
+            },
+          ],
+        },
       ],
     },
   },

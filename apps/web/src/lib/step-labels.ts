@@ -1,6 +1,13 @@
-// Each hazard named in a few words, leading its caution: on the case page, in the tree editor
-// and its Try it, and in training.
-import type { HazardKind } from '@heatpath/fault-tree';
+// The words for a step, the same on the case page, in the tree editor and its Try it, and in
+// training: its kind ("Measurement"), and each hazard named in a few words, leading its caution.
+import type { HazardKind, NodeKind } from '@heatpath/fault-tree';
+
+export const stepKindLabels: Record<NodeKind, string> = {
+  question: 'Question',
+  measurement: 'Measurement',
+  procedure: 'Procedure',
+  outcome: 'Finding',
+};
 
 export const hazardLabels: Record<HazardKind, string> = {
   'hot-pressurised-coolant': 'Hot coolant under pressure',

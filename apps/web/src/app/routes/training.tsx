@@ -3,7 +3,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Outlet, type LoaderFunctionArgs } from 'react-router';
 import { Panel, PageHeader } from '../../components/ui/page';
-import { staffQueryOptions } from '../../features/staff/api/get-staff';
+import { staffQueryOptions, useStaff } from '../../features/staff/api/get-staff';
 import { candidatesQueryOptions } from '../../features/training/api/get-candidates';
 import { coursesQueryOptions } from '../../features/training/api/get-courses';
 import { progressQueryOptions } from '../../features/training/api/get-progress';
@@ -80,12 +80,13 @@ export function coursesLoader(queryClient: QueryClient) {
 
 export function CoursesRoute() {
   useDocumentTitle('Courses · Training');
+  const staff = useStaff();
   return (
     <section aria-labelledby="courses-heading" className="flex flex-col gap-4">
       <h2 id="courses-heading" className="text-xl font-bold">
         Courses
       </h2>
-      <CourseList />
+      <CourseList staff={staff} />
     </section>
   );
 }

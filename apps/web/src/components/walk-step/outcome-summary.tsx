@@ -3,6 +3,7 @@
 // technician edits (and the repair order takes) are drafted from this.
 import type { OutcomeView } from '@heatpath/fault-tree';
 import type { ReactNode } from 'react';
+import { CauseAndCorrection, labourLines, OutcomeLines, partLines } from './outcome-lines';
 import { StepCautions } from './step-cautions';
 
 interface OutcomeSummaryProps {
@@ -42,51 +43,13 @@ export function OutcomeDetails({
     <div className="grid gap-6 lg:grid-cols-2">
       <div className="flex flex-col gap-4">
         <StepCautions cautions={outcome.cautions} />
-        <div>
-          <h3 className="font-bold">Root cause</h3>
-          <p className="text-lg">{outcome.rootCause}</p>
-        </div>
-        <div>
-          <h3 className="font-bold">Correction</h3>
-          <p>{outcome.correction}</p>
-        </div>
+        <CauseAndCorrection rootCause={outcome.rootCause} correction={outcome.correction} />
         {outcome.notes ? <p className="text-sm text-ink-muted">{outcome.notes}</p> : null}
       </div>
       <div className="flex flex-col gap-4">
-        {outcome.parts.length > 0 ? (
-          <div>
-            <h3 className="font-bold">Suggested parts</h3>
-            <ul className="list-disc pl-6">
-              {outcome.parts.map((part) => (
-                <li key={part.description}>
-                  {part.quantity} × {part.description}
-                </li>
-              ))}
-            </ul>
-          </div>
-        ) : null}
-        {outcome.labour.length > 0 ? (
-          <div>
-            <h3 className="font-bold">Suggested labour</h3>
-            <ul className="list-disc pl-6">
-              {outcome.labour.map((line) => (
-                <li key={line.operation}>
-                  {line.operation}: {line.hours} h
-                </li>
-              ))}
-            </ul>
-          </div>
-        ) : null}
-        {outcome.followUps.length > 0 ? (
-          <div>
-            <h3 className="font-bold">Follow-ups</h3>
-            <ul className="list-disc pl-6">
-              {outcome.followUps.map((followUp) => (
-                <li key={followUp}>{followUp}</li>
-              ))}
-            </ul>
-          </div>
-        ) : null}
+        <OutcomeLines title="Suggested parts" items={partLines(outcome.parts)} />
+        <OutcomeLines title="Suggested labour" items={labourLines(outcome.labour)} />
+        <OutcomeLines title="Follow-ups" items={outcome.followUps} />
         {children}
       </div>
     </div>

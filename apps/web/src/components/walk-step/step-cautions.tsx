@@ -2,7 +2,7 @@
 // reads "open the cap" before "only on a cold system". All of a step's cautions sit in one note,
 // each led by its hazard, so a step with three of them still leaves its instruction in view.
 import type { Caution } from '@heatpath/fault-tree';
-import { hazardLabels } from '../../lib/hazard-labels';
+import { hazardLabels } from '../../lib/step-labels';
 import { SafetyNote } from '../ui/alert';
 
 export function StepCautions({ cautions }: { cautions: readonly Caution[] }) {

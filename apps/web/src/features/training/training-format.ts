@@ -6,7 +6,6 @@ import {
   type TrainingScore,
   type TrainingVehicle,
 } from '@heatpath/contracts';
-import type { NodeKind } from '@heatpath/fault-tree';
 
 /** "Corvane Tessel, 2017 · 1.4 petrol": what a learner may know of the car. */
 export function trainingVehicleName(vehicle: TrainingVehicle): string {
@@ -60,13 +59,6 @@ export function formatWhen(iso: string): string {
   const value = new Date(iso);
   return Number.isNaN(value.getTime()) ? iso : dateTime.format(value);
 }
-
-export const stepKindLabels: Record<NodeKind, string> = {
-  question: 'Question',
-  measurement: 'Measurement',
-  procedure: 'Procedure',
-  outcome: 'Finding',
-};
 
 export function countText(count: number, one: string, many: string): string {
   return `${count} ${count === 1 ? one : many}`;

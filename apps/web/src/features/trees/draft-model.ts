@@ -111,13 +111,6 @@ export function uniqueId(base: string, taken: ReadonlySet<string>): string {
   }
 }
 
-export const kindLabels: Record<NodeKind, string> = {
-  question: 'Question',
-  measurement: 'Measurement',
-  procedure: 'Procedure',
-  outcome: 'Finding',
-};
-
 /** A new node of a kind, with a title and the lists its kind carries; the rest is for the lead. */
 export function blankNode(kind: NodeKind): TreeNode {
   switch (kind) {

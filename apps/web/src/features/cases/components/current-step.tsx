@@ -2,24 +2,17 @@
 // anything else, then the prompt or instruction, the tools and time; beside it (below it on a
 // narrow screen) the answer controls, the evidence it asks for and "Step back".
 import type { CaseDetail, UnitPreferences } from '@heatpath/contracts';
-import type { NodeKind } from '@heatpath/fault-tree';
 import { Button } from '../../../components/ui/button';
 import { MeasurementForm } from '../../../components/walk-step/measurement-form';
 import { OutcomeSummary } from '../../../components/walk-step/outcome-summary';
 import { ProcedureAnswers } from '../../../components/walk-step/procedure-answers';
 import { QuestionAnswers } from '../../../components/walk-step/question-answers';
 import { StepCautions } from '../../../components/walk-step/step-cautions';
+import { stepKindLabels } from '../../../lib/step-labels';
 import type { WalkModel } from '../case-tree';
 import type { WalkAnswers } from '../hooks/use-walk-answers';
 import { AnswerStatus } from './answer-status';
 import { StepEvidence } from './step-evidence';
-
-const kindLabels: Record<NodeKind, string> = {
-  question: 'Question',
-  measurement: 'Measurement',
-  procedure: 'Procedure',
-  outcome: 'Finding',
-};
 
 interface CurrentStepProps {
   detail: CaseDetail;
@@ -109,7 +102,7 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
           {node.title}
         </h2>
         <p className="font-semibold text-ink-muted">
-          Step {walk.path.length + 1} · {kindLabels[node.kind]}
+          Step {walk.path.length + 1} · {stepKindLabels[node.kind]}
         </p>
       </div>
       <div

@@ -1,11 +1,11 @@
 // The lead's courses: each with who takes it and its cases in order, editable in place, and a
-// form for a new one. The apprentices to choose from come from the staff list.
-import type { TrainingCourse } from '@heatpath/contracts';
+// form for a new one. The apprentices to choose from come from the staff list, which the route
+// reads and passes in.
+import type { StaffList, TrainingCourse } from '@heatpath/contracts';
 import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
-import { useStaff } from '../../staff/api/get-staff';
 import { useCourses } from '../api/get-courses';
 import { useTrainingCases } from '../api/get-training-cases';
 import { countText, difficultyText, formatDate } from '../training-format';
@@ -46,10 +46,14 @@ function CourseCard({ course, onEdit }: { course: TrainingCourse; onEdit: () => 
   );
 }
 
-export function CourseList() {
+interface CourseListProps {
+  /** The workshop's people as read so far, and why they could not be read. */
+  staff: { data?: StaffList; error: Error | null };
+}
+
+export function CourseList({ staff }: CourseListProps) {
   const courses = useCourses();
   const trainingCases = useTrainingCases();
-  const staff = useStaff();
   // 'new', a course id, or null when nothing is being edited.
   const [editing, setEditing] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
@@ -87,7 +91,7 @@ export function CourseList() {
 
   return (
     <div className="flex flex-col gap-4">
-      {staff.isError ? (
+      {staff.error ? (
         <Alert tone="caution" title="Apprentices not loaded">
           <p>{staff.error.message} A course can still be set for every apprentice.</p>
         </Alert>

@@ -11,7 +11,7 @@ import { Button } from '../../../components/ui/button';
 import { TextAreaField } from '../../../components/ui/field';
 import { SegmentedChoice } from '../../../components/ui/segmented-choice';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
-import { useCase } from '../../cases/api/get-case';
+import { useCase } from '../../../lib/case-query';
 import { useUpdateTrainingCase } from '../api/update-training-case';
 import { HidingChoices } from './hiding-choices';
 import { difficultyChoices } from './mark-case-form';

@@ -1,20 +1,12 @@
 // The end of a training case: the finding the tree reached (root cause and correction), the
 // findings the workshop wrote for the repair order, and the lead's teaching note.
 import type { TrainingFindings, TrainingOutcome } from '@heatpath/contracts';
-
-function Lines({ title, items }: { title: string; items: readonly string[] }) {
-  if (items.length === 0) return null;
-  return (
-    <div>
-      <h4 className="font-bold">{title}</h4>
-      <ul className="list-disc pl-6">
-        {items.map((item, at) => (
-          <li key={`${at}-${item}`}>{item}</li>
-        ))}
-      </ul>
-    </div>
-  );
-}
+import {
+  CauseAndCorrection,
+  labourLines,
+  OutcomeLines,
+  partLines,
+} from '../../../components/walk-step/outcome-lines';
 
 export function TeachingNote({ note }: { note: string }) {
   return (
@@ -52,14 +44,7 @@ export function TrainingOutcomeView({
       </div>
       <div className="grid gap-4 lg:grid-cols-2">
         <div className="flex flex-col gap-3">
-          <div>
-            <h3 className="font-bold">Root cause</h3>
-            <p className="text-lg">{outcome.rootCause}</p>
-          </div>
-          <div>
-            <h3 className="font-bold">Correction</h3>
-            <p>{outcome.correction}</p>
-          </div>
+          <CauseAndCorrection rootCause={outcome.rootCause} correction={outcome.correction} />
         </div>
         {findings ? (
           <div className="flex flex-col gap-3">
@@ -72,27 +57,19 @@ export function TrainingOutcomeView({
               <dt className="font-bold">Correction</dt>
               <dd className="whitespace-pre-line">{findings.correction}</dd>
             </dl>
-            <Lines
-              title="Parts"
-              items={findings.parts.map((part) => `${part.quantity} × ${part.description}`)}
-            />
-            <Lines
-              title="Labour"
-              items={findings.labour.map((line) => `${line.operation}: ${line.hours} h`)}
-            />
-            <Lines title="Follow-ups" items={findings.followUps} />
+            <OutcomeLines Heading="h4" title="Parts" items={partLines(findings.parts)} />
+            <OutcomeLines Heading="h4" title="Labour" items={labourLines(findings.labour)} />
+            <OutcomeLines Heading="h4" title="Follow-ups" items={findings.followUps} />
           </div>
         ) : (
           <div className="flex flex-col gap-3">
-            <Lines
-              title="Suggested parts"
-              items={outcome.parts.map((part) => `${part.quantity} × ${part.description}`)}
-            />
-            <Lines
+            <OutcomeLines Heading="h4" title="Suggested parts" items={partLines(outcome.parts)} />
+            <OutcomeLines
+              Heading="h4"
               title="Suggested labour"
-              items={outcome.labour.map((line) => `${line.operation}: ${line.hours} h`)}
+              items={labourLines(outcome.labour)}
             />
-            <Lines title="Follow-ups" items={outcome.followUps} />
+            <OutcomeLines Heading="h4" title="Follow-ups" items={outcome.followUps} />
           </div>
         )}
       </div>

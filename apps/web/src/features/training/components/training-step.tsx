@@ -6,8 +6,7 @@ import type { TrainingAnswer, TrainingPhoto, TrainingStep } from '@heatpath/cont
 import type { ReactNode } from 'react';
 import { SafetyNote } from '../../../components/ui/alert';
 import { StepCautions } from '../../../components/walk-step/step-cautions';
-import { hazardLabels } from '../../../lib/hazard-labels';
-import { stepKindLabels } from '../training-format';
+import { hazardLabels, stepKindLabels } from '../../../lib/step-labels';
 
 function AnswerGiven({ answer, Sub }: { answer: TrainingAnswer; Sub: 'h3' | 'h4' }) {
   if (answer.kind === 'measurement') {

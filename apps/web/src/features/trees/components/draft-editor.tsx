@@ -26,13 +26,13 @@ import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button, ButtonLink } from '../../../components/ui/button';
 import { isApiError } from '../../../lib/api-client';
+import { stepKindLabels as kindLabels } from '../../../lib/step-labels';
 import { draftQueryOptions } from '../api/get-draft';
 import {
   addNode,
   connectNodes,
   deleteNode,
   edgesOf,
-  kindLabels,
   nodeKinds,
   nodeTitle,
   normaliseDefinition,

@@ -20,7 +20,8 @@ import {
 } from '@xyflow/react';
 import '@xyflow/react/dist/base.css';
 import { memo, useCallback, useEffect, useMemo, useState } from 'react';
-import { edgesOf, kindLabels, type EditableTree, type GraphEdge } from '../draft-model';
+import { stepKindLabels as kindLabels } from '../../../lib/step-labels';
+import { edgesOf, type EditableTree, type GraphEdge } from '../draft-model';
 import { requestLayout } from '../graph-layout-client';
 import {
   cachedLayout,
