@@ -8,7 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { FieldError, SelectField, TextField } from '../../../components/ui/field';
 import { hazardKinds, pathKey } from '../draft-model';
 import { readNumber } from '../../../lib/read-number';
-import { hazardLabels } from '../../../lib/hazard-labels';
+import { hazardLabels } from '../../../lib/step-labels';
 
 export type Path = readonly (string | number)[];
 
