@@ -5,6 +5,7 @@ import type { OutcomeView } from '@heatpath/fault-tree';
 import type { ReactNode } from 'react';
 import { CauseAndCorrection, labourLines, OutcomeLines, partLines } from './outcome-lines';
 import { StepCautions } from './step-cautions';
+import { StepFrame } from './step-frame';
 
 interface OutcomeSummaryProps {
   outcome: OutcomeView;
@@ -14,20 +15,17 @@ interface OutcomeSummaryProps {
 
 export function OutcomeSummary({ outcome, stepNumber, children }: OutcomeSummaryProps) {
   return (
-    <section
-      aria-labelledby="current-step-title"
-      className="rounded-panel border-2 border-l-8 border-ok-line bg-surface p-4 sm:p-6"
-    >
-      <div className="mb-3 flex flex-wrap items-baseline gap-x-4 gap-y-1">
-        <h2 id="current-step-title" className="text-2xl font-bold">
-          {outcome.title}
-        </h2>
-        <p className="font-semibold text-ok-ink">
+    <StepFrame
+      title={outcome.title}
+      where={
+        <>
           <span aria-hidden="true">✓ </span>Finding reached at step {stepNumber}
-        </p>
-      </div>
+        </>
+      }
+      finding
+    >
       <OutcomeDetails outcome={outcome}>{children}</OutcomeDetails>
-    </section>
+    </StepFrame>
   );
 }
 

@@ -8,6 +8,7 @@ import { OutcomeSummary } from '../../../components/walk-step/outcome-summary';
 import { ProcedureAnswers } from '../../../components/walk-step/procedure-answers';
 import { QuestionAnswers } from '../../../components/walk-step/question-answers';
 import { StepCautions } from '../../../components/walk-step/step-cautions';
+import { StepFrame } from '../../../components/walk-step/step-frame';
 import { stepKindLabels } from '../../../lib/step-labels';
 import type { WalkModel } from '../case-tree';
 import type { WalkAnswers } from '../hooks/use-walk-answers';
@@ -93,18 +94,10 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
   ) : null;
 
   return (
-    <section
-      aria-labelledby="current-step-title"
-      className="rounded-panel border-2 border-line-strong bg-surface p-4 sm:p-6"
+    <StepFrame
+      title={node.title}
+      where={`Step ${walk.path.length + 1} · ${stepKindLabels[node.kind]}`}
     >
-      <div className="mb-3 flex flex-wrap items-baseline gap-x-4 gap-y-1">
-        <h2 id="current-step-title" className="text-2xl font-bold">
-          {node.title}
-        </h2>
-        <p className="font-semibold text-ink-muted">
-          Step {walk.path.length + 1} · {stepKindLabels[node.kind]}
-        </p>
-      </div>
       <div
         className={
           'grid gap-5 ' +
@@ -169,6 +162,6 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
           {why}
         </div>
       </div>
-    </section>
+    </StepFrame>
   );
 }
