@@ -2,11 +2,7 @@
 // units, and formats canonical values back for display. The quantities, canonical units and symbols
 // are Heatpath's one table (units/quantities.ts); conversions use its one mathjs instance.
 import { CoolantInputError } from './errors.js';
-import {
-  CANONICAL_UNITS as TABLE_CANONICAL_UNITS,
-  quantityInfo,
-  unitSymbol,
-} from './units/quantities.js';
+import { CANONICAL_UNITS, quantityInfo, unitSymbol } from './units/quantities.js';
 import type { Quantity } from './units/quantities.js';
 import {
   convertDifference,
@@ -38,8 +34,10 @@ export const DISPLAY_UNITS = {
 
 export type DisplayUnit<Q extends Quantity = Quantity> = (typeof DISPLAY_UNITS)[Q][number];
 
-/** Canonical units (the quantity table's), each one of its quantity's display units. */
-export const CANONICAL_UNITS: { readonly [Q in Quantity]: DisplayUnit<Q> } = TABLE_CANONICAL_UNITS;
+// Each canonical unit is also one of its quantity's display units.
+CANONICAL_UNITS satisfies { readonly [Q in Quantity]: DisplayUnit<Q> };
+
+export { CANONICAL_UNITS };
 
 function wordsFor(quantity: Quantity): string {
   return quantityInfo[quantity].words;

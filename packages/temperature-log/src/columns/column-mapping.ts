@@ -243,14 +243,11 @@ export function proposeMapping(layout: LogLayout): MappingProposal {
   };
 }
 
-export const OPTIONAL_ROLES = [
-  'intakeAir',
-  'ambient',
-  'vehicleSpeed',
-  'engineSpeed',
-  'fanDuty',
-] as const;
-export type OptionalRole = (typeof OPTIONAL_ROLES)[number];
+/** The roles a log may leave out: every role but time and coolant, in COLUMN_ROLES order. */
+export type OptionalRole = Exclude<ColumnRole, 'time' | 'coolant'>;
+export const OPTIONAL_ROLES: readonly OptionalRole[] = COLUMN_ROLES.filter(
+  (role): role is OptionalRole => role !== 'time' && role !== 'coolant',
+);
 
 /** The mapping's column per role, for the roles it maps. */
 export function mappedColumns(mapping: ColumnMapping): [ColumnRole, number][] {

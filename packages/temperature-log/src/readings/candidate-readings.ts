@@ -3,6 +3,7 @@
 // their own) before the walk uses it. Units and quantities use the codes of the tree format
 // (degC, min, K, none), and `matchesInputs` names the inputs of Heatpath's shipped trees that
 // ask for that reading, so the app can offer it on the right step.
+import type { CANONICAL_UNITS, Quantity } from '@heatpath/coolant';
 import type { TemperatureLogAnalysis } from '../analysis/analyse-temperature-log.js';
 import type { ResultBasis } from '../analysis/result-basis.js';
 
@@ -17,11 +18,14 @@ export type CandidateReadingName =
   | 'longestOverTemperatureMinutes'
   | 'swingAmplitudeK';
 
+/** The quantities a log yields a reading of; each reading is in its quantity's canonical unit. */
+type CandidateQuantity = Extract<Quantity, 'temperature' | 'time' | 'temperatureDelta' | 'number'>;
+
 export interface CandidateReading {
   readonly name: CandidateReadingName;
   readonly value: number;
-  readonly unit: 'degC' | 'min' | 'K' | 'none';
-  readonly quantity: 'temperature' | 'time' | 'temperatureDelta' | 'number';
+  readonly unit: (typeof CANONICAL_UNITS)[CandidateQuantity];
+  readonly quantity: CandidateQuantity;
   readonly label: string;
   /** Where on the log the value comes from, s; null for a value over the whole log. */
   readonly atSeconds: number | null;
