@@ -24,8 +24,9 @@ export default defineConfig({
           environment: 'jsdom',
           setupFiles: ['./src/test/setup.ts'],
           // Tests wait for what they expect to see (findBy*/waitFor, 10 s each, src/test/setup.ts);
-          // a whole screen rendered in jsdom on a loaded 2-core machine needs more than 5 s.
-          testTimeout: 30_000,
+          // a whole screen rendered in jsdom on a loaded 2-core machine needs far more than 5 s.
+          // One timeout for all: no test file sets a shorter one of its own.
+          testTimeout: 60_000,
         },
       },
       {

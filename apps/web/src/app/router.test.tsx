@@ -108,7 +108,7 @@ describe('the signed-in shell', () => {
     expect(screen.getByRole('link', { name: 'Go to home' })).toBeTruthy();
   });
 
-  it('shows the API’s message when the frame cannot load', { timeout: 10_000 }, async () => {
+  it('shows the API’s message when the frame cannot load', async () => {
     mockApi({
       'GET /api/me': () => errorResponse(503, 'unavailable', 'The database is not answering.'),
     });
@@ -161,7 +161,7 @@ describe('the staff screen', () => {
     expect(screen.queryByRole('button', { name: `Deactivate ${lead.name}` })).toBeNull();
   });
 
-  it('shows an error with a retry when the list cannot load', { timeout: 10_000 }, async () => {
+  it('shows an error with a retry when the list cannot load', async () => {
     mockApi({
       'GET /api/me': () => json(lead),
       'GET /api/staff': () => errorResponse(500, 'internal', 'The staff list is not available.'),

@@ -64,7 +64,7 @@ function setup({ me = technician, detail, walk }: Setup) {
   };
 }
 
-describe('the case page', { timeout: 15_000 }, () => {
+describe('the case page', () => {
   it('shows a step’s cautions before its instruction', async () => {
     setup({ detail: makeCaseDetail(paths.blockTest) });
     await screen.findByRole('heading', { level: 2, name: 'Block test for combustion gas' }, slow);

@@ -58,7 +58,7 @@ function intakeApi(extra: Parameters<typeof mockApi>[0] = {}) {
   });
 }
 
-describe('a new case', { timeout: 15_000 }, () => {
+describe('a new case', () => {
   it('finds the vehicle by plate, keeps its customer, and opens the case on its first step', async () => {
     const { requests } = intakeApi();
     const { router } = renderApp('/cases/new');

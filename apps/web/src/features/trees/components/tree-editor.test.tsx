@@ -108,41 +108,35 @@ afterEach(() => {
 });
 
 describe('the draft editor', () => {
-  it(
-    'lists every problem, marks its step in the graph, and a problem selects its step',
-    { timeout: 15_000 },
-    async () => {
-      mockApi({
-        'GET /api/me': () => json(makeMe()),
-        [`GET /api/trees/${treeId}/draft`]: () => json(draft(3)),
-      });
-      renderApp(`/trees/${treeId}/draft`);
+  it('lists every problem, marks its step in the graph, and a problem selects its step', async () => {
+    mockApi({
+      'GET /api/me': () => json(makeMe()),
+      [`GET /api/trees/${treeId}/draft`]: () => json(draft(3)),
+    });
+    renderApp(`/trees/${treeId}/draft`);
 
-      // The first test also waits for the lazily loaded editor module.
-      const problems = await screen.findByRole('list', { name: 'Problems' }, { timeout: 10_000 });
-      const items = within(problems).getAllByRole('button');
-      expect(items).toHaveLength(1);
-      expect(items[0]?.textContent).toContain('When does it run hot?');
-      expect(items[0]?.textContent).toMatch(/missing-step/);
+    // The first test also waits for the lazily loaded editor module.
+    const problems = await screen.findByRole('list', { name: 'Problems' }, { timeout: 10_000 });
+    const items = within(problems).getAllByRole('button');
+    expect(items).toHaveLength(1);
+    expect(items[0]?.textContent).toContain('When does it run hot?');
+    expect(items[0]?.textContent).toMatch(/missing-step/);
 
-      // The step is marked in the graph in words, not only by its outline.
-      const graph = screen.getByRole('region', { name: 'Tree graph' });
-      const node = await within(graph).findByRole('button', { name: 'When does it run hot?' });
-      expect(node.textContent).toContain('1 problem');
+    // The step is marked in the graph in words, not only by its outline.
+    const graph = screen.getByRole('region', { name: 'Tree graph' });
+    const node = await within(graph).findByRole('button', { name: 'When does it run hot?' });
+    expect(node.textContent).toContain('1 problem');
 
-      // Select another step, then follow the problem back to the box it is about.
-      fireEvent.click(within(graph).getByRole('button', { name: 'Coolant temperature' }));
-      expect(await screen.findByRole('form', { name: 'Edit “Coolant temperature”' })).toBeTruthy();
-      await userEvent.setup().click(items[0]!);
-      expect(
-        await screen.findByRole('form', { name: 'Edit “When does it run hot?”' }),
-      ).toBeTruthy();
-      const answer = screen.getByRole('group', { name: 'Answer 2: At speed' });
-      const target = within(answer).getByLabelText('Leads to');
-      await waitFor(() => expect(document.activeElement).toBe(target));
-      expect(target.getAttribute('aria-invalid')).toBe('true');
-    },
-  );
+    // Select another step, then follow the problem back to the box it is about.
+    fireEvent.click(within(graph).getByRole('button', { name: 'Coolant temperature' }));
+    expect(await screen.findByRole('form', { name: 'Edit “Coolant temperature”' })).toBeTruthy();
+    await userEvent.setup().click(items[0]!);
+    expect(await screen.findByRole('form', { name: 'Edit “When does it run hot?”' })).toBeTruthy();
+    const answer = screen.getByRole('group', { name: 'Answer 2: At speed' });
+    const target = within(answer).getByLabelText('Leads to');
+    await waitFor(() => expect(document.activeElement).toBe(target));
+    expect(target.getAttribute('aria-invalid')).toBe('true');
+  });
 
   it('checks a formula as it is typed and works it out on sample values', async () => {
     mockApi({
@@ -178,70 +172,66 @@ describe('the draft editor', () => {
     expect(within(branch).getByText('holds (true)')).toBeTruthy();
   });
 
-  it(
-    'saves automatically, and a stale save offers to reload theirs or compare — never overwrites',
-    { timeout: 15_000 },
-    async () => {
-      const theirs = definition({ noTarget: 'fine' });
-      theirs.nodes.fine.title = 'Cooling works as it should';
-      let draftReads = 0;
-      const { requests } = mockApi({
-        'GET /api/me': () => json(makeMe()),
-        [`GET /api/trees/${treeId}/draft`]: () => {
-          draftReads += 1;
-          return json(draftReads === 1 ? draft(3) : draft(5, theirs));
-        },
-        [`PUT /api/trees/${treeId}/draft`]: () =>
-          errorResponse(
-            409,
-            'conflict',
-            'Someone else saved this draft after you opened it (now revision 5). Reload it, or compare your changes first.',
-          ),
-      });
-      renderApp(`/trees/${treeId}/draft`);
-      const user = userEvent.setup();
-      const title = await screen.findByLabelText('Title');
-      await user.type(title, ' (mine)');
+  it('saves automatically, and a stale save offers to reload theirs or compare — never overwrites', async () => {
+    const theirs = definition({ noTarget: 'fine' });
+    theirs.nodes.fine.title = 'Cooling works as it should';
+    let draftReads = 0;
+    const { requests } = mockApi({
+      'GET /api/me': () => json(makeMe()),
+      [`GET /api/trees/${treeId}/draft`]: () => {
+        draftReads += 1;
+        return json(draftReads === 1 ? draft(3) : draft(5, theirs));
+      },
+      [`PUT /api/trees/${treeId}/draft`]: () =>
+        errorResponse(
+          409,
+          'conflict',
+          'Someone else saved this draft after you opened it (now revision 5). Reload it, or compare your changes first.',
+        ),
+    });
+    renderApp(`/trees/${treeId}/draft`);
+    const user = userEvent.setup();
+    const title = await screen.findByLabelText('Title');
+    await user.type(title, ' (mine)');
 
-      const alert = await screen.findByRole('alert', {}, { timeout: 5000 });
-      await waitFor(() =>
-        expect(alert.textContent).toContain('Not saved: someone else saved this draft'),
-      );
-      const puts = requests.filter((request: RecordedRequest) => request.method === 'PUT');
-      expect(puts).toHaveLength(1);
-      expect((puts[0]?.body as { revision: number }).revision).toBe(3);
+    const alert = await screen.findByRole('alert');
+    await waitFor(() =>
+      expect(alert.textContent).toContain('Not saved: someone else saved this draft'),
+    );
+    const puts = requests.filter((request: RecordedRequest) => request.method === 'PUT');
+    expect(puts).toHaveLength(1);
+    expect((puts[0]?.body as { revision: number }).revision).toBe(3);
 
-      // Compare: their copy beside mine, step by step.
-      await user.click(within(alert).getByRole('button', { name: 'Compare' }));
-      const comparison = await screen.findByRole('region', { name: 'Their draft and yours' });
-      expect(
-        within(comparison).getByText('“Cooling works as it should” — differs in: title'),
-      ).toBeTruthy();
-      expect(within(comparison).getByText('“Cooling normal” — differs in: title')).toBeTruthy();
-      expect(
-        within(comparison).getByRole('button', { name: 'Keep mine and save over theirs' }),
-      ).toBeTruthy();
+    // Compare: their copy beside mine, step by step.
+    await user.click(within(alert).getByRole('button', { name: 'Compare' }));
+    const comparison = await screen.findByRole('region', { name: 'Their draft and yours' });
+    expect(
+      within(comparison).getByText('“Cooling works as it should” — differs in: title'),
+    ).toBeTruthy();
+    expect(within(comparison).getByText('“Cooling normal” — differs in: title')).toBeTruthy();
+    expect(
+      within(comparison).getByRole('button', { name: 'Keep mine and save over theirs' }),
+    ).toBeTruthy();
 
-      // Nothing was sent again while the conflict stands, even once the autosave delay is over
-      // (the clock is moved past it rather than waited for).
-      vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout'], shouldAdvanceTime: true });
-      await user.type(screen.getByLabelText('Title'), '!');
-      await vi.advanceTimersByTimeAsync(1000);
-      expect(requests.filter((request) => request.method === 'PUT')).toHaveLength(1);
+    // Nothing was sent again while the conflict stands, even once the autosave delay is over
+    // (the clock is moved past it rather than waited for).
+    vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout'], shouldAdvanceTime: true });
+    await user.type(screen.getByLabelText('Title'), '!');
+    await vi.advanceTimersByTimeAsync(1000);
+    expect(requests.filter((request) => request.method === 'PUT')).toHaveLength(1);
 
-      await user.click(within(comparison).getByRole('button', { name: 'Reload theirs' }));
-      await waitFor(() =>
-        expect(screen.queryByRole('region', { name: 'Their draft and yours' })).toBeNull(),
-      );
-      expect((screen.getByLabelText('Title') as HTMLInputElement).value).toBe(
-        'When does it run hot?',
-      );
-      const graph = screen.getByRole('region', { name: 'Tree graph' });
-      expect(
-        await within(graph).findByRole('button', { name: 'Cooling works as it should' }),
-      ).toBeTruthy();
-    },
-  );
+    await user.click(within(comparison).getByRole('button', { name: 'Reload theirs' }));
+    await waitFor(() =>
+      expect(screen.queryByRole('region', { name: 'Their draft and yours' })).toBeNull(),
+    );
+    expect((screen.getByLabelText('Title') as HTMLInputElement).value).toBe(
+      'When does it run hot?',
+    );
+    const graph = screen.getByRole('region', { name: 'Tree graph' });
+    expect(
+      await within(graph).findByRole('button', { name: 'Cooling works as it should' }),
+    ).toBeTruthy();
+  });
 
   it('adds a step of the chosen kind, shown in the graph and listed as unreachable, until a way on leads there', async () => {
     mockApi({

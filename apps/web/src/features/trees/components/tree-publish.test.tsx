@@ -86,62 +86,58 @@ const report: RegressionReport = {
 };
 
 describe('check and publish', () => {
-  it(
-    'shows the cases whose finding would change and publishes only on “Publish anyway”',
-    { timeout: 15_000 },
-    async () => {
-      const publishes: unknown[] = [];
-      let published = false;
-      mockApi({
-        'GET /api/me': () => json(makeMe()),
-        [`GET /api/trees/${treeId}/draft`]: () => json(draft),
-        [`GET /api/trees/${treeId}`]: () =>
-          json(
-            published
-              ? entry({ draft: null, versions: [version({}), { ...draft, status: 'published' }] })
-              : entry(),
-          ),
-        [`POST /api/trees/${treeId}/draft/regression`]: () => json(report),
-        [`POST /api/trees/${treeId}/draft/publish`]: (request) => {
-          publishes.push(request.body);
-          if (!(request.body as { confirmChangedOutcomes: boolean }).confirmChangedOutcomes) {
-            return errorResponse(
-              409,
-              'conflict',
-              '1 case(s) in the regression set would no longer reach the outcome they reached (C-00012). Confirm to publish anyway.',
-              { 'C-00012': 'different-outcome' },
-            );
-          }
-          published = true;
-          return json({ ...draft, status: 'published', changeNote: 'Fan check first.' });
-        },
-      });
-      renderApp(`/trees/${treeId}/draft/publish`);
-      const user = userEvent.setup();
-      await user.type(
-        await screen.findByLabelText('Change note', {}, { timeout: 10_000 }),
-        'Fan check first.',
-      );
-      await user.click(screen.getByRole('button', { name: 'Publish' }));
+  it('shows the cases whose finding would change and publishes only on “Publish anyway”', async () => {
+    const publishes: unknown[] = [];
+    let published = false;
+    mockApi({
+      'GET /api/me': () => json(makeMe()),
+      [`GET /api/trees/${treeId}/draft`]: () => json(draft),
+      [`GET /api/trees/${treeId}`]: () =>
+        json(
+          published
+            ? entry({ draft: null, versions: [version({}), { ...draft, status: 'published' }] })
+            : entry(),
+        ),
+      [`POST /api/trees/${treeId}/draft/regression`]: () => json(report),
+      [`POST /api/trees/${treeId}/draft/publish`]: (request) => {
+        publishes.push(request.body);
+        if (!(request.body as { confirmChangedOutcomes: boolean }).confirmChangedOutcomes) {
+          return errorResponse(
+            409,
+            'conflict',
+            '1 case(s) in the regression set would no longer reach the outcome they reached (C-00012). Confirm to publish anyway.',
+            { 'C-00012': 'different-outcome' },
+          );
+        }
+        published = true;
+        return json({ ...draft, status: 'published', changeNote: 'Fan check first.' });
+      },
+    });
+    renderApp(`/trees/${treeId}/draft/publish`);
+    const user = userEvent.setup();
+    await user.type(
+      await screen.findByLabelText('Change note', {}, { timeout: 10_000 }),
+      'Fan check first.',
+    );
+    await user.click(screen.getByRole('button', { name: 'Publish' }));
 
-      const warning = await screen.findByRole('alert');
-      expect(warning.textContent).toContain('C-00012');
-      expect(within(warning).getByText('Different finding')).toBeTruthy();
-      // The replay that runs with the refusal says what the case reaches now.
-      expect(
-        await within(warning).findByText(/Fan stage not switching → Thermostat sticking closed/),
-      ).toBeTruthy();
-      expect(publishes).toHaveLength(1);
+    const warning = await screen.findByRole('alert');
+    expect(warning.textContent).toContain('C-00012');
+    expect(within(warning).getByText('Different finding')).toBeTruthy();
+    // The replay that runs with the refusal says what the case reaches now.
+    expect(
+      await within(warning).findByText(/Fan stage not switching → Thermostat sticking closed/),
+    ).toBeTruthy();
+    expect(publishes).toHaveLength(1);
 
-      await user.click(within(warning).getByRole('button', { name: 'Publish anyway' }));
-      expect(await screen.findByText('Version 2 published')).toBeTruthy();
-      expect(publishes[1]).toEqual({
-        revision: 7,
-        changeNote: 'Fan check first.',
-        confirmChangedOutcomes: true,
-      });
-    },
-  );
+    await user.click(within(warning).getByRole('button', { name: 'Publish anyway' }));
+    expect(await screen.findByText('Version 2 published')).toBeTruthy();
+    expect(publishes[1]).toEqual({
+      revision: 7,
+      changeNote: 'Fan check first.',
+      confirmChangedOutcomes: true,
+    });
+  });
 
   it('replays finished cases in a table and saves the chosen regression set', async () => {
     const { requests } = mockApi({
