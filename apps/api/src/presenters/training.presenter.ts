@@ -113,13 +113,7 @@ export function presentCasebook(parts: {
           .sort((a, b) => a.position - b.position)
           .map((item) => item.trainingCaseId)
           .filter((id) => available.has(id)),
-        signOff: signOff
-          ? {
-              signedAt: signOff.signedAt.toISOString(),
-              signedBy: { id: signOff.signedBy, name: signOff.signer?.name ?? 'The lead' },
-              note: signOff.note,
-            }
-          : null,
+        signOff: signOff ? presentSignOff(signOff) : null,
       };
     }),
     cases: stories.map((story) => ({
@@ -127,6 +121,18 @@ export function presentCasebook(parts: {
       attempts: mine.get(story.entry.id)?.attempts ?? 0,
       bestScore: mine.get(story.entry.id)?.best ?? null,
     })),
+  };
+}
+
+/** A lead's sign-off of a course: when, by whom, and the note. */
+export function presentSignOff(
+  signOff: TrainingSignOff,
+  signer: User | null = signOff.signer ?? null,
+) {
+  return {
+    signedAt: signOff.signedAt.toISOString(),
+    signedBy: { id: signOff.signedBy, name: signer?.name ?? 'The lead' },
+    note: signOff.note,
   };
 }
 

@@ -14,6 +14,7 @@ import {
   User,
 } from '../../db/models/index';
 import type { Actor } from '../../policies/permissions';
+import { presentSignOff } from '../../presenters/training.presenter';
 
 const weakSpotCount = 3;
 
@@ -94,13 +95,7 @@ export async function loadApprenticeProgress(options: {
         title: course.title,
         completedCases: items.filter((item) => best.has(item.trainingCaseId)).length,
         totalCases: items.length,
-        signOff: signOff
-          ? {
-              signedAt: signOff.signedAt.toISOString(),
-              signedBy: { id: signOff.signedBy, name: signOff.signer?.name ?? 'Unknown' },
-              note: signOff.note,
-            }
-          : null,
+        signOff: signOff ? presentSignOff(signOff) : null,
       };
     }),
     history: attempts.map((a) => ({

@@ -5,6 +5,7 @@ import { TrainingCourse, TrainingSignOff, User } from '../../db/models/index';
 import { AppError, conflict, notFound } from '../../errors';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
+import { presentSignOff } from '../../presenters/training.presenter';
 
 export async function signOffCourse(options: {
   actor: Actor;
@@ -36,11 +37,7 @@ export async function signOffCourse(options: {
       note: request.note ?? null,
     });
     const signer = await User.findByPk(actor.userId, { attributes: ['id', 'name'] });
-    return {
-      signedAt: signed.signedAt.toISOString(),
-      signedBy: { id: actor.userId, name: signer?.name ?? 'Unknown' },
-      note: signed.note,
-    };
+    return presentSignOff(signed, signer);
   } catch (error) {
     if (error instanceof UniqueConstraintError)
       throw conflict(`${apprentice.name} is already signed off for “${course.title}”.`);
