@@ -103,10 +103,21 @@ export const caseDetailSchema = z.object({
 });
 export type CaseDetail = z.infer<typeof caseDetailSchema>;
 
-/** POST /api/cases/:caseId/walk */
+/** What an answer may change on the case besides its walk, as GET /api/cases/:caseId shows it. */
+export const caseChangesSchema = caseDetailSchema.pick({
+  status: true,
+  updatedAt: true,
+  diagnosedAt: true,
+  can: true,
+  findings: true,
+});
+export type CaseChanges = z.infer<typeof caseChangesSchema>;
+
+/** POST /api/cases/:caseId/walk: the walk and the case as they stand after the answer. */
 export const walkEventResponseSchema = z.object({
   walk: walkSummarySchema,
   /** True when the idempotency key had been stored before: nothing new was applied. */
   repeated: z.boolean(),
+  case: caseChangesSchema,
 });
 export type WalkEventResponse = z.infer<typeof walkEventResponseSchema>;

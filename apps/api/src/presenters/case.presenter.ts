@@ -1,6 +1,7 @@
 // Cases as the API returns them: a line in the list, and the whole case for its page.
 import type {
   CaseAttachment,
+  CaseChanges,
   CaseDetail,
   CaseNote,
   CaseSummary,
@@ -83,6 +84,39 @@ export function presentNote(e: CaseEvent): CaseNote {
   };
 }
 
+/** What the signed-in person may do with the case as it stands. */
+function presentCaseAbilities(options: {
+  kase: DiagnosticCase;
+  walk: WalkSummary;
+  hasFindings: boolean;
+  actor: Actor;
+}): CaseDetail['can'] {
+  const { kase, walk, actor } = options;
+  const walkable = can(actor, 'cases.walk') && isOpenToWalking(kase);
+  return {
+    walk: walkable,
+    editFindings: can(actor, 'findings.edit') && isOpenToFindingsEditing(kase),
+    markDiagnosed: walkable && walk.status === 'reached-outcome' && options.hasFindings,
+  };
+}
+
+/** The parts of a case an answer can change, shaped as in the case detail. */
+export function presentCaseChanges(options: {
+  kase: DiagnosticCase;
+  walk: WalkSummary;
+  findings: { finding: Finding; editor: User | null } | null;
+  actor: Actor;
+}): CaseChanges {
+  const { kase, walk, findings, actor } = options;
+  return {
+    status: kase.status,
+    updatedAt: kase.updatedAt.toISOString(),
+    diagnosedAt: kase.diagnosedAt ? kase.diagnosedAt.toISOString() : null,
+    can: presentCaseAbilities({ kase, walk, hasFindings: findings !== null, actor }),
+    findings: findings ? presentFindings(findings.finding, findings.editor) : null,
+  };
+}
+
 export function presentCaseDetail(options: {
   kase: DiagnosticCase;
   walk: WalkSummary;
@@ -91,11 +125,11 @@ export function presentCaseDetail(options: {
   findings: { finding: Finding; editor: User | null } | null;
   actor: Actor;
 }): CaseDetail {
-  const { kase, walk, actor } = options;
+  const { kase, walk } = options;
   const version = kase.treeVersion;
   if (!kase.vehicle || !version)
     throw new Error('presentCaseDetail needs vehicle and tree version loaded.');
-  const walkable = can(actor, 'cases.walk') && isOpenToWalking(kase);
+  const changes = presentCaseChanges(options);
   return {
     id: kase.id,
     number: kase.number,
@@ -109,8 +143,8 @@ export function presentCaseDetail(options: {
     customer: kase.customer ? presentCustomer(kase.customer) : null,
     assignee: person(kase.assignee),
     createdAt: kase.createdAt.toISOString(),
-    updatedAt: kase.updatedAt.toISOString(),
-    diagnosedAt: kase.diagnosedAt ? kase.diagnosedAt.toISOString() : null,
+    updatedAt: changes.updatedAt,
+    diagnosedAt: changes.diagnosedAt,
     tree: {
       treeId: version.treeId,
       versionId: version.id,
@@ -121,13 +155,7 @@ export function presentCaseDetail(options: {
     walk,
     notes: options.notes.map(presentNote),
     attachments: options.attachments.map((a) => presentAttachment(a.attachment, a.uploader)),
-    findings: options.findings
-      ? presentFindings(options.findings.finding, options.findings.editor)
-      : null,
-    can: {
-      walk: walkable,
-      editFindings: can(actor, 'findings.edit') && isOpenToFindingsEditing(kase),
-      markDiagnosed: walkable && walk.status === 'reached-outcome' && options.findings !== null,
-    },
+    findings: changes.findings,
+    can: changes.can,
   };
 }

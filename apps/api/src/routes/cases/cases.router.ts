@@ -73,7 +73,11 @@ export function casesRouter(deps: { store: FileStore; mail: MailContext }) {
           event: body.event,
           idempotencyKey: body.idempotencyKey,
         });
-        const response: WalkEventResponse = { walk: result.walk, repeated: result.repeated };
+        const response: WalkEventResponse = {
+          walk: result.walk,
+          repeated: result.repeated,
+          case: result.case,
+        };
         res.status(result.repeated ? 200 : 201).json(response);
       },
     ),

@@ -42,12 +42,24 @@ describe('walking a case', () => {
   it('reaches the stuck-shroud outcome step by step and drafts the findings', async () => {
     const { tech, caseId } = await openCase();
     let position = 0;
+    const replies: { case: Record<string, unknown> }[] = [];
     for (const step of stuckShroudPath) {
       const res = await answer(tech, caseId, step, position);
       expect(res.status, `${step.nodeId}: ${res.text}`).toBe(201);
       position = res.body.walk.position;
+      replies.push(res.body);
     }
     const kase = await tech.get(`/api/cases/${caseId}`);
+    // Every reply says what the answer changed, as the case page would read it afterwards.
+    expect(replies[0]!.case).toMatchObject({
+      status: 'in_diagnosis',
+      diagnosedAt: null,
+      findings: null,
+      can: { walk: true, editFindings: true, markDiagnosed: false },
+    });
+    expect(replies.at(-2)!.case.findings).toBeNull();
+    const { status, updatedAt, diagnosedAt, can, findings } = kase.body;
+    expect(replies.at(-1)!.case).toEqual({ status, updatedAt, diagnosedAt, can, findings });
     expect(kase.body.status).toBe('in_diagnosis');
     expect(kase.body.walk).toMatchObject({
       status: 'reached-outcome',
@@ -95,6 +107,7 @@ describe('walking a case', () => {
     expect(retried.status).toBe(200);
     expect(retried.body.repeated).toBe(true);
     expect(retried.body.walk.position).toBe(1);
+    expect(retried.body.case).toEqual(first.body.case);
     // The same answer again with a new key is a duplicate submit from a stale screen.
     const duplicate = await answer(tech, caseId, stuckShroudPath[0]!, 0);
     expect(duplicate.status).toBe(409);

@@ -2,11 +2,17 @@
 // replayed on the pinned tree, and the event is accepted only if the walk is where the client
 // says it is; it is stored before the response, so the next step never shows for an answer that
 // was not kept. A retry with the same idempotency key gets the stored result, not a second answer.
+// The reply carries what the answer changed on the case (status, findings, what the person may
+// do next), so the page never has to read the whole case again.
+import type { Transaction } from 'sequelize';
+import type { CaseChanges } from '@heatpath/contracts';
 import { applyWalkEvent, describeWalk, replayWalk } from '@heatpath/fault-tree';
 import type { CompiledTree, WalkEvent, WalkSummary } from '@heatpath/fault-tree';
-import { TreeVersion } from '../../db/models/index';
+import { Finding, TreeVersion, User } from '../../db/models/index';
+import type { DiagnosticCase } from '../../db/models/index';
 import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
+import { presentCaseChanges } from '../../presenters/case.presenter';
 import { compiledPublishedTree } from '../../lib/compiled-trees';
 import { isOpenToWalking, statusAfterWalking } from '../../policies/case-policy';
 import { assertCan } from '../../policies/permissions';
@@ -40,6 +46,29 @@ export interface SubmitResult {
   walk: WalkSummary;
   /** True when this request repeated an already stored one (same idempotency key). */
   repeated: boolean;
+  /** The case as it stands after the answer. */
+  case: CaseChanges;
+}
+
+async function caseChanges(
+  actor: Actor,
+  kase: DiagnosticCase,
+  walk: WalkSummary,
+  transaction: Transaction,
+): Promise<CaseChanges> {
+  const finding = await Finding.findOne({
+    where: { caseId: kase.id },
+    include: [{ model: User, as: 'editor' }],
+    transaction,
+  });
+  return presentCaseChanges({
+    kase,
+    walk,
+    findings: finding
+      ? { finding, editor: (finding as Finding & { editor?: User }).editor ?? null }
+      : null,
+    actor,
+  });
 }
 
 export async function submitWalkEvent(options: {
@@ -72,7 +101,8 @@ export async function submitWalkEvent(options: {
           'This request repeats an earlier one (the same idempotency key) with a different answer. The earlier answer is kept; send a new answer as a new request.',
         );
       }
-      return { walk: summary(), repeated: true };
+      const walk = summary();
+      return { walk, repeated: true, case: await caseChanges(actor, kase, walk, transaction) };
     }
 
     if (!isOpenToWalking(kase)) {
@@ -122,6 +152,6 @@ export async function submitWalkEvent(options: {
       transaction,
     });
     await draftFindings({ kase, walk, actorId: actor.userId, transaction });
-    return { walk, repeated: false };
+    return { walk, repeated: false, case: await caseChanges(actor, kase, walk, transaction) };
   });
 }
