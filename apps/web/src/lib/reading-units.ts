@@ -1,7 +1,8 @@
 // The person's preferred units applied to readings: which unit a reading box starts in (the one
 // rule for the case page, Try it and the temperature log's "use in the walk"), the units a box
-// offers, and how a computed value is shown in the person's own units. Conversions are the
-// fault-tree package's (mathjs), never done by hand here.
+// offers, the preference a unit chosen in a box stands for (the inverse of wantedUnit), and how a
+// computed value is shown in the person's own units. Conversions are the fault-tree package's
+// (mathjs), never done by hand here.
 import type { UnitPreferences } from '@heatpath/contracts';
 import {
   formatComputed,
@@ -33,6 +34,28 @@ export function preferredUnit(quantity: Quantity, preferences: UnitPreferences):
   const info = quantityInfo[quantity];
   const wanted = wantedUnit(quantity, preferences);
   return wanted && info.entryUnits.includes(wanted) ? wanted : info.canonical;
+}
+
+/**
+ * The preference a unit chosen for a quantity stands for (°F → temperature F), so the next box of
+ * that quantity starts in it; empty where no preference names the unit (kPa, seconds).
+ */
+export function preferenceForUnit(quantity: Quantity, unit: UnitCode): Partial<UnitPreferences> {
+  switch (quantity) {
+    case 'temperature':
+    case 'temperatureDelta':
+      return unit === 'degF'
+        ? { temperature: 'F' }
+        : unit === 'degC' || unit === 'K'
+          ? { temperature: 'C' }
+          : {};
+    case 'pressure':
+      return unit === 'psi' || unit === 'bar' ? { pressure: unit } : {};
+    case 'volume':
+      return unit === 'qt' || unit === 'L' ? { volume: unit } : {};
+    default:
+      return {};
+  }
 }
 
 export function unitOptions(quantity: Quantity): { value: UnitCode; label: string }[] {

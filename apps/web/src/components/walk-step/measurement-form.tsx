@@ -3,6 +3,10 @@
 // values, and the step it would lead to). The readings are sent as typed, with their units; the
 // server converts them, so a reading in °F is stored as entered and in °C. The feature decides
 // what a saved answer does: the case page sends it, Try it applies it in the browser.
+// With a `draftId` the typed readings and chosen units are kept on the tablet (lib/reading-drafts)
+// as they change, so a reload finds them again; the draft goes once the step is answered. A unit
+// chosen in a box becomes the person's preference, so the next step's boxes start in it; a
+// draft's own units win over the preference for that step.
 import type { UnitPreferences } from '@heatpath/contracts';
 import {
   formatNumber,
@@ -17,16 +21,20 @@ import {
   type WalkEvent,
   type WalkSnapshot,
 } from '@heatpath/fault-tree';
-import { useMemo, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { readNumber } from '../../lib/read-number';
+import { clearReadingDraft, loadReadingDraft, saveReadingDraft } from '../../lib/reading-drafts';
 import {
   computedDisplay,
+  preferenceForUnit,
   preferredUnit,
   unitOptions,
   unitsAsEntered,
 } from '../../lib/reading-units';
+import { useUpdateUnitPreferences } from '../../lib/unit-preferences';
 import { Button } from '../ui/button';
 import { TextField } from '../ui/field';
+import { BlockedReason } from './blocked-reason';
 
 /** The compiled tree and the walk so far, from which readings are previewed as they are typed. */
 export interface WalkModel {
@@ -38,11 +46,18 @@ interface MeasurementFormProps {
   node: MeasurementNode & { id: string };
   position: number;
   model: WalkModel | null;
-  /** The person's units; without them (Try it) boxes start in the unit the tree names. */
+  /**
+   * The person's units; without them (Try it) boxes start in the unit the tree names, and a unit
+   * chosen is not saved as a preference.
+   */
   preferences?: UnitPreferences;
   disabled?: boolean;
   /** What the server said was wrong with each reading of the last attempt. */
   refusedFields?: Readonly<Record<string, string>>;
+  /** Where the typed readings are kept until answered (readingDraftId); none in Try it. */
+  draftId?: string;
+  /** Why the step cannot be answered yet; the button is disabled while it is set. */
+  blockedReason?: string | null;
   onAnswer: (event: WalkEvent, label: string) => void;
 }
 
@@ -64,20 +79,58 @@ export function MeasurementForm({
   preferences,
   disabled = false,
   refusedFields = {},
+  draftId,
+  blockedReason = null,
   onAnswer,
 }: MeasurementFormProps) {
-  const [typed, setTyped] = useState<Record<string, string>>({});
+  const [draft] = useState(() => (draftId ? loadReadingDraft(draftId) : null));
+  const [typed, setTyped] = useState<Record<string, string>>(() =>
+    Object.fromEntries(
+      node.inputs.flatMap((input) => {
+        const value = draft?.values[input.name];
+        return value === undefined ? [] : [[input.name, value]];
+      }),
+    ),
+  );
   const [units, setUnits] = useState<Record<string, UnitCode>>(() =>
     Object.fromEntries(
-      node.inputs.map((input) => [
-        input.name,
-        preferences ? preferredUnit(input.quantity, preferences) : input.unit,
-      ]),
+      node.inputs.map((input) => {
+        const drafted = draft?.units[input.name];
+        const offered = unitOptions(input.quantity).some((option) => option.value === drafted);
+        return [
+          input.name,
+          drafted && offered
+            ? drafted
+            : preferences
+              ? preferredUnit(input.quantity, preferences)
+              : input.unit,
+        ];
+      }),
     ),
   );
   const [tried, setTried] = useState(false);
   // Server refusals belong to the readings that were sent; editing a box clears its own.
   const [edited, setEdited] = useState<ReadonlySet<string>>(new Set());
+  const savePreference = useUpdateUnitPreferences();
+  const reasonId = useId();
+
+  // The draft follows every change the person makes (not the boxes' starting state).
+  const [changed, setChanged] = useState(false);
+  useEffect(() => {
+    if (draftId && changed) saveReadingDraft(draftId, { values: typed, units });
+  }, [draftId, changed, typed, units]);
+
+  // Answered: the draft goes when the step is left. A refusal or a new edit keeps it.
+  const answered = useRef(false);
+  useEffect(() => {
+    if (Object.keys(refusedFields).length > 0) answered.current = false;
+  }, [refusedFields]);
+  useEffect(() => {
+    if (!draftId) return;
+    return () => {
+      if (answered.current) clearReadingDraft(draftId);
+    };
+  }, [draftId]);
 
   const readings = useMemo(() => {
     const entered: Record<string, Reading> = {};
@@ -117,11 +170,24 @@ export function MeasurementForm({
 
   const change = (name: string, update: () => void) => {
     update();
+    answered.current = false;
+    setChanged(true);
     setEdited((before) => new Set(before).add(name));
+  };
+
+  const chooseUnit = (input: MeasurementInput, unit: UnitCode) => {
+    change(input.name, () => setUnits((before) => ({ ...before, [input.name]: unit })));
+    if (!preferences) return;
+    const wanted = preferenceForUnit(input.quantity, unit);
+    const differs = Object.entries(wanted).some(
+      ([key, value]) => preferences[key as keyof UnitPreferences] !== value,
+    );
+    if (differs) savePreference.mutate({ units: wanted });
   };
 
   const submit = () => {
     setTried(true);
+    if (blockedReason) return;
     const complete = node.inputs.every((input) => readings[input.name] !== undefined);
     const clean = node.inputs.every((input) => !preview?.fields[input.name]);
     if (!complete || !clean) return;
@@ -132,6 +198,7 @@ export function MeasurementForm({
       })
       .join(', ');
     setEdited(new Set());
+    answered.current = true;
     onAnswer(
       { type: 'answer.measurement', nodeId: node.id, position, readings },
       node.inputs.length > 0 ? `Readings: ${label}` : 'Continue',
@@ -215,10 +282,7 @@ export function MeasurementForm({
                     disabled={disabled}
                     onChange={(event) => {
                       const chosen = options.find((option) => option.value === event.target.value);
-                      if (chosen)
-                        change(input.name, () =>
-                          setUnits((before) => ({ ...before, [input.name]: chosen.value })),
-                        );
+                      if (chosen) chooseUnit(input, chosen.value);
                     }}
                     className="min-h-touch shrink-0 rounded-control border-2 border-line-strong bg-sunken px-3 text-base font-semibold"
                   >
@@ -269,8 +333,15 @@ export function MeasurementForm({
 
       {/* On a narrow screen long cautions can push the button below the edge; it then rides along
           at the bottom (above the phone's menu bar) while the boxes are in view. */}
-      <div className="sticky bottom-20 z-10 -mx-1 rounded-control bg-surface p-1 md:bottom-2 lg:static lg:m-0 lg:p-0">
-        <Button type="submit" size="large" disabled={disabled} className="w-full sm:w-auto">
+      <div className="sticky bottom-20 z-10 -mx-1 flex flex-col gap-2 rounded-control bg-surface p-1 md:bottom-2 lg:static lg:m-0 lg:p-0">
+        {blockedReason ? <BlockedReason id={reasonId} reason={blockedReason} /> : null}
+        <Button
+          type="submit"
+          size="large"
+          disabled={disabled || Boolean(blockedReason)}
+          aria-describedby={blockedReason ? reasonId : undefined}
+          className="w-full sm:w-auto sm:self-start"
+        >
           {buttonLabel}
         </Button>
       </div>

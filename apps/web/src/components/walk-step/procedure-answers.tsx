@@ -1,9 +1,12 @@
 // A procedure's two answers, "Done" and "Could not do", with an optional note that is stored on
 // the step with the answer (where the feature keeps notes). The feature decides what an answer does.
+// While the step cannot be answered yet (a required photo is missing) the two answers are disabled
+// and say why; the note can still be written.
 import type { ProcedureNode, ProcedureResult, WalkEvent } from '@heatpath/fault-tree';
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { Button } from '../ui/button';
 import { TextAreaField } from '../ui/field';
+import { BlockedReason } from './blocked-reason';
 
 interface ProcedureAnswersProps {
   node: ProcedureNode & { id: string };
@@ -12,6 +15,8 @@ interface ProcedureAnswersProps {
   pendingResult?: ProcedureResult | null;
   /** Offer "Add a note"; off where nothing keeps it (Try it). */
   withNote?: boolean;
+  /** Why the step cannot be answered yet; "Done" and "Could not do" are disabled while it is set. */
+  blockedReason?: string | null;
   onAnswer: (event: WalkEvent, label: string, note?: string) => void;
 }
 
@@ -21,8 +26,12 @@ export function ProcedureAnswers({
   disabled = false,
   pendingResult = null,
   withNote = true,
+  blockedReason = null,
   onAnswer,
 }: ProcedureAnswersProps) {
+  const reasonId = useId();
+  const answerDisabled = disabled || Boolean(blockedReason);
+  const describedBy = blockedReason ? reasonId : undefined;
   const [note, setNote] = useState('');
   // Folded until wanted, so the two answers stay in view beside a long instruction.
   const [writing, setWriting] = useState(false);
@@ -30,11 +39,13 @@ export function ProcedureAnswers({
     onAnswer({ type: 'answer.procedure', nodeId: node.id, position, result }, label, note);
   return (
     <div className="flex flex-col gap-4">
+      {blockedReason ? <BlockedReason id={reasonId} reason={blockedReason} /> : null}
       <div className="grid gap-3 sm:grid-cols-2">
         {node.done ? (
           <Button
             size="large"
-            disabled={disabled}
+            disabled={answerDisabled}
+            aria-describedby={describedBy}
             onClick={() => send('done', 'Done')}
             busy={pendingResult === 'done'}
             busyLabel="Saving “Done”…"
@@ -46,7 +57,8 @@ export function ProcedureAnswers({
           <Button
             size="large"
             variant="secondary"
-            disabled={disabled}
+            disabled={answerDisabled}
+            aria-describedby={describedBy}
             onClick={() => send('could-not-do', 'Could not do')}
             busy={pendingResult === 'could-not-do'}
             busyLabel="Saving “Could not do”…"

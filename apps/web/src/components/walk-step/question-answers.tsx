@@ -1,8 +1,10 @@
 // A question's choices as large buttons, one tap each; the button is named by the choice alone,
 // with its hint read as a description. The feature decides what an answer does (the case page
-// sends it; Try it applies it in the browser).
+// sends it; Try it applies it in the browser). While the step cannot be answered yet (a required
+// photo is missing) the buttons are disabled and say why.
 import type { QuestionNode, WalkEvent } from '@heatpath/fault-tree';
 import { useId } from 'react';
+import { BlockedReason } from './blocked-reason';
 
 interface QuestionAnswersProps {
   node: QuestionNode & { id: string };
@@ -10,6 +12,8 @@ interface QuestionAnswersProps {
   disabled?: boolean;
   /** The choice waiting to be stored, marked while it is sent. */
   pendingChoiceId?: string | null;
+  /** Why the step cannot be answered yet; the buttons are disabled while it is set. */
+  blockedReason?: string | null;
   onAnswer: (event: WalkEvent, label: string) => void;
 }
 
@@ -18,11 +22,14 @@ export function QuestionAnswers({
   position,
   disabled = false,
   pendingChoiceId = null,
+  blockedReason = null,
   onAnswer,
 }: QuestionAnswersProps) {
   const baseId = useId();
+  const reasonId = `${baseId}-blocked`;
   return (
     <div role="group" aria-label="Answers" className="grid gap-3">
+      {blockedReason ? <BlockedReason id={reasonId} reason={blockedReason} /> : null}
       {node.choices.map((choice, index) => {
         const labelId = `${baseId}-${index}-label`;
         const hintId = `${baseId}-${index}-hint`;
@@ -31,9 +38,13 @@ export function QuestionAnswers({
           <button
             key={choice.id}
             type="button"
-            disabled={disabled}
+            disabled={disabled || Boolean(blockedReason)}
             aria-labelledby={labelId}
-            aria-describedby={choice.hint ? hintId : undefined}
+            aria-describedby={
+              [choice.hint ? hintId : null, blockedReason ? reasonId : null]
+                .filter(Boolean)
+                .join(' ') || undefined
+            }
             onClick={() =>
               onAnswer(
                 { type: 'answer.choice', nodeId: node.id, position, choiceId: choice.id },
