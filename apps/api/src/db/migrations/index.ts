@@ -8,6 +8,7 @@ import * as m0004 from './0004-repair-orders-and-mail';
 import * as m0005 from './0005-temperature-logs';
 import * as m0006 from './0006-training-casebook';
 import * as m0007 from './0007-sessions';
+import * as m0008 from './0008-attachment-idempotency';
 
 export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0001-foundation', ...m0001 },
@@ -17,4 +18,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0005-temperature-logs', ...m0005 },
   { name: '0006-training-casebook', ...m0006 },
   { name: '0007-sessions', ...m0007 },
+  { name: '0008-attachment-idempotency', ...m0008 },
 ].map(({ name, up, down }) => ({ name, up, down }));

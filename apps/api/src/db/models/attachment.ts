@@ -31,6 +31,10 @@ export class Attachment extends Model<
   declare width: number | null;
   declare height: number | null;
   declare uploadedBy: ForeignKey<User['id']>;
+  /** The sender's key for this upload (unique per case), when it came with one. */
+  declare idempotencyKey: CreationOptional<string | null>;
+  /** Hex SHA-256 of the content, kept for uploads with an idempotency key. */
+  declare sha256: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -47,6 +51,8 @@ export class Attachment extends Model<
         byteSize: { type: DataTypes.INTEGER, allowNull: false },
         width: { type: DataTypes.INTEGER, allowNull: true },
         height: { type: DataTypes.INTEGER, allowNull: true },
+        idempotencyKey: { type: DataTypes.STRING(100), allowNull: true, defaultValue: null },
+        sha256: { type: DataTypes.CHAR(64), allowNull: true, defaultValue: null },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

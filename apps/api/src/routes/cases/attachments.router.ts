@@ -1,4 +1,5 @@
-// /api/cases/:caseId/attachments: upload (multipart, one file) and download of photos and files.
+// /api/cases/:caseId/attachments: upload (multipart, one file, an optional idempotency key) and
+// download of photos and files.
 import { Router } from 'express';
 import type { RequestHandler } from 'express';
 import multer from 'multer';
@@ -56,15 +57,18 @@ export function attachmentsRouter(deps: { store: FileStore }) {
       async ({ params: { caseId }, body: fields }, res, req) => {
         if (!req.file)
           throw new AppError('bad_request', 'Choose a file to attach (form field "file").');
-        const attachment = await addAttachment({
+        const added = await addAttachment({
           actor: actorOf(res),
           caseId,
           nodeId: fields.nodeId ?? null,
           photoOnly: fields.photoOnly === 'true',
           file: { originalName: req.file.originalname, bytes: req.file.buffer },
           store: deps.store,
+          idempotencyKey: fields.idempotencyKey ?? null,
         });
-        res.status(201).json(presentAttachment(attachment, userOf(res)));
+        res
+          .status(added.repeated ? 200 : 201)
+          .json(presentAttachment(added.attachment, added.uploader ?? userOf(res)));
       },
     ),
   );

@@ -1,5 +1,6 @@
 // Uploads: content sniffed (not the name), size and type limits, photo-only steps, thumbnails,
-// nothing half-stored, and isolation.
+// nothing half-stored, isolation, and idempotency keys (a queued photo sent again).
+import { randomUUID } from 'node:crypto';
 import { readdir } from 'node:fs/promises';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -166,5 +167,79 @@ describe('attachments', () => {
     const res = await tech.post(`/api/cases/${caseId}/attachments`).field('nodeId', 'x');
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/Choose a file/);
+  });
+});
+
+describe('attachments with an idempotency key', () => {
+  const send = (
+    agent: Awaited<ReturnType<typeof openCase>>['tech'],
+    caseId: string,
+    key: string,
+    file: Buffer,
+  ) =>
+    agent
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('nodeId', 'locate-visible-leak')
+      .field('idempotencyKey', key)
+      .attach('file', file, 'leak.png');
+
+  it('stores the same file sent twice under one key once: 201, then 200 with the same JSON', async () => {
+    const { tech, caseId } = await openCase();
+    const key = randomUUID();
+    const photo = await png();
+    const before = await filesOnDisk();
+    const first = await send(tech, caseId, key, photo);
+    expect(first.status, first.text).toBe(201);
+    const again = await send(tech, caseId, key, photo);
+    expect(again.status, again.text).toBe(200);
+    expect(again.body).toEqual(first.body);
+    expect(await Attachment.count({ where: { caseId } })).toBe(1);
+    // The original and its thumbnail, once.
+    expect((await filesOnDisk()).length - before.length).toBe(2);
+    const audit = await tech.get(`/api/cases/${caseId}/events`);
+    expect(audit.body.events.filter((e: { kind: string }) => e.kind === 'attachment')).toHaveLength(
+      1,
+    );
+  });
+
+  it('refuses another file under a key already used (409) and keeps the first', async () => {
+    const { tech, caseId } = await openCase();
+    const key = randomUUID();
+    const first = await send(tech, caseId, key, await png());
+    expect(first.status, first.text).toBe(201);
+    const other = await sharp({
+      create: { width: 640, height: 480, channels: 3, background: '#2030b0' },
+    })
+      .png()
+      .toBuffer();
+    const before = await filesOnDisk();
+    const refused = await send(tech, caseId, key, other);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toMatch(/different file/);
+    expect(await filesOnDisk()).toEqual(before);
+    const kase = await tech.get(`/api/cases/${caseId}`);
+    expect(kase.body.attachments.map((a: { id: string }) => a.id)).toEqual([first.body.id]);
+  });
+
+  it('stores one row when the same upload is sent twice at once', async () => {
+    const { tech, caseId } = await openCase();
+    const key = randomUUID();
+    const photo = await png();
+    const before = await filesOnDisk();
+    const [a, b] = await Promise.all([
+      send(tech, caseId, key, photo),
+      send(tech, caseId, key, photo),
+    ]);
+    expect([a.status, b.status].sort()).toEqual([200, 201]);
+    expect(a.body).toEqual(b.body);
+    expect(await Attachment.count({ where: { caseId } })).toBe(1);
+    expect((await filesOnDisk()).length - before.length).toBe(2);
+  });
+
+  it('refuses a key too short to be one', async () => {
+    const { tech, caseId } = await openCase();
+    const res = await send(tech, caseId, 'abc', await png());
+    expect(res.status).toBe(400);
+    expect(await Attachment.count({ where: { caseId } })).toBe(0);
   });
 });

@@ -1,6 +1,6 @@
 // Request shapes for /api/cases.
 import { z } from 'zod';
-import { repairOrderFormats } from '@heatpath/contracts';
+import { idempotencyKeySchema, repairOrderFormats } from '@heatpath/contracts';
 
 export {
   addNoteRequestSchema,
@@ -24,6 +24,8 @@ export const attachmentParamsSchema = caseParamsSchema.extend({
 export const attachmentFieldsSchema = z.object({
   nodeId: z.string().max(80).optional(),
   photoOnly: z.enum(['true', 'false']).optional(),
+  /** Optional: the same key again with the same file returns the stored attachment. */
+  idempotencyKey: idempotencyKeySchema.optional(),
 });
 
 export const exportParamsSchema = caseParamsSchema.extend({

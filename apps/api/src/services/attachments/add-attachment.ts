@@ -1,10 +1,13 @@
 // Stores an uploaded photo or file for a case (or one of its steps). The content is sniffed,
 // never trusted from the name or the browser; bytes are stored first and the row written last,
 // and a failure removes what was stored, so no record ever points at a missing file.
-import { randomUUID } from 'node:crypto';
+// An upload may carry an idempotency key (a tablet's queue sends one): the same key with the
+// same content again gets the stored attachment back; with other content it is refused.
+import { createHash, randomUUID } from 'node:crypto';
+import type { Transaction } from 'sequelize';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { Attachment } from '../../db/models/index';
+import { Attachment, User } from '../../db/models/index';
 import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
 import type { FileStore } from '../../lib/storage/file-store';
@@ -86,6 +89,44 @@ async function assertDecodableSize(bytes: Buffer): Promise<void> {
   }
 }
 
+async function removeAll(store: FileStore, keys: readonly string[]): Promise<void> {
+  await Promise.all(keys.map((k) => store.remove(k).catch(() => undefined)));
+}
+
+export interface AddedAttachment {
+  attachment: Attachment;
+  /** For a repeat, who sent it first; null for a new upload (the caller). */
+  uploader: User | null;
+  /** True when the idempotency key had been used before: nothing new was stored. */
+  repeated: boolean;
+}
+
+/**
+ * The attachment already stored under `key` for this case, if any; a different file under the
+ * same key (another size or SHA-256) is refused.
+ */
+async function storedUnderKey(
+  caseId: string,
+  key: string,
+  file: { byteSize: number; sha256: string },
+  transaction?: Transaction,
+): Promise<AddedAttachment | null> {
+  const existing = await Attachment.findOne({
+    where: { caseId, idempotencyKey: key },
+    include: [{ model: User, as: 'uploader' }],
+    transaction,
+  });
+  if (!existing) return null;
+  if (existing.byteSize !== file.byteSize || existing.sha256 !== file.sha256) {
+    throw new AppError(
+      'conflict',
+      'This upload repeats an earlier one (the same idempotency key) with a different file. The earlier file is kept; send the new file as a new upload.',
+    );
+  }
+  const uploader = (existing as Attachment & { uploader?: User | null }).uploader ?? null;
+  return { attachment: existing, uploader, repeated: true };
+}
+
 export async function addAttachment(options: {
   actor: Actor;
   caseId: string;
@@ -93,11 +134,22 @@ export async function addAttachment(options: {
   photoOnly: boolean;
   file: UploadedFile;
   store: FileStore;
-}) {
+  /** The sender's key for this upload; the same key again returns the stored attachment. */
+  idempotencyKey?: string | null;
+}): Promise<AddedAttachment> {
   const { actor, caseId, nodeId, file, store } = options;
+  const key = options.idempotencyKey ?? null;
   assertCan(actor, 'cases.walk');
   const kase = await findCase({ actor, caseId });
   if (file.bytes.length === 0) throw new AppError('bad_request', 'The file is empty.');
+  const content = {
+    byteSize: file.bytes.length,
+    sha256: createHash('sha256').update(file.bytes).digest('hex'),
+  };
+  if (key !== null) {
+    const repeat = await storedUnderKey(kase.id, key, content);
+    if (repeat) return repeat;
+  }
   if (file.bytes.length > attachmentLimits.maxBytes) {
     throw new AppError(
       'payload_too_large',
@@ -139,8 +191,13 @@ export async function addAttachment(options: {
       await store.put(thumbnailKey, thumb, 'image/webp');
       stored.push(thumbnailKey);
     }
-    return await withTransaction(async (transaction) => {
+    const added = await withTransaction(async (transaction): Promise<AddedAttachment> => {
       const locked = await findCase({ actor, caseId, transaction, lock: true });
+      // Two sends of one key at once: the second waits for the case lock, then finds the first.
+      if (key !== null) {
+        const repeat = await storedUnderKey(locked.id, key, content, transaction);
+        if (repeat) return repeat;
+      }
       const count = await Attachment.count({ where: { caseId: locked.id }, transaction });
       if (count >= attachmentLimits.maxPerCase) {
         throw new AppError(
@@ -163,6 +220,8 @@ export async function addAttachment(options: {
           width,
           height,
           uploadedBy: actor.userId,
+          idempotencyKey: key,
+          sha256: key === null ? null : content.sha256,
         },
         { transaction },
       );
@@ -174,10 +233,13 @@ export async function addAttachment(options: {
         payload: { attachmentId: attachment.id, name: attachment.originalName },
         transaction,
       });
-      return attachment;
+      return { attachment, uploader: null, repeated: false };
     });
+    // A repeat found under the lock keeps the first upload's bytes; this one's are not needed.
+    if (added.repeated) await removeAll(store, stored);
+    return added;
   } catch (error) {
-    await Promise.all(stored.map((key) => store.remove(key).catch(() => undefined)));
+    await removeAll(store, stored);
     if (error instanceof Error && /pixel limit/i.test(error.message)) {
       throw new AppError(
         'payload_too_large',
