@@ -1,7 +1,7 @@
 // Builds Heatpath's Express app (no listen): API routes under /api, and the built web app with
 // a fallback to index.html for client routes. Tests import this.
 import { existsSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { basename, join, resolve } from 'node:path';
 import cookieParser from 'cookie-parser';
 import express from 'express';
 import helmet from 'helmet';
@@ -104,7 +104,19 @@ export function createApp(deps: AppDeps): express.Express {
 
   const webDist = config.webDist ? resolve(config.webDist) : null;
   if (webDist && existsSync(join(webDist, 'index.html'))) {
-    app.use(express.static(webDist, { index: false, maxAge: '1h' }));
+    const alwaysRevalidated = new Set(['sw.js', 'index.html', 'manifest.webmanifest']);
+    app.use(
+      express.static(webDist, {
+        index: false,
+        maxAge: '1h',
+        // The service worker and the files it reads to decide what the tablet keeps are always
+        // checked with the server, so a new build reaches the tablets on their next visit; the
+        // hashed chunks and workbox-*.js keep the hour.
+        setHeaders: (res, path) => {
+          if (alwaysRevalidated.has(basename(path))) res.set('Cache-Control', 'no-cache');
+        },
+      }),
+    );
     app.get('/{*path}', (_req, res) => {
       res.set('Cache-Control', 'no-cache');
       res.sendFile(join(webDist, 'index.html'));
