@@ -1,10 +1,11 @@
 // Loader helpers that decide who may see a screen before it renders: no session → sign-in (with
-// the way back), wrong role → a 403 the route's error page explains.
+// the way back), wrong role → a 403 the route's error page explains. With no network they go by
+// the signed-in person restored from the tablet's cache (lib/persist-cache.ts).
 import { roleLabels, type Me, type Role } from '@heatpath/contracts';
-import type { QueryClient } from '@tanstack/react-query';
+import { onlineManager, type QueryClient } from '@tanstack/react-query';
 import { data, redirect } from 'react-router';
 import { isUnauthenticated } from '../lib/api-client';
-import { meQueryOptions } from '../lib/auth';
+import { meQueryKey, meQueryOptions } from '../lib/auth';
 import { getArea, mayRead, type Area, type AreaId } from './areas';
 
 export interface ForbiddenData {
@@ -26,14 +27,24 @@ export function safeNextPath(next: string | null): string {
   return next;
 }
 
+function toSignIn(request: Request) {
+  const url = new URL(request.url);
+  return redirect(signInPath(url.pathname + url.search));
+}
+
+/**
+ * The signed-in person: the one in the cache (restored after a reload, and refreshed by the
+ * screens that show it), else asked of the server. Offline with nobody in the cache, the question
+ * would wait for the network with the page blank: sign-in says what is needed instead.
+ */
 export async function requireMe(queryClient: QueryClient, request: Request): Promise<Me> {
+  if (!onlineManager.isOnline() && queryClient.getQueryData(meQueryKey) === undefined) {
+    throw toSignIn(request);
+  }
   try {
     return await queryClient.ensureQueryData(meQueryOptions());
   } catch (error) {
-    if (isUnauthenticated(error)) {
-      const url = new URL(request.url);
-      throw redirect(signInPath(url.pathname + url.search));
-    }
+    if (isUnauthenticated(error)) throw toSignIn(request);
     throw error;
   }
 }

@@ -1,15 +1,26 @@
 // Wires the query client to the router: the query client notices an expired session anywhere,
-// the router takes the person to sign-in. Both are made once per page load.
-import { QueryClientProvider } from '@tanstack/react-query';
+// the router takes the person to sign-in. The cache kept on the tablet (lib/persist-cache.ts) is
+// restored before the router starts, so the first screen's loaders already find the signed-in
+// person and the cases, with or without a network. All of it is made once per page load.
+import { useIsRestoring } from '@tanstack/react-query';
+import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { useState } from 'react';
 import { RouterProvider } from 'react-router';
+import { startOnlineFromBrowser } from '../lib/online';
+import { cachePersistOptions, clearCachedData, keepPersistedQueries } from '../lib/persist-cache';
 import { createQueryClient } from '../lib/query-client';
 import { signInPath } from './guards';
 import { createAppRouter } from './router';
+import { StartingUp } from './shell/error-pages';
+
+type AppRouter = ReturnType<typeof createAppRouter>;
 
 function createApp() {
+  startOnlineFromBrowser();
+  let router: AppRouter | undefined;
   const queryClient = createQueryClient({
     onUnauthenticated: () => {
+      if (!router) return;
       const { initialized, navigation, location } = router.state;
       // While a navigation is loading, its loader meets the same 401 and redirects by itself.
       if (!initialized || navigation.state !== 'idle') return;
@@ -17,19 +28,29 @@ function createApp() {
       void router
         .navigate(signInPath(location.pathname + location.search), { replace: true })
         // Clear only once the signed-in screens are gone, so none of them renders without "me".
-        .then(() => queryClient.clear());
+        .then(() => clearCachedData(queryClient));
     },
   });
-  // Declared after the query client it needs; the callback above only runs once both exist.
-  const router = createAppRouter(queryClient);
-  return { queryClient, router };
+  keepPersistedQueries(queryClient);
+  // Called once the cache is restored: creating the router starts the first screen's loaders.
+  const startRouter = () => (router = createAppRouter(queryClient));
+  return { queryClient, startRouter };
+}
+
+function RestoredRouter({ startRouter }: { startRouter: () => AppRouter }) {
+  const [router] = useState(startRouter);
+  return <RouterProvider router={router} />;
+}
+
+function AppRouterOnceRestored({ startRouter }: { startRouter: () => AppRouter }) {
+  return useIsRestoring() ? <StartingUp /> : <RestoredRouter startRouter={startRouter} />;
 }
 
 export function AppProvider() {
-  const [{ queryClient, router }] = useState(createApp);
+  const [{ queryClient, startRouter }] = useState(createApp);
   return (
-    <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
-    </QueryClientProvider>
+    <PersistQueryClientProvider client={queryClient} persistOptions={cachePersistOptions}>
+      <AppRouterOnceRestored startRouter={startRouter} />
+    </PersistQueryClientProvider>
   );
 }

@@ -1,26 +1,39 @@
-// /sign-in: the only screen open without a session.
-import type { QueryClient } from '@tanstack/react-query';
+// /sign-in: the only screen open without a session. Signing in needs the network; when the server
+// says the session has ended, whatever the tablet cached for the last person is forgotten here,
+// once none of the signed-in screens is showing it any more.
+import { onlineManager, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
 import {
   Link,
   redirect,
+  useLoaderData,
   useNavigate,
   useSearchParams,
   type LoaderFunctionArgs,
 } from 'react-router';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
+import { isUnauthenticated } from '../../lib/api-client';
 import { getMe, meQueryKey } from '../../lib/auth';
 import { useDocumentTitle } from '../../lib/document-title';
+import { useOnline } from '../../lib/online';
+import { clearCachedData } from '../../lib/persist-cache';
 import { safeNextPath } from '../guards';
 import { Brand } from '../shell/brand';
 
+interface SignInData {
+  /** The server said there is no session: the cache belongs to nobody signed in. */
+  sessionEnded: boolean;
+}
+
 export function signInLoader(queryClient: QueryClient) {
-  return async ({ request }: LoaderFunctionArgs) => {
+  return async ({ request }: LoaderFunctionArgs): Promise<SignInData> => {
+    if (!onlineManager.isOnline()) return { sessionEnded: false };
     // Ask the server, not the cache: a cached "me" may belong to a session that just expired.
     try {
       const me = await getMe(request.signal);
       queryClient.setQueryData(meQueryKey, me);
-    } catch {
-      return null;
+    } catch (error) {
+      return { sessionEnded: isUnauthenticated(error) };
     }
     throw redirect(safeNextPath(new URL(request.url).searchParams.get('next')));
   };
@@ -31,6 +44,12 @@ export function SignInRoute() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const next = safeNextPath(params.get('next'));
+  const { sessionEnded } = useLoaderData<SignInData>();
+  const queryClient = useQueryClient();
+  const online = useOnline();
+  useEffect(() => {
+    if (sessionEnded) void clearCachedData(queryClient);
+  }, [sessionEnded, queryClient]);
   return (
     <main className="mx-auto flex min-h-dvh w-full max-w-md flex-col justify-center gap-6 p-4 sm:p-6">
       <Brand />
@@ -41,6 +60,11 @@ export function SignInRoute() {
           you.
         </p>
       </div>
+      {online ? null : (
+        <p role="status" className="rounded-panel border-2 border-line-strong bg-sunken p-3">
+          This tablet is offline. Signing in needs the network: try again once it returns.
+        </p>
+      )}
       <div className="rounded-panel border-2 border-line bg-surface p-4 sm:p-6">
         <SignInForm onSignedIn={() => void navigate(next, { replace: true })} />
       </div>

@@ -2,16 +2,20 @@
 // same rail becomes a sheet opened from a Menu button at the bottom edge, where a thumb reaches
 // while the other hand holds a probe.
 import { roleLabels } from '@heatpath/contracts';
+import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState, type ReactNode } from 'react';
 import { useLocation, useNavigate, useNavigation } from 'react-router';
 import { Button } from '../../components/ui/button';
 import { SignOutButton } from '../../features/auth/components/sign-out-button';
 import { useMe } from '../../lib/auth';
+import { clearCachedData } from '../../lib/persist-cache';
 import { Brand } from './brand';
 import { MainNav } from './main-nav';
+import { OfflineNotice } from './offline-notice';
 
 export function AppShell({ children }: { children: ReactNode }) {
   const me = useMe();
+  const queryClient = useQueryClient();
   const navigate = useNavigate();
   const navigation = useNavigation();
   const location = useLocation();
@@ -67,16 +71,26 @@ export function AppShell({ children }: { children: ReactNode }) {
             <span className="font-semibold">{me.name}</span>
             <span className="text-sm text-ink-muted">{roleLabels[me.role]}</span>
           </p>
-          <SignOutButton onSignedOut={() => void navigate('/sign-in', { replace: true })} />
+          <SignOutButton
+            onSignedOut={() =>
+              // A shared tablet keeps nothing of the last person, on disk included.
+              void Promise.resolve(navigate('/sign-in', { replace: true })).then(() =>
+                clearCachedData(queryClient),
+              )
+            }
+          />
         </div>
       </div>
 
       <div className="flex min-w-0 flex-1 flex-col pb-20 md:pb-0">
-        {navigation.state === 'loading' ? (
-          <div role="status" className="sticky top-0 z-20 bg-info-bg px-4 py-2 text-info-ink">
-            Loading…
-          </div>
-        ) : null}
+        <div className="sticky top-0 z-20">
+          <OfflineNotice />
+          {navigation.state === 'loading' ? (
+            <div role="status" className="bg-info-bg px-4 py-2 text-info-ink">
+              Loading…
+            </div>
+          ) : null}
+        </div>
         <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 p-4 sm:p-6 lg:p-8">
           {children}
         </main>

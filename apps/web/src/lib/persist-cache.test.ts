@@ -1,0 +1,117 @@
+import 'fake-indexeddb/auto';
+import {
+  persistQueryClientRestore,
+  persistQueryClientSave,
+} from '@tanstack/react-query-persist-client';
+import { openDB } from 'idb';
+import { afterEach, describe, expect, it } from 'vitest';
+import { makeMe } from '../test/api-mock';
+import { caseId, makeCaseDetail, paths } from '../test/case-fixtures';
+import { meQueryKey } from './auth';
+import {
+  cacheBuster,
+  cacheDatabaseName,
+  cachePersistOptions,
+  cachePersister,
+  clearCachedData,
+  isPersistedQueryKey,
+} from './persist-cache';
+import { createQueryClient } from './query-client';
+import { casesKeys, staffKeys, treesKeys } from './query-keys';
+
+const mineFilters = { scope: 'mine' } as const;
+const list = { pages: [{ cases: [], nextCursor: null }], pageParams: [null] };
+
+/** What the tablet holds now, read straight from IndexedDB. */
+async function storedKeys(): Promise<unknown[][] | undefined> {
+  const db = await openDB(cacheDatabaseName, 1);
+  const raw: unknown = await db.get('query-cache', 'query-client');
+  db.close();
+  if (typeof raw !== 'string') return undefined;
+  const client = JSON.parse(raw) as { clientState: { queries: { queryKey: unknown[] }[] } };
+  return client.clientState.queries.map((query) => query.queryKey);
+}
+
+function filledClient() {
+  const queryClient = createQueryClient();
+  queryClient.setQueryData(meQueryKey, makeMe({ role: 'technician' }));
+  queryClient.setQueryData(casesKeys.list(mineFilters), list);
+  queryClient.setQueryData(casesKeys.detail(caseId), makeCaseDetail(paths.blockTest));
+  queryClient.setQueryData(casesKeys.events(caseId), { events: [] });
+  queryClient.setQueryData(staffKeys.list(), { staff: [] });
+  queryClient.setQueryData(treesKeys.available(), { trees: [] });
+  return queryClient;
+}
+
+afterEach(async () => {
+  await cachePersister.removeClient();
+});
+
+describe('the cache kept on the tablet', () => {
+  it('keeps the signed-in person, the case lists and the cases, nothing else', async () => {
+    await persistQueryClientSave({ queryClient: filledClient(), ...cachePersistOptions });
+    const keys = await storedKeys();
+    expect(keys).toHaveLength(3);
+    expect(keys).toEqual(
+      expect.arrayContaining([
+        [...meQueryKey],
+        [...casesKeys.list(mineFilters)],
+        [...casesKeys.detail(caseId)],
+      ]),
+    );
+    expect(isPersistedQueryKey(casesKeys.events(caseId))).toBe(false);
+    expect(isPersistedQueryKey(staffKeys.list())).toBe(false);
+  });
+
+  it('keeps neither failed queries nor mutations', async () => {
+    const queryClient = filledClient();
+    await queryClient
+      .fetchQuery({
+        queryKey: casesKeys.detail('other'),
+        queryFn: () => Promise.reject(new Error('x')),
+        retry: false,
+      })
+      .catch(() => undefined);
+    queryClient.getMutationCache().build(queryClient, { mutationKey: ['walk'] });
+    await persistQueryClientSave({ queryClient, ...cachePersistOptions });
+    expect(await storedKeys()).not.toContainEqual([...casesKeys.detail('other')]);
+    const db = await openDB(cacheDatabaseName, 1);
+    const raw = (await db.get('query-cache', 'query-client')) as string;
+    db.close();
+    expect(
+      (JSON.parse(raw) as { clientState: { mutations: unknown[] } }).clientState.mutations,
+    ).toEqual([]);
+  });
+
+  it('gives a reloaded page the person and the case, with their data as stored', async () => {
+    await persistQueryClientSave({ queryClient: filledClient(), ...cachePersistOptions });
+    const reloaded = createQueryClient();
+    await persistQueryClientRestore({ queryClient: reloaded, ...cachePersistOptions });
+    expect(reloaded.getQueryData(meQueryKey)).toEqual(makeMe({ role: 'technician' }));
+    expect(reloaded.getQueryData(casesKeys.detail(caseId))).toEqual(
+      makeCaseDetail(paths.blockTest),
+    );
+    expect(reloaded.getQueryData(staffKeys.list())).toBeUndefined();
+  });
+
+  it('does not read what another build stored', async () => {
+    await persistQueryClientSave({
+      queryClient: filledClient(),
+      ...cachePersistOptions,
+      buster: `${cacheBuster}-before`,
+    });
+    const reloaded = createQueryClient();
+    await persistQueryClientRestore({ queryClient: reloaded, ...cachePersistOptions });
+    expect(reloaded.getQueryData(meQueryKey)).toBeUndefined();
+    expect(await storedKeys()).toBeUndefined();
+  });
+
+  it('forgets everything, in memory and on the tablet, when cleared', async () => {
+    const queryClient = filledClient();
+    await persistQueryClientSave({ queryClient, ...cachePersistOptions });
+    expect(await storedKeys()).toHaveLength(3);
+    await clearCachedData(queryClient);
+    expect(queryClient.getQueryData(meQueryKey)).toBeUndefined();
+    expect(await storedKeys()).toBeUndefined();
+  });
+});
