@@ -53,10 +53,27 @@ const storage = {
   },
 };
 
+/** Resolves when the browser has a moment to spare, within two seconds at most. */
+function whenIdle(): Promise<void> {
+  return new Promise((resolve) => {
+    if (typeof requestIdleCallback === 'function') {
+      requestIdleCallback(() => resolve(), { timeout: 2000 });
+    } else {
+      setTimeout(resolve, 0);
+    }
+  });
+}
+
 export const cachePersister = createAsyncStoragePersister({
   storage,
   key: cacheKey,
+  // At most one save a second, written when the browser is idle: a tap at the car is painted
+  // first, the cases (with their trees) are serialised after.
   throttleTime: 1000,
+  serialize: async (client) => {
+    await whenIdle();
+    return JSON.stringify(client);
+  },
 });
 
 /** The queries kept on the tablet: "me", every case list, and each case (not its audit trail). */
