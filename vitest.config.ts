@@ -45,8 +45,10 @@ export default defineConfig({
           include: ['tests/e2e/src/**/*.test.ts'],
           environment: 'node',
           fileParallelism: false,
-          testTimeout: 60_000,
-          hookTimeout: 60_000,
+          // A browser test walks a whole case (20+ steps); every step waits for what it expects
+          // to see. The timeout is only the last resort, sized for a heavily loaded 2-core machine.
+          testTimeout: 300_000,
+          hookTimeout: 120_000,
         },
       },
     ],
