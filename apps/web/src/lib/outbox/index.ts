@@ -6,6 +6,7 @@ export {
   enqueueNote,
   enqueuePhoto,
   enqueueWalk,
+  holdOutboxItems,
   newOutboxKey,
   outboxSender,
   resetOutboxForTests,

@@ -122,6 +122,14 @@ export function discardOutboxItem(seq: number): Promise<void> {
   return outboxStore().remove(seq);
 }
 
+/**
+ * Holds answers the case can no longer take (the server's walk moved on past them): they wait
+ * for the person to choose, like answers the server refused as stale.
+ */
+export async function holdOutboxItems(seqs: readonly number[], problem: string): Promise<void> {
+  for (const seq of seqs) await outboxStore().update(seq, { state: 'held', problem });
+}
+
 /** Tests only: forget the queue and the sender, so the next test starts with none. */
 export async function resetOutboxForTests(): Promise<void> {
   sender?.stop();

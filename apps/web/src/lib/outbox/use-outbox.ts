@@ -46,13 +46,14 @@ export function useOutboxConnection(userId: string): void {
 
 /** A photo's bytes as an object URL for its thumbnail, released when it is no longer shown. */
 export function usePhotoUrl(photo: PhotoItem): string | null {
-  const url = useMemo(
-    () =>
-      typeof URL.createObjectURL === 'function'
-        ? URL.createObjectURL(new Blob([photo.bytes], { type: photo.mediaType }))
-        : null,
-    [photo.bytes, photo.mediaType],
-  );
+  const url = useMemo(() => {
+    try {
+      return URL.createObjectURL(new Blob([photo.bytes], { type: photo.mediaType }));
+    } catch {
+      // No object URLs here (an old browser, a test): the tile shows the word "Photo".
+      return null;
+    }
+  }, [photo.bytes, photo.mediaType]);
   useEffect(() => () => (url ? URL.revokeObjectURL(url) : undefined), [url]);
   return url;
 }

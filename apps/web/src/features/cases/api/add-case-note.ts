@@ -22,7 +22,7 @@ export function addCaseNote({ caseId, note, signal }: AddCaseNoteInput) {
 export function useAddCaseNote() {
   const queryClient = useQueryClient();
   return useMutation({
-    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    // Fail at once when offline, so the screen can say so instead of the request waiting silently.
     networkMode: 'always',
     mutationFn: addCaseNote,
     onSuccess: (_note, { caseId }) =>

@@ -13,7 +13,7 @@ export function markDiagnosed(caseId: string) {
 export function useMarkDiagnosed() {
   const queryClient = useQueryClient();
   return useMutation({
-    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    // Fail at once when offline, so the screen can say so instead of the request waiting silently.
     networkMode: 'always',
     mutationFn: markDiagnosed,
     onSuccess: (detail) => {

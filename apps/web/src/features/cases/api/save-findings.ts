@@ -20,7 +20,7 @@ export function saveFindings({ caseId, findings }: SaveFindingsInput) {
 export function useSaveFindings() {
   const queryClient = useQueryClient();
   return useMutation({
-    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    // Fail at once when offline, so the screen can say so instead of the request waiting silently.
     networkMode: 'always',
     mutationFn: saveFindings,
     onSuccess: (detail) => {

@@ -29,7 +29,7 @@ export function uploadAttachment({ caseId, file, nodeId, photoOnly }: UploadAtta
 export function useUploadAttachment() {
   const queryClient = useQueryClient();
   return useMutation({
-    // Fail at once when offline, so the screen can say so; see submit-walk-event.ts.
+    // Fail at once when offline, so the screen can say so instead of the request waiting silently.
     networkMode: 'always',
     mutationFn: uploadAttachment,
     onSuccess: (_attachment, { caseId }) =>

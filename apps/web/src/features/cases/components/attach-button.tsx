@@ -1,10 +1,13 @@
-// One button that opens the camera or the file picker and uploads what was chosen. A photo
-// request opens the rear camera on a tablet or phone. A failed upload says why; one lost to the
-// network keeps the file so "Retry" sends it again without choosing it anew.
+// One button that opens the camera or the file picker. A photo request opens the rear camera on a
+// tablet or phone, and the photo goes into the outbox: it shows at once as "waiting to send" and
+// is sent before the answers given after it, with or without a network. Other files (logs) are
+// uploaded at once; a failed upload says why, and one lost to the network keeps the file so
+// "Retry" sends it again without choosing it anew.
 import { useRef, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { isApiError } from '../../../lib/api-client';
+import { enqueuePhoto } from '../../../lib/outbox';
 import { useUploadAttachment } from '../api/upload-attachment';
 
 export type AttachKind = 'photo' | 'log' | 'any';
@@ -41,6 +44,16 @@ export function AttachButton({
   const upload = useUploadAttachment();
   const [file, setFile] = useState<File | null>(null);
   const [added, setAdded] = useState<string | null>(null);
+  const [notKept, setNotKept] = useState(false);
+
+  const queue = (chosen: File) => {
+    setAdded(null);
+    setNotKept(false);
+    enqueuePhoto({ caseId, nodeId: nodeId ?? null, file: chosen }).then(
+      () => setAdded(chosen.name),
+      () => setNotKept(true),
+    );
+  };
 
   const send = (chosen: File) => {
     setAdded(null);
@@ -86,12 +99,20 @@ export function AttachButton({
             const chosen = event.target.files?.[0];
             event.target.value = '';
             if (!chosen) return;
+            if (kind === 'photo') {
+              queue(chosen);
+              return;
+            }
             setFile(chosen);
             send(chosen);
           }}
         />
       </div>
-      {upload.error ? (
+      {notKept ? (
+        <Alert tone="danger" role="alert" title="Photo not kept">
+          <p>The photo could not be read from the camera or the file. Take it again.</p>
+        </Alert>
+      ) : upload.error ? (
         <Alert tone="danger" role="alert" title={lost ? 'Not uploaded yet' : 'Not attached'}>
           <p>{upload.error.message}</p>
           {lost && file ? (
@@ -109,7 +130,7 @@ export function AttachButton({
         </Alert>
       ) : added ? (
         <p role="status" className="flex items-center gap-2 font-semibold text-ok-ink">
-          <span aria-hidden="true">✓</span> Attached {added}
+          <span aria-hidden="true">✓</span> {kind === 'photo' ? 'Kept' : 'Attached'} {added}
         </p>
       ) : null}
     </div>

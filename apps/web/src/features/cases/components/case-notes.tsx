@@ -1,7 +1,10 @@
-// Free notes on the case, each kept with the step it was written at, who wrote it and when. A
-// note's idempotency key is made when it is first sent and reused if it has to be sent again.
+// Free notes on the case, each kept with the step it was written at, who wrote it and when, and
+// the notes still in the outbox (given with an answer, or held answers kept as a note), marked as
+// waiting. A note's idempotency key is made when it is first sent and reused if it has to be sent
+// again.
 import type { CaseNote } from '@heatpath/contracts';
 import { useState } from 'react';
+import { isPending, type NoteItem, type OutboxItem } from '../../../lib/outbox';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextAreaField } from '../../../components/ui/field';
@@ -11,13 +14,25 @@ import { formatDateTime } from '../case-format';
 interface CaseNotesProps {
   caseId: string;
   notes: readonly CaseNote[];
+  /** The case's outbox: its notes are shown as waiting to be sent. */
+  queued?: readonly OutboxItem[];
   /** The step a new note belongs to, and its title. */
   currentStep: { id: string; title: string };
   stepTitle: (nodeId: string) => string | null;
   canWrite: boolean;
 }
 
-export function CaseNotes({ caseId, notes, currentStep, stepTitle, canWrite }: CaseNotesProps) {
+export function CaseNotes({
+  caseId,
+  notes,
+  queued = [],
+  currentStep,
+  stepTitle,
+  canWrite,
+}: CaseNotesProps) {
+  const waiting = queued.filter(
+    (item): item is NoteItem => item.kind === 'note' && isPending(item),
+  );
   const add = useAddCaseNote();
   const [text, setText] = useState('');
   const [key, setKey] = useState<string | null>(null);
@@ -51,7 +66,9 @@ export function CaseNotes({ caseId, notes, currentStep, stepTitle, canWrite }: C
       <h2 id="notes-heading" className="text-lg font-bold">
         Notes <span className="text-sm font-normal text-ink-muted">({notes.length})</span>
       </h2>
-      {notes.length === 0 ? <p className="text-ink-muted">No notes yet.</p> : null}
+      {notes.length === 0 && waiting.length === 0 ? (
+        <p className="text-ink-muted">No notes yet.</p>
+      ) : null}
       {notes.length > 0 ? (
         <ul className="flex flex-col gap-3">
           {notes.map((note) => {
@@ -63,6 +80,19 @@ export function CaseNotes({ caseId, notes, currentStep, stepTitle, canWrite }: C
                   {note.author.name}, {formatDateTime(note.createdAt)}
                   {at ? ` · at “${at}”` : ''}
                 </p>
+              </li>
+            );
+          })}
+        </ul>
+      ) : null}
+      {waiting.length > 0 ? (
+        <ul className="flex flex-col gap-3" aria-label="Notes waiting to be sent">
+          {waiting.map((note) => {
+            const at = note.nodeId ? stepTitle(note.nodeId) : null;
+            return (
+              <li key={note.seq} className="border-l-4 border-dashed border-line-strong pl-3">
+                <p className="whitespace-pre-line">{note.text}</p>
+                <p className="text-sm text-ink-muted">Waiting to send{at ? ` · at “${at}”` : ''}</p>
               </li>
             );
           })}

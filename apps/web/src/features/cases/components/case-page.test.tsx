@@ -1,7 +1,10 @@
+import 'fake-indexeddb/auto';
 import type { CaseDetail, Me } from '@heatpath/contracts';
-import { cleanup, screen, within } from '@testing-library/react';
+import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { resetOutboxForTests } from '../../../lib/outbox';
+import { createOutboxStore } from '../../../lib/outbox/outbox-store';
 import { errorResponse, json, makeMe, mockApi, type RecordedRequest } from '../../../test/api-mock';
 import {
   caseId,
@@ -14,8 +17,9 @@ import {
 } from '../../../test/case-fixtures';
 import { renderApp } from '../../../test/render-app';
 
-afterEach(() => {
+afterEach(async () => {
   cleanup();
+  await resetOutboxForTests();
   vi.unstubAllGlobals();
   window.localStorage.clear();
 });
@@ -39,6 +43,17 @@ function setup({ me = technician, detail, walk }: Setup) {
     'GET /api/me': () => json(me),
     [`GET /api/cases/${caseId}`]: () => json(current),
     [`GET /api/cases/${caseId}/events`]: () => json({ events: [] }),
+    [`POST /api/cases/${caseId}/notes`]: (request) =>
+      json(
+        {
+          id: crypto.randomUUID(),
+          nodeId: (request.body as { nodeId: string | null }).nodeId,
+          text: (request.body as { text: string }).text,
+          author: { id: me.id, name: me.name },
+          createdAt: '2025-03-01T09:00:00.000Z',
+        },
+        201,
+      ),
     [`POST /api/cases/${caseId}/walk`]: async (request) => {
       attempts += 1;
       const response = walk
@@ -56,6 +71,8 @@ function setup({ me = technician, detail, walk }: Setup) {
   return {
     ...api,
     walkRequests: () => api.requests.filter((r) => r.method === 'POST' && r.path.endsWith('/walk')),
+    noteRequests: () =>
+      api.requests.filter((r) => r.method === 'POST' && r.path.endsWith('/notes')),
     caseReads: () =>
       api.requests.filter((r) => r.method === 'GET' && r.path === `/api/cases/${caseId}`),
     setCase: (next: CaseDetail) => {
@@ -125,6 +142,7 @@ describe('the case page', () => {
         name: 'Does coolant move through the engine?',
       }),
     ).toBeTruthy();
+    await waitFor(() => expect(walkRequests()).toHaveLength(1));
     const sent = walkRequests()[0]?.body as { event: Record<string, unknown> };
     expect(sent.event).toMatchObject({
       type: 'answer.measurement',
@@ -152,12 +170,65 @@ describe('the case page', () => {
     expect(walkRequests()).toHaveLength(0);
   });
 
-  it('keeps an answer lost to the network and retries it with the same idempotency key', async () => {
+  it('shows the next step at once and takes what changed from the server’s reply', async () => {
+    let reply: (response: Response) => void = () => undefined;
+    const { walkRequests, caseReads } = setup({
+      detail: makeCaseDetail(paths.start),
+      walk: () =>
+        new Promise<Response>((resolve) => {
+          reply = resolve;
+        }),
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }, slow);
+    const readsBefore = caseReads().length;
+    await user.click(
+      screen.getByRole('button', { name: 'At idle or in slow traffic; fine at speed' }),
+    );
+    // The tablet walks the tree itself: the next step is there before the server has replied.
+    expect(
+      screen.getByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+    ).toBeTruthy();
+    expect(await screen.findByText('Sending 1 answer…')).toBeTruthy();
+    await waitFor(() => expect(walkRequests()).toHaveLength(1));
+
+    reply(
+      json(
+        {
+          walk: walkAfter(['idle-or-traffic']),
+          repeated: false,
+          case: {
+            status: 'in_diagnosis',
+            updatedAt: '2025-03-01T09:05:00.000Z',
+            diagnosedAt: null,
+            can: { walk: true, editFindings: true, markDiagnosed: false },
+            findings: null,
+          },
+        },
+        201,
+      ),
+    );
+    expect(await screen.findByText('All answers saved.')).toBeTruthy();
+    // The reply carried what changed: the case is not read again.
+    expect(caseReads().length).toBe(readsBefore);
+    expect(screen.getByText('In diagnosis')).toBeTruthy();
+    expect(
+      screen.getByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+    ).toBeTruthy();
+  });
+
+  it('keeps answers lost to the network and sends them later with their idempotency keys', async () => {
+    let offline = true;
+    const answers = ['idle-or-traffic', { topUpLitres: { value: 0.3, unit: 'L' } }];
     const { walkRequests } = setup({
       detail: makeCaseDetail(paths.start),
-      walk: (_request, attempt) => {
-        if (attempt === 1) throw new TypeError('Failed to fetch');
-        return json({ walk: walkAfter(['idle-or-traffic']), repeated: true }, 200);
+      walk: (request) => {
+        if (offline) throw new TypeError('Failed to fetch');
+        const { event } = request.body as { event: { position: number } };
+        return json(
+          { walk: walkAfter(answers.slice(0, event.position + 1)), repeated: false },
+          201,
+        );
       },
     });
     const user = userEvent.setup();
@@ -165,33 +236,32 @@ describe('the case page', () => {
     await user.click(
       screen.getByRole('button', { name: 'At idle or in slow traffic; fine at speed' }),
     );
+    await user.type(screen.getByLabelText('Coolant added to reach MAX'), '0.3');
+    await user.click(screen.getByRole('button', { name: 'Save reading' }));
+    expect(await screen.findByRole('heading', { level: 2, name: 'Look for leaks' })).toBeTruthy();
+    expect(await screen.findByText('2 answers wait for the network.')).toBeTruthy();
 
-    const alert = await screen.findByRole('alert');
-    expect(alert.textContent).toContain('Not saved yet');
-    expect(alert.textContent).toContain('“At idle or in slow traffic; fine at speed”');
-    // The step does not move on, and it cannot be answered twice meanwhile.
-    expect(screen.getByRole('heading', { level: 2, name: 'When does it run hot?' })).toBeTruthy();
-    expect(
-      (screen.getByRole('button', { name: 'At speed, uphill or towing' }) as HTMLButtonElement)
-        .disabled,
-    ).toBe(true);
-    expect(window.localStorage.getItem(`heatpath.pending-answer.${caseId}`)).toContain(
-      'idle-or-traffic',
-    );
-
-    await user.click(within(alert).getByRole('button', { name: 'Retry' }));
-    expect(
-      await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
-    ).toBeTruthy();
-    const [first, second] = walkRequests().map((r) => r.body as { idempotencyKey: string });
-    expect(first?.idempotencyKey).toMatch(/^[0-9a-f-]{36}$/);
-    expect(second?.idempotencyKey).toBe(first?.idempotencyKey);
-    expect(window.localStorage.getItem(`heatpath.pending-answer.${caseId}`)).toBeNull();
+    offline = false;
+    await user.click(screen.getByRole('button', { name: 'Send now' }));
+    expect(await screen.findByText('All answers saved.')).toBeTruthy();
+    const keys = walkRequests().map((r) => (r.body as { idempotencyKey: string }).idempotencyKey);
+    const [first] = keys;
+    expect(first).toMatch(/^[0-9a-f-]{36}$/);
+    // Tried offline, then sent again with the same key; the second answer only after it.
+    expect(keys.filter((key) => key === first).length).toBeGreaterThanOrEqual(2);
+    expect(new Set(keys).size).toBe(2);
+    expect(keys.at(-1)).not.toBe(first);
+    expect(screen.getByRole('heading', { level: 2, name: 'Look for leaks' })).toBeTruthy();
   });
 
-  it('sends an answer kept from before a reload again, by itself', async () => {
-    const kept = {
+  it('sends an answer kept on the tablet from before a reload, by itself', async () => {
+    const kept = createOutboxStore();
+    await kept.add({
+      kind: 'walk',
       key: '11111111-2222-4333-8444-555555555555',
+      caseId,
+      userId: technician.id,
+      createdAt: '2025-03-01T09:00:00.000Z',
       event: {
         type: 'answer.choice',
         nodeId: 'interview-pattern',
@@ -199,25 +269,25 @@ describe('the case page', () => {
         choiceId: 'no-pattern',
       },
       label: 'No clear pattern',
-      note: null,
-      status: 'sending',
-      problem: null,
-      attempts: 1,
-    };
-    window.localStorage.setItem(`heatpath.pending-answer.${caseId}`, JSON.stringify(kept));
+    });
+    kept.close();
     const { walkRequests } = setup({
       detail: makeCaseDetail(paths.start),
       walk: () => json({ walk: walkAfter(['no-pattern']), repeated: false }, 201),
     });
+    // The kept answer is part of the walk on this tablet from the start.
     expect(
       await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }, slow),
     ).toBeTruthy();
-    expect((walkRequests()[0]?.body as { idempotencyKey: string }).idempotencyKey).toBe(kept.key);
+    await waitFor(() => expect(walkRequests()).toHaveLength(1));
+    expect((walkRequests()[0]?.body as { idempotencyKey: string }).idempotencyKey).toBe(
+      '11111111-2222-4333-8444-555555555555',
+    );
   });
 
-  it('says the case moved on when the answer is stale (409), and shows where it stands', async () => {
+  it('holds answers the case moved on from (409) and can keep them as a note', async () => {
     const moved = makeCaseDetail(['speed-or-load']);
-    const { caseReads, setCase } = setup({
+    const { setCase, noteRequests } = setup({
       detail: makeCaseDetail(paths.start),
       walk: () => {
         setCase(moved);
@@ -226,16 +296,25 @@ describe('the case page', () => {
     });
     const user = userEvent.setup();
     await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }, slow);
-    const readsBefore = caseReads().length;
     await user.click(screen.getByRole('button', { name: 'No clear pattern' }));
 
-    const alert = await screen.findByRole('alert');
-    expect(alert.textContent).toContain('The case has moved on');
-    expect(alert.textContent).toContain('“No clear pattern” was not saved');
+    // The page shows where the case stands: answered elsewhere, "At speed".
+    expect(await screen.findByText('At speed, uphill or towing')).toBeTruthy();
     expect(
-      await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+      screen.getByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
     ).toBeTruthy();
-    expect(caseReads().length).toBeGreaterThan(readsBefore);
+    const title = await screen.findByText('The case moved on before these answers arrived');
+    const panel = title.closest('[role="alert"]') as HTMLElement;
+    expect(within(panel).getByText('When does it run hot?: No clear pattern')).toBeTruthy();
+
+    await user.click(within(panel).getByRole('button', { name: 'Keep the case as it is' }));
+    await waitFor(() => expect(noteRequests()).toHaveLength(1));
+    expect((noteRequests()[0]?.body as { text: string }).text).toContain(
+      'When does it run hot?: No clear pattern',
+    );
+    await waitFor(() =>
+      expect(screen.queryByText('The case moved on before these answers arrived')).toBeNull(),
+    );
   });
 
   it('steps back with an event, not by forgetting the answer', async () => {
@@ -260,6 +339,7 @@ describe('the case page', () => {
     expect(
       await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }),
     ).toBeTruthy();
+    await waitFor(() => expect(walkRequests()).toHaveLength(1));
     expect(walkRequests()[0]?.body).toMatchObject({
       event: { type: 'walk.back', nodeId: 'level-cold', position: 1 },
     });
@@ -279,43 +359,34 @@ describe('the case page', () => {
     expect(
       await screen.findByRole('heading', { level: 2, name: 'Block test result' }),
     ).toBeTruthy();
-    const posted = requests.filter((r) => r.method === 'POST').map((r) => r.path.split('/').pop());
-    expect(posted).toEqual(['notes', 'walk']);
+    const posted = () =>
+      requests.filter((r) => r.method === 'POST').map((r) => r.path.split('/').pop());
+    await waitFor(() => expect(posted()).toEqual(['notes', 'walk']));
     expect(requests.find((r) => r.path.endsWith('/notes'))?.body).toMatchObject({
       nodeId: 'block-test',
       text: 'Fluid stayed blue.',
     });
   });
 
-  it('uploads a photo the step asks for, from the camera, as a photo of that step', async () => {
+  it('asks for the required photo before the step is answered, then sends the photo first', async () => {
     const atResult = [...paths.blockTest, 'done'];
-    const { setCase } = setup({ detail: makeCaseDetail(atResult) });
+    const { requests } = setup({
+      detail: makeCaseDetail(atResult),
+      walk: () => json({ walk: walkAfter([...atResult, 'no-gas']), repeated: false }, 201),
+    });
     const fetchMock = vi.mocked(fetch);
     const original = fetchMock.getMockImplementation();
     let sent: { form: FormData; headers: Headers } | null = null;
     fetchMock.mockImplementation(async (input, init) => {
       if (init?.body instanceof FormData) {
         sent = { form: init.body, headers: new Headers(init.headers) };
-        setCase(
-          makeCaseDetail(atResult, {
-            attachments: [
-              {
-                id: '00000000-0000-4000-8000-0000000000b7',
-                nodeId: 'block-test-result',
-                kind: 'photo',
-                name: 'fluid.jpg',
-                mediaType: 'image/jpeg',
-                byteSize: 3,
-                width: 10,
-                height: 10,
-                url: '/api/cases/x/attachments/y/file',
-                thumbnailUrl: '/api/cases/x/attachments/y/thumbnail',
-                uploadedBy: { id: technician.id, name: technician.name },
-                createdAt: '2025-03-01T09:00:00.000Z',
-              },
-            ],
-          }),
-        );
+        requests.push({
+          method: 'POST',
+          path: new URL(String(input), 'http://heatpath.test').pathname,
+          headers: {},
+          body: undefined,
+          credentials: init.credentials,
+        });
         return json(
           {
             id: '00000000-0000-4000-8000-0000000000b7',
@@ -340,21 +411,36 @@ describe('the case page', () => {
     await screen.findByRole('heading', { level: 2, name: 'Block test result' }, slow);
     expect(screen.getByText('Photo of the test fluid')).toBeTruthy();
     expect(screen.getByText('Required')).toBeTruthy();
+    const noChange = () => screen.getByRole('button', { name: 'No change' }) as HTMLButtonElement;
+    expect(noChange().disabled).toBe(true);
+    expect(
+      screen.getByText(
+        'This step needs a photo first: Photo of the test fluid. Add it, then answer.',
+      ),
+    ).toBeTruthy();
     const picker = screen.getByLabelText('Attach photo: choose the file') as HTMLInputElement;
     expect(picker.accept).toBe('image/*');
     expect(picker.getAttribute('capture')).toBe('environment');
-    expect(screen.getByRole('button', { name: 'Attach photo' })).toBeTruthy();
 
     await user.upload(picker, new File(['jpg'], 'fluid.jpg', { type: 'image/jpeg' }));
-    expect(await screen.findByText('Attached fluid.jpg')).toBeTruthy();
+    // The photo shows at once, waiting to be sent, and the step can be answered.
+    expect(await screen.findByText('Kept fluid.jpg')).toBeTruthy();
+    await waitFor(() => expect(noChange().disabled).toBe(false));
+    await user.click(noChange());
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Warm up with live data' }),
+    ).toBeTruthy();
+
+    const posted = () =>
+      requests.filter((r) => r.method === 'POST').map((r) => r.path.split('/').pop());
+    await waitFor(() => expect(posted()).toEqual(['attachments', 'walk']));
     const upload = sent as { form: FormData; headers: Headers } | null;
     expect(upload?.form.get('nodeId')).toBe('block-test-result');
     expect(upload?.form.get('photoOnly')).toBe('true');
+    expect(String(upload?.form.get('idempotencyKey'))).toMatch(/^[0-9a-f-]{36}$/);
     expect((upload?.form.get('file') as File | null)?.name).toBe('fluid.jpg');
     expect(upload?.headers.get('x-heatpath-client')).toBe('web');
     expect(upload?.headers.get('content-type')).toBeNull();
-    // The thumbnail shows at the step once the case is read again.
-    expect(await screen.findAllByRole('img', { name: 'fluid.jpg' })).not.toHaveLength(0);
   });
 
   it('saves edited findings against their revision and offers a reload on a conflict', async () => {

@@ -1,32 +1,42 @@
 // The case page: the step the case stands at and how to answer it, then the finding and its
 // editable findings, the path so far and the values worked out, photos, notes and the history.
-// Everything is rebuilt from GET /api/cases/:caseId, so a reload or another device opens the case
-// exactly where it stands. Part of the lazily loaded case chunk.
+// The case is read from GET /api/cases/:caseId (kept on the tablet by the persisted query cache),
+// and the walk runs here on the case's pinned tree: answers show the next step at once and go
+// through the outbox, so the page works the same with or without a network. Part of the lazily
+// loaded case chunk.
 import type { CaseDetail } from '@heatpath/contracts';
+import type { CompiledTree } from '@heatpath/fault-tree';
+import { useCallback, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { ButtonLink } from '../../../components/ui/button';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
+import { ComputedValues } from '../../../components/walk-step/computed-values';
 import { isApiError } from '../../../lib/api-client';
 import { useMe } from '../../../lib/auth';
+import { isPending, useOutbox, useOutboxConnection, useOutboxReady } from '../../../lib/outbox';
 import { useCase } from '../api/get-case';
-import { useWalkModel } from '../case-tree';
-import { useWalkAnswers, type WalkAnswers } from '../hooks/use-walk-answers';
+import { useCaseTree } from '../case-tree';
+import { useDiagnoseBlockedReason } from '../hooks/use-evidence-gate';
+import { useLocalWalk, useServerWalk, type WalkControls } from '../hooks/use-local-walk';
 import { AttachmentsGallery } from './attachments-gallery';
 import { AuditTrail } from './audit-trail';
 import { CaseFacts } from './case-facts';
 import { CaseHeader } from './case-header';
 import { CaseNotes } from './case-notes';
-import { ComputedValues } from '../../../components/walk-step/computed-values';
 import { CurrentStep } from './current-step';
 import { FindingsEditor } from './findings-editor';
 import { FindingsView } from './findings-view';
 import { WalkPath } from './walk-path';
 
 export function CaseWorkspace({ caseId }: { caseId: string }) {
+  const me = useMe();
+  useOutboxConnection(me.id);
   const query = useCase(caseId);
-  const answers = useWalkAnswers(caseId);
+  const outboxReady = useOutboxReady();
 
-  if (query.isPending) return <LoadingState label="Loading the case…" />;
+  if (query.isPending || (query.isSuccess && !outboxReady)) {
+    return <LoadingState label="Loading the case…" />;
+  }
   if (query.isError) {
     const missing = isApiError(query.error) && query.error.status === 404;
     return (
@@ -38,18 +48,49 @@ export function CaseWorkspace({ caseId }: { caseId: string }) {
       />
     );
   }
-  return <CaseView detail={query.data} answers={answers} />;
+  return <CaseWalk detail={query.data} />;
 }
 
-function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswers }) {
+function CaseWalk({ detail }: { detail: CaseDetail }) {
+  const tree = useCaseTree(detail);
+  // Bumped when the server's walk is no longer the beginning of this tablet's: the local walk is
+  // then built again from the server's history.
+  const [generation, setGeneration] = useState(0);
+  const rebuild = useCallback(() => setGeneration((n) => n + 1), []);
+  if (!tree) return <ServerWalk detail={detail} />;
+  return <LocalWalk key={generation} detail={detail} tree={tree} onRebuild={rebuild} />;
+}
+
+function LocalWalk(props: { detail: CaseDetail; tree: CompiledTree; onRebuild: () => void }) {
+  const controls = useLocalWalk(props);
+  return <CaseView detail={props.detail} tree={props.tree} controls={controls} />;
+}
+
+function ServerWalk({ detail }: { detail: CaseDetail }) {
+  const controls = useServerWalk(detail);
+  return <CaseView detail={detail} tree={null} controls={controls} />;
+}
+
+interface CaseViewProps {
+  detail: CaseDetail;
+  tree: CompiledTree | null;
+  controls: WalkControls;
+}
+
+function CaseView({ detail, tree, controls }: CaseViewProps) {
   const me = useMe();
-  const model = useWalkModel(detail);
   const preferences = me.preferences.units;
-  const { walk, findings } = detail;
+  const { findings } = detail;
+  const { walk } = controls;
+  const items = useOutbox(detail.id);
+  const waiting = items.some(isPending);
+  const diagnoseBlocked = useDiagnoseBlockedReason(detail, walk, tree);
   const readOnlyFindings = findings && !detail.can.editFindings ? findings : null;
+  // The findings belong to the finding the server reached; shown once this tablet stands there too.
+  const findingsHere = findings && findings.outcomeNodeId === walk.outcome?.id ? findings : null;
 
   const stepTitle = (nodeId: string): string | null =>
-    model?.tree.nodes.get(nodeId)?.title ??
+    tree?.nodes.get(nodeId)?.title ??
     walk.path.find((entry) => entry.nodeId === nodeId)?.title ??
     (walk.currentNodeId === nodeId ? walk.currentNode.title : null);
 
@@ -74,20 +115,28 @@ function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswer
         />
       ) : null}
 
-      <CurrentStep detail={detail} model={model} answers={answers} preferences={preferences} />
+      <CurrentStep detail={detail} controls={controls} tree={tree} preferences={preferences} />
       {/* Road-test logs: their chart, analysis and figures for the current step. */}
       <div>
         <ButtonLink to={`/cases/${detail.id}/logs`}>Temperature logs</ButtonLink>
       </div>
 
-      {findings && detail.can.editFindings ? (
+      {readOnlyFindings ? null : findingsHere && detail.can.editFindings ? (
         <FindingsEditor
-          key={findings.outcomeNodeId}
+          key={findingsHere.outcomeNodeId}
           caseId={detail.id}
-          findings={findings}
+          findings={findingsHere}
           canMarkDiagnosed={detail.can.markDiagnosed}
+          blockedReason={diagnoseBlocked}
         />
-      ) : !findings && walk.status === 'reached-outcome' ? (
+      ) : walk.status === 'reached-outcome' && waiting ? (
+        <p
+          role="status"
+          className="rounded-panel border-2 border-dashed border-line bg-surface p-4 sm:p-6"
+        >
+          The findings are drafted when the answers reach the workshop.
+        </p>
+      ) : walk.status === 'reached-outcome' && !findingsHere ? (
         <LoadingState label="Drafting the findings…" />
       ) : null}
 
@@ -105,6 +154,7 @@ function CaseView({ detail, answers }: { detail: CaseDetail; answers: WalkAnswer
         <CaseNotes
           caseId={detail.id}
           notes={detail.notes}
+          queued={items}
           currentStep={{ id: walk.currentNodeId, title: walk.currentNode.title }}
           stepTitle={stepTitle}
           canWrite={detail.can.walk}

@@ -1,44 +1,53 @@
-// The step the case stands at, large: what kind of step and its title, its cautions before
-// anything else, then the prompt or instruction, the tools and time; beside it (below it on a
-// narrow screen) the answer controls, the evidence it asks for and "Step back".
+// The step the case stands at on this tablet, large: what kind of step and its title, its
+// cautions before anything else (compact where the case already showed that hazard), then the
+// prompt or instruction, the tools and time; beside it (below it on a narrow screen) what waits
+// to be sent, the answer controls, the evidence it asks for and "Step back".
 import type { CaseDetail, UnitPreferences } from '@heatpath/contracts';
+import type { CompiledTree } from '@heatpath/fault-tree';
+import { useMemo } from 'react';
 import { Button } from '../../../components/ui/button';
+import { hazardsShownBefore } from '../../../components/walk-step/caution-history';
 import { MeasurementForm } from '../../../components/walk-step/measurement-form';
 import { OutcomeSummary } from '../../../components/walk-step/outcome-summary';
 import { ProcedureAnswers } from '../../../components/walk-step/procedure-answers';
 import { QuestionAnswers } from '../../../components/walk-step/question-answers';
 import { StepCautions } from '../../../components/walk-step/step-cautions';
 import { StepFrame } from '../../../components/walk-step/step-frame';
+import { useQueuedPhotos } from '../../../lib/outbox';
+import { readingDraftId } from '../../../lib/reading-drafts';
 import { stepKindLabels } from '../../../lib/step-labels';
-import type { WalkModel } from '../case-tree';
-import type { WalkAnswers } from '../hooks/use-walk-answers';
+import { useAnswerBlockedReason } from '../hooks/use-evidence-gate';
+import type { WalkControls } from '../hooks/use-local-walk';
 import { AnswerStatus } from './answer-status';
+import { HeldAnswers } from './held-answers';
 import { StepEvidence } from './step-evidence';
 
 interface CurrentStepProps {
   detail: CaseDetail;
-  model: WalkModel | null;
-  answers: WalkAnswers;
+  controls: WalkControls;
+  tree: CompiledTree | null;
   preferences: UnitPreferences;
 }
 
-export function CurrentStep({ detail, model, answers, preferences }: CurrentStepProps) {
-  const { walk } = detail;
+export function CurrentStep({ detail, controls, tree, preferences }: CurrentStepProps) {
+  const { walk, model, notice } = controls;
   const node = walk.currentNode;
   const canWalk = detail.can.walk;
-  const disabled = !canWalk || answers.pending !== null;
-  const pendingEvent = answers.pending?.event;
+  const disabled = !canWalk || controls.waitingForServer;
   const stepAttachments = detail.attachments.filter((a) => a.nodeId === node.id);
-  const refusedFields = answers.notice?.kind === 'refused' ? answers.notice.fields : {};
+  const queuedPhotos = useQueuedPhotos(detail.id, node.id);
+  const blockedReason = useAnswerBlockedReason(detail, node);
+  const compactHazards = useMemo(() => hazardsShownBefore(tree, walk.path), [tree, walk.path]);
+  const refusedFields = notice?.fields ?? {};
 
   const stepBack =
     canWalk && walk.canGoBack ? (
       <div className="border-t-2 border-line pt-4">
         <Button
           variant="secondary"
-          disabled={answers.pending !== null}
+          disabled={controls.waitingForServer}
           onClick={() =>
-            answers.answer(
+            controls.answer(
               { type: 'walk.back', nodeId: node.id, position: walk.position },
               'Step back',
             )
@@ -50,13 +59,10 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
     ) : null;
 
   const status = (
-    <AnswerStatus
-      pending={answers.pending}
-      notice={answers.notice}
-      onRetry={answers.retry}
-      onDiscard={answers.discard}
-      onDismiss={answers.dismissNotice}
-    />
+    <>
+      <HeldAnswers caseId={detail.id} tree={tree} />
+      <AnswerStatus caseId={detail.id} tree={tree} notice={notice} />
+    </>
   );
 
   if (node.kind === 'outcome') {
@@ -92,6 +98,8 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
       {node.notes}
     </p>
   ) : null;
+  // A new step, or a step come back to, starts its controls afresh (a measurement from its draft).
+  const stepKey = `${node.id}:${walk.position}`;
 
   return (
     <StepFrame
@@ -107,7 +115,7 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
         }
       >
         <div className="flex flex-col gap-4">
-          <StepCautions cautions={node.cautions} />
+          <StepCautions cautions={node.cautions} compactHazards={compactHazards} />
           {textBeside ? null : instruction}
         </div>
         <div className="flex flex-col gap-4">
@@ -121,34 +129,34 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
             </p>
           ) : node.kind === 'question' ? (
             <QuestionAnswers
+              key={stepKey}
               node={node}
               position={walk.position}
               disabled={disabled}
-              pendingChoiceId={
-                pendingEvent?.type === 'answer.choice' ? pendingEvent.choiceId : null
-              }
-              onAnswer={answers.answer}
+              blockedReason={blockedReason}
+              onAnswer={controls.answer}
             />
           ) : node.kind === 'measurement' ? (
             <MeasurementForm
-              // A new step or a step revisited starts with empty boxes.
-              key={`${node.id}:${walk.position}`}
+              key={stepKey}
               node={node}
               position={walk.position}
               model={model}
               preferences={preferences}
               disabled={disabled}
               refusedFields={refusedFields}
-              onAnswer={answers.answer}
+              draftId={readingDraftId(detail.id, node.id)}
+              blockedReason={blockedReason}
+              onAnswer={controls.answer}
             />
           ) : (
             <ProcedureAnswers
-              key={`${node.id}:${walk.position}`}
+              key={stepKey}
               node={node}
               position={walk.position}
               disabled={disabled}
-              pendingResult={pendingEvent?.type === 'answer.procedure' ? pendingEvent.result : null}
-              onAnswer={answers.answer}
+              blockedReason={blockedReason}
+              onAnswer={controls.answer}
             />
           )}
           <StepEvidence
@@ -156,6 +164,7 @@ export function CurrentStep({ detail, model, answers, preferences }: CurrentStep
             nodeId={node.id}
             requests={node.evidence}
             attachments={stepAttachments}
+            queuedPhotos={queuedPhotos}
             canAttach={canWalk}
           />
           {stepBack}

@@ -39,9 +39,16 @@ interface FindingsEditorProps {
   caseId: string;
   findings: Findings;
   canMarkDiagnosed: boolean;
+  /** Why the case cannot be marked diagnosed yet (evidence missing, answers still waiting). */
+  blockedReason?: string | null;
 }
 
-export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsEditorProps) {
+export function FindingsEditor({
+  caseId,
+  findings,
+  canMarkDiagnosed,
+  blockedReason = null,
+}: FindingsEditorProps) {
   const save = useSaveFindings();
   const diagnosed = useMarkDiagnosed();
   const [base, setBase] = useState(findings.revision);
@@ -174,10 +181,12 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
           <Button
             size="large"
             variant="secondary"
-            disabled={isDirty || save.isPending}
+            disabled={isDirty || save.isPending || Boolean(blockedReason)}
             busy={diagnosed.isPending}
             busyLabel="Marking…"
-            aria-describedby={isDirty ? 'diagnosed-hint' : undefined}
+            aria-describedby={
+              isDirty ? 'diagnosed-hint' : blockedReason ? 'diagnosed-blocked' : undefined
+            }
             onClick={() => diagnosed.mutate(caseId)}
           >
             <span aria-hidden="true">✓</span> Mark diagnosed
@@ -186,6 +195,10 @@ export function FindingsEditor({ caseId, findings, canMarkDiagnosed }: FindingsE
         {isDirty ? (
           <p id="diagnosed-hint" className="text-sm text-ink-muted">
             Unsaved changes. Save the findings before marking the case diagnosed.
+          </p>
+        ) : canMarkDiagnosed && blockedReason ? (
+          <p id="diagnosed-blocked" role="status" className="text-sm font-semibold">
+            {blockedReason}
           </p>
         ) : null}
       </div>

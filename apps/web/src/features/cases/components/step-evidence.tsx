@@ -1,17 +1,20 @@
-// What the step asks to be recorded (a photo, a log) with the upload right there, and what has
-// been attached to the step so far.
+// What the step asks to be recorded (a photo, a log) with the camera or upload right there, what
+// has been attached to the step so far, and the step's photos still waiting to be sent.
 import type { CaseAttachment } from '@heatpath/contracts';
 import type { EvidenceRequest } from '@heatpath/fault-tree';
 import { useId } from 'react';
 import { Badge } from '../../../components/ui/badge';
 import { AttachButton } from './attach-button';
+import type { PhotoItem } from '../../../lib/outbox';
 import { AttachmentThumbnails } from './attachment-thumbnails';
+import { QueuedPhotos } from './queued-photos';
 
 interface StepEvidenceProps {
   caseId: string;
   nodeId: string;
   requests: readonly EvidenceRequest[];
   attachments: readonly CaseAttachment[];
+  queuedPhotos: readonly PhotoItem[];
   canAttach: boolean;
 }
 
@@ -20,10 +23,11 @@ export function StepEvidence({
   nodeId,
   requests,
   attachments,
+  queuedPhotos,
   canAttach,
 }: StepEvidenceProps) {
   const baseId = useId();
-  if (requests.length === 0 && attachments.length === 0) return null;
+  if (requests.length === 0 && attachments.length === 0 && queuedPhotos.length === 0) return null;
   return (
     <section aria-labelledby={`${baseId}-heading`} className="flex flex-col gap-3">
       <h3 id={`${baseId}-heading`} className="font-bold">
@@ -49,6 +53,7 @@ export function StepEvidence({
         );
       })}
       <AttachmentThumbnails attachments={attachments} />
+      <QueuedPhotos photos={queuedPhotos} />
     </section>
   );
 }
