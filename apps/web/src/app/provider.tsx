@@ -7,7 +7,12 @@ import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client
 import { useState } from 'react';
 import { RouterProvider } from 'react-router';
 import { startOnlineFromBrowser } from '../lib/online';
-import { cachePersistOptions, clearCachedData, keepPersistedQueries } from '../lib/persist-cache';
+import {
+  cachePersistOptions,
+  clearCachedData,
+  keepCacheToOnePerson,
+  keepPersistedQueries,
+} from '../lib/persist-cache';
 import { createQueryClient } from '../lib/query-client';
 import { signInPath } from './guards';
 import { createAppRouter } from './router';
@@ -32,6 +37,7 @@ function createApp() {
     },
   });
   keepPersistedQueries(queryClient);
+  keepCacheToOnePerson(queryClient);
   // Called once the cache is restored: creating the router starts the first screen's loaders.
   const startRouter = () => (router = createAppRouter(queryClient));
   return { queryClient, startRouter };

@@ -15,6 +15,7 @@ import {
   cachePersister,
   clearCachedData,
   isPersistedQueryKey,
+  keepCacheToOnePerson,
 } from './persist-cache';
 import { createQueryClient } from './query-client';
 import { casesKeys, staffKeys, treesKeys } from './query-keys';
@@ -113,5 +114,21 @@ describe('the cache kept on the tablet', () => {
     await clearCachedData(queryClient);
     expect(queryClient.getQueryData(meQueryKey)).toBeUndefined();
     expect(await storedKeys()).toBeUndefined();
+  });
+
+  it('drops the last person’s cases when someone else signs in on the tablet', async () => {
+    await persistQueryClientSave({ queryClient: filledClient(), ...cachePersistOptions });
+    const reloaded = createQueryClient();
+    keepCacheToOnePerson(reloaded);
+    await persistQueryClientRestore({ queryClient: reloaded, ...cachePersistOptions });
+    // The same person again (a fresh "me"): the cases stay.
+    reloaded.setQueryData(meQueryKey, makeMe({ role: 'technician', name: 'Renamed' }));
+    expect(reloaded.getQueryData(casesKeys.detail(caseId))).toBeDefined();
+    const other = makeMe({ id: '00000000-0000-4000-8000-000000000009', role: 'technician' });
+    reloaded.setQueryData(meQueryKey, other);
+    await Promise.resolve();
+    expect(reloaded.getQueryData(casesKeys.detail(caseId))).toBeUndefined();
+    expect(reloaded.getQueryData(casesKeys.list(mineFilters))).toBeUndefined();
+    expect(reloaded.getQueryData(meQueryKey)).toEqual(other);
   });
 });

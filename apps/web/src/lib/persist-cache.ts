@@ -4,8 +4,10 @@
 // and the answers given offline live in the outbox, which is not this cache. The stored copy is
 // dropped after a week, by another build, at sign-out and when the session has expired.
 import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
+import type { Me } from '@heatpath/contracts';
 import {
   defaultShouldDehydrateQuery,
+  hashKey,
   type Query,
   type QueryClient,
   type QueryKey,
@@ -108,6 +110,26 @@ export function keepPersistedQueries(queryClient: QueryClient): void {
   for (const queryKey of [meQueryKey, casesKeys.lists(), casesKeys.details()]) {
     queryClient.setQueryDefaults(queryKey, { gcTime: cacheMaxAge });
   }
+}
+
+/**
+ * The cache belongs to one person: when someone else signs in on the tablet (the last person's
+ * data restored without a sign-out in between), everything but the new "me" is dropped before a
+ * screen can show it, and so never saved again. Returns the unsubscribe.
+ */
+export function keepCacheToOnePerson(queryClient: QueryClient): () => void {
+  const meHash = hashKey(meQueryKey);
+  let personId: string | undefined;
+  return queryClient.getQueryCache().subscribe((event) => {
+    if (event.type !== 'added' && event.type !== 'updated') return;
+    if (event.query.queryHash !== meHash) return;
+    const id = (event.query.state.data as Me | undefined)?.id;
+    if (!id) return;
+    if (personId !== undefined && personId !== id) {
+      queryClient.removeQueries({ predicate: (query) => query.queryHash !== meHash });
+    }
+    personId = id;
+  });
 }
 
 /** Forgets everything cached, in memory and on the tablet (sign-out, an expired session). */
