@@ -303,8 +303,8 @@ describe('the case page', () => {
     expect(
       screen.getByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
     ).toBeTruthy();
-    const title = await screen.findByText('The case moved on before these answers arrived');
-    const panel = title.closest('[role="alert"]') as HTMLElement;
+    const panel = await screen.findByRole('region', { name: /moved on/ });
+    expect(within(panel).getByText('The case moved on before these answers arrived')).toBeTruthy();
     expect(within(panel).getByText('When does it run hot?: No clear pattern')).toBeTruthy();
 
     await user.click(within(panel).getByRole('button', { name: 'Keep the case as it is' }));
@@ -343,6 +343,77 @@ describe('the case page', () => {
     expect(walkRequests()[0]?.body).toMatchObject({
       event: { type: 'walk.back', nodeId: 'level-cold', position: 1 },
     });
+  });
+
+  it('puts the readings a step back undoes into the boxes again', async () => {
+    const answered = ['idle-or-traffic', { topUpLitres: { value: 0.3, unit: 'L' } }];
+    setup({
+      detail: makeCaseDetail(answered),
+      walk: () =>
+        json(
+          {
+            walk: walkOf([
+              ...eventsFor(answered),
+              { type: 'walk.back', nodeId: 'visual-leaks', position: 2 },
+            ]),
+            repeated: false,
+          },
+          201,
+        ),
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Look for leaks' }, slow);
+    await user.click(screen.getByRole('button', { name: 'Step back' }));
+    await screen.findByRole('heading', { level: 2, name: 'Coolant level, engine cold' });
+    expect((screen.getByLabelText('Coolant added to reach MAX') as HTMLInputElement).value).toBe(
+      '0.3',
+    );
+  });
+
+  it('shows a finding reached on the tablet before its findings, then the findings from the reply', async () => {
+    const beforeLast = paths.outcome.slice(0, -1);
+    let reply: (response: Response) => void = () => undefined;
+    const { caseReads, walkRequests } = setup({
+      detail: makeCaseDetail(beforeLast),
+      walk: () =>
+        new Promise<Response>((resolve) => {
+          reply = resolve;
+        }),
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'Thermostat opening temperature' }, slow);
+    await user.type(screen.getByLabelText('Stamped opening temperature'), '87');
+    await user.type(screen.getByLabelText('Water temperature when it began to open'), '99');
+    await user.click(screen.getByRole('button', { name: 'Save readings' }));
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Thermostat sticking closed' }),
+    ).toBeTruthy();
+    expect(
+      screen.getByText('The findings are drafted when the answers reach the workshop.'),
+    ).toBeTruthy();
+    const readsBefore = caseReads().length;
+    await waitFor(() => expect(walkRequests()).toHaveLength(1));
+
+    reply(
+      json(
+        {
+          walk: walkAfter(paths.outcome),
+          repeated: false,
+          case: {
+            status: 'in_diagnosis',
+            updatedAt: '2025-03-01T09:05:00.000Z',
+            diagnosedAt: null,
+            can: { walk: true, editFindings: true, markDiagnosed: true },
+            findings: makeFindings(),
+          },
+        },
+        201,
+      ),
+    );
+    expect(
+      await screen.findByRole('heading', { level: 2, name: 'Findings for the repair order' }),
+    ).toBeTruthy();
+    expect(caseReads().length).toBe(readsBefore);
   });
 
   it('stores a procedure’s note on its step before the answer', async () => {

@@ -54,28 +54,30 @@ export function HeldAnswers({ caseId, tree }: HeldAnswersProps) {
     });
 
   return (
-    <Alert tone="caution" role="alert" title="The case moved on before these answers arrived">
-      <p>
-        The case was answered elsewhere meanwhile; it now shows where it stands. These answers from
-        this tablet were not stored:
-      </p>
-      <ol className="list-decimal pl-6">
-        {held.map((item) => (
-          <li key={item.seq}>{describeItem(item, tree)}</li>
-        ))}
-      </ol>
-      <div className="flex flex-wrap gap-3">
-        <Button onClick={() => void answerAgain()} disabled={busy}>
-          Answer again from where the case stands
-        </Button>
-        <Button variant="secondary" onClick={() => void keepAsItIs()} disabled={busy}>
-          Keep the case as it is
-        </Button>
-      </div>
-      <p className="text-sm text-ink-muted">
-        Answering again fills in the readings you typed when you reach those steps. Keeping the case
-        as it is writes these answers into a note on the case.
-      </p>
-    </Alert>
+    <section aria-label="Answers not stored: the case moved on">
+      <Alert tone="caution" role="alert" title="The case moved on before these answers arrived">
+        <p>
+          The case was answered elsewhere meanwhile; it now shows where it stands. These answers
+          from this tablet were not stored:
+        </p>
+        <ol className="list-decimal pl-6">
+          {held.map((item) => (
+            <li key={item.seq}>{describeItem(item, tree)}</li>
+          ))}
+        </ol>
+        <div className="flex flex-wrap gap-3">
+          <Button onClick={() => void answerAgain()} disabled={busy}>
+            Answer again from where the case stands
+          </Button>
+          <Button variant="secondary" onClick={() => void keepAsItIs()} disabled={busy}>
+            Keep the case as it is
+          </Button>
+        </div>
+        <p className="text-sm text-ink-muted">
+          Answering again fills in the readings you typed when you reach those steps. Keeping the
+          case as it is writes these answers into a note on the case.
+        </p>
+      </Alert>
+    </section>
   );
 }
