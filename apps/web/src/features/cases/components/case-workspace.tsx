@@ -58,10 +58,23 @@ function CaseWalk({ detail }: { detail: CaseDetail }) {
   const [generation, setGeneration] = useState(0);
   const rebuild = useCallback(() => setGeneration((n) => n + 1), []);
   if (!tree) return <ServerWalk detail={detail} />;
-  return <LocalWalk key={generation} detail={detail} tree={tree} onRebuild={rebuild} />;
+  return (
+    <LocalWalk
+      key={generation}
+      detail={detail}
+      tree={tree}
+      rebuilt={generation > 0}
+      onRebuild={rebuild}
+    />
+  );
 }
 
-function LocalWalk(props: { detail: CaseDetail; tree: CompiledTree; onRebuild: () => void }) {
+function LocalWalk(props: {
+  detail: CaseDetail;
+  tree: CompiledTree;
+  rebuilt: boolean;
+  onRebuild: () => void;
+}) {
   const controls = useLocalWalk(props);
   return <CaseView detail={props.detail} tree={props.tree} controls={controls} />;
 }

@@ -52,10 +52,17 @@ function keepUndoneReadings(caseId: string, snapshot: WalkSnapshot): void {
 export function useLocalWalk({
   tree,
   detail,
+  rebuilt,
   onRebuild,
 }: {
   tree: CompiledTree;
   detail: CaseDetail;
+  /**
+   * Built again because the server's walk went elsewhere: queued answers that do not fit it are
+   * held. On first opening they are not (the case kept on the tablet may be older than the
+   * server's; the server then takes them, or refuses them and they are held).
+   */
+  rebuilt: boolean;
   onRebuild: () => void;
 }): WalkControls {
   const caseId = detail.id;
@@ -69,13 +76,13 @@ export function useLocalWalk({
 
   // Answers that did not fit the server's walk wait for the person's choice.
   useEffect(() => {
-    if (build.misfits.length > 0) {
+    if (rebuilt && build.misfits.length > 0) {
       void holdOutboxItems(
         build.misfits.map((item) => item.seq),
         movedOn,
       );
     }
-  }, [build]);
+  }, [build, rebuilt]);
 
   const serverHistory = detail.walk.history;
   useEffect(() => {
