@@ -4,7 +4,14 @@
 // (use-local-walk.ts); both queue answers the same way.
 import type { WalkEvent } from '@heatpath/fault-tree';
 import { useCallback, useState } from 'react';
-import { discardOutboxItem, newOutboxKey, outboxSender, useOutbox } from '../../../lib/outbox';
+import { useMe } from '../../../lib/auth';
+import {
+  discardOutboxItem,
+  newOutboxKey,
+  outboxSender,
+  useOutbox,
+  useOutboxConnection,
+} from '../../../lib/outbox';
 import { queueAnswer } from '../queue-answer';
 
 export interface PendingAnswer {
@@ -31,6 +38,8 @@ export interface WalkAnswers {
 }
 
 export function useWalkAnswers(caseId: string): WalkAnswers {
+  const me = useMe();
+  useOutboxConnection(me.id);
   const items = useOutbox(caseId);
   const [key, setKey] = useState<string | null>(null);
   const item = items.find((queued) => queued.key === key && queued.kind === 'walk');
