@@ -317,6 +317,25 @@ describe('the case page', () => {
     );
   });
 
+  it('keeps answers when the session has ended and asks to sign in before sending', async () => {
+    setup({
+      detail: makeCaseDetail(paths.start),
+      walk: () => errorResponse(401, 'unauthenticated', 'Sign in first.'),
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }, slow);
+    await user.click(screen.getByRole('button', { name: 'No clear pattern' }));
+    // The walk goes on; the answer waits on the tablet for a new session.
+    expect(
+      screen.getByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+    ).toBeTruthy();
+    const alert = (await screen.findByText('Sign in again to send')).closest(
+      '[role="alert"]',
+    ) as HTMLElement;
+    expect(within(alert).getByText(/1 answer waits on this tablet/)).toBeTruthy();
+    expect(within(alert).getByRole('link', { name: 'Sign in' })).toBeTruthy();
+  });
+
   it('steps back with an event, not by forgetting the answer', async () => {
     const { walkRequests } = setup({
       detail: makeCaseDetail(['idle-or-traffic']),
