@@ -12,6 +12,7 @@ import { QueryTypes } from 'sequelize';
 import { portIsFree } from '../../../scripts/lib/postgres.mjs';
 import { loadConfig } from '../src/config';
 import {
+  Attachment,
   DiagnosticCase,
   Tree,
   TreeVersion,
@@ -24,7 +25,8 @@ import { createSequelize } from '../src/db/sequelize';
 import { hashPassword } from '../src/lib/passwords';
 import { installShippedTrees } from '../src/services/trees/install-shipped-trees';
 import { createVehicle } from '../src/test/factories';
-import { overheatingTreeKey, stuckShroudPath } from '../src/test/walks';
+import { overheatingTreeKey, stuckShroudPath } from '../src/db/seeders/demo-walks';
+import { evidenceRows } from './evidence-rows';
 
 const technicians = Number(process.env.BENCH_TECHNICIANS ?? 100);
 const seconds = Number(process.env.BENCH_SECONDS ?? 60);
@@ -74,6 +76,15 @@ for (let t = 0; t < technicians; t += 1) {
       createdBy: user.id,
       currentNodeId: stuckShroudPath[0]!.nodeId,
     })),
+  );
+  await Attachment.bulkCreate(
+    evidenceRows({
+      definition: version!.definition,
+      steps: stuckShroudPath,
+      caseIds: cases.map((c) => c.id),
+      workshopId: workshop.id,
+      uploadedBy: user.id,
+    }),
   );
   techs.push({ email: user.email, caseIds: cases.map((c) => c.id) });
 }

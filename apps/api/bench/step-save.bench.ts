@@ -7,13 +7,21 @@ import { spawn } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
 import autocannon from 'autocannon';
 import { loadConfig } from '../src/config';
-import { DiagnosticCase, Tree, User, Workshop, initModels } from '../src/db/models/index';
+import {
+  Attachment,
+  DiagnosticCase,
+  Tree,
+  User,
+  Workshop,
+  initModels,
+} from '../src/db/models/index';
 import { migrateUp } from '../src/db/migrator';
 import { createSequelize } from '../src/db/sequelize';
 import { hashPassword } from '../src/lib/passwords';
 import { installShippedTrees } from '../src/services/trees/install-shipped-trees';
 import { createVehicle } from '../src/test/factories';
-import { overheatingTreeKey, stuckShroudPath } from '../src/test/walks';
+import { overheatingTreeKey, stuckShroudPath } from '../src/db/seeders/demo-walks';
+import { evidenceRows } from './evidence-rows';
 
 const technicians = 50;
 const casesEach = Number(process.env.BENCH_CASES_EACH ?? 6);
@@ -62,6 +70,15 @@ for (let t = 0; t < technicians; t += 1) {
     });
     caseIds.push(kase.id);
   }
+  await Attachment.bulkCreate(
+    evidenceRows({
+      definition: version!.definition,
+      steps: stuckShroudPath,
+      caseIds: caseIds,
+      workshopId: workshop.id,
+      uploadedBy: user.id,
+    }),
+  );
   techs.push({ email: user.email, caseIds });
 }
 await sequelize.close();

@@ -23,12 +23,20 @@ export class AppError extends Error {
     message: string,
     readonly fields?: Record<string, string>,
     readonly reason?: string,
+    status?: number,
   ) {
     super(message);
     this.name = 'AppError';
-    this.status = statusByCode[code];
+    this.status = status ?? statusByCode[code];
   }
 }
+
+/**
+ * A well-formed request the case cannot take yet (a step's required photo or log is missing):
+ * 422 with code `validation_failed` and `reason` naming the requirement.
+ */
+export const unmetRequirement = (message: string, reason: string) =>
+  new AppError('validation_failed', message, undefined, reason, 422);
 
 export const notFound = (what: string) => new AppError('not_found', `${what} was not found.`);
 export const forbidden = (message = 'Your role does not allow this.') =>

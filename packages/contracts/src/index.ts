@@ -12,3 +12,4 @@ export * from './mail';
 export * from './repair-order';
 export * from './temperature-logs';
 export * from './training';
+export * from './required-evidence';

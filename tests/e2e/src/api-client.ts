@@ -31,3 +31,15 @@ export async function apiAs(email: string) {
     return JSON.parse(text) as T;
   };
 }
+
+/** Uploads one file to a case (optionally on a step) with a client from `apiAs`. */
+export async function attachFile(
+  client: Awaited<ReturnType<typeof apiAs>>,
+  caseId: string,
+  file: { nodeId?: string; name: string; type: string; bytes: Buffer },
+): Promise<{ id: string }> {
+  const form = new FormData();
+  if (file.nodeId) form.set('nodeId', file.nodeId);
+  form.set('file', new Blob([new Uint8Array(file.bytes)], { type: file.type }), file.name);
+  return client<{ id: string }>('POST', `/api/cases/${caseId}/attachments`, form);
+}

@@ -1,8 +1,10 @@
 // A finished case set up through the API for browser tests: the technician's case for HL17 KVR
-// walked along the scripted stuck-shroud path, with invented photos (drawn and captured by
-// chromium) and notes on the shroud step, then marked diagnosed.
-import { stuckShroudPath } from '../../../apps/api/src/test/walks';
-import { apiAs } from './api-client';
+// walked along the scripted stuck-shroud path (a photo attached first where a step requires one,
+// as the pump removal does), with invented photos (drawn and captured by chromium) and notes on
+// the shroud step, then marked diagnosed.
+import type { TreeNode } from '@heatpath/fault-tree';
+import { stuckShroudPath } from '../../../apps/api/src/db/seeders/demo-walks';
+import { apiAs, attachFile } from './api-client';
 import type { BrowserSession } from './browser';
 
 export interface CasePhoto {
@@ -23,6 +25,39 @@ export async function testPng(session: BrowserSession, band: CasePhoto['band']):
   return png;
 }
 
+interface Walked {
+  walk: { position: number; currentNode: TreeNode & { id: string } };
+}
+
+/** Where a step requires a photo or log, attaches an invented one to it first. */
+async function attachRequiredEvidence(
+  tech: Awaited<ReturnType<typeof apiAs>>,
+  caseId: string,
+  node: Walked['walk']['currentNode'],
+  session: BrowserSession,
+): Promise<void> {
+  if (node.kind === 'outcome') return;
+  for (const request of node.evidence.filter((r) => r.required)) {
+    await attachFile(
+      tech,
+      caseId,
+      request.kind === 'photo'
+        ? {
+            nodeId: node.id,
+            name: `${node.id}.png`,
+            type: 'image/png',
+            bytes: await testPng(session, [40, 44, 48]),
+          }
+        : {
+            nodeId: node.id,
+            name: `${node.id}.csv`,
+            type: 'text/csv',
+            bytes: Buffer.from('time_s,coolant_c\n0,21\n300,62\n600,88\n'),
+          },
+    );
+  }
+}
+
 export async function diagnosedCase(options: {
   session: BrowserSession;
   complaint: string;
@@ -40,26 +75,29 @@ export async function diagnosedCase(options: {
   );
   const tree = trees.find((t) => t.key === 'overheats-intermittent-no-codes');
   if (!vehicles[0] || !tree) throw new Error('the demo seed has no HL17 KVR or overheating tree');
-  const kase = await tech<{ id: string; reference: string }>('POST', '/api/cases', {
+  const kase = await tech<{ id: string; reference: string } & Walked>('POST', '/api/cases', {
     vehicleId: vehicles[0].id,
     complaint: options.complaint,
     mileageAtIntake: options.mileageAtIntake,
     treeId: tree.id,
   });
-  let position = 0;
+  let { walk } = kase;
   for (const step of stuckShroudPath) {
-    const res = await tech<{ walk: { position: number } }>('POST', `/api/cases/${kase.id}/walk`, {
+    await attachRequiredEvidence(tech, kase.id, walk.currentNode, options.session);
+    const res = await tech<Walked>('POST', `/api/cases/${kase.id}/walk`, {
       idempotencyKey: crypto.randomUUID(),
-      event: { ...step.answer, nodeId: step.nodeId, position },
+      event: { ...step.answer, nodeId: step.nodeId, position: walk.position },
     });
-    position = res.walk.position;
+    walk = res.walk;
   }
   for (const photo of options.photos) {
-    const form = new FormData();
-    form.set('nodeId', 'shroud-inspection');
     const png = await testPng(options.session, photo.band);
-    form.set('file', new Blob([new Uint8Array(png)], { type: 'image/png' }), photo.name);
-    await tech('POST', `/api/cases/${kase.id}/attachments`, form);
+    await attachFile(tech, kase.id, {
+      nodeId: 'shroud-inspection',
+      name: photo.name,
+      type: 'image/png',
+      bytes: png,
+    });
   }
   for (const text of options.notes ?? []) {
     await tech('POST', `/api/cases/${kase.id}/notes`, {

@@ -118,6 +118,17 @@ async function caseAtThermostatOpening(page: Page): Promise<string> {
   });
   let position = kase.walk.position as number;
   for (const [nodeId, answer] of toThermostatOpening) {
+    // The block test's result requires a photo of the test fluid on the step.
+    if (nodeId === 'block-test-result') {
+      const photo = await request.post(`/api/cases/${kase.id}/attachments`, {
+        headers: client,
+        multipart: {
+          nodeId,
+          file: { name: 'test-fluid.png', mimeType: 'image/png', buffer: await page.screenshot() },
+        },
+      });
+      expect(photo.status(), await photo.text()).toBe(201);
+    }
     const stored = await json(request, 'post', `/api/cases/${kase.id}/walk`, {
       idempotencyKey: randomUUID(),
       event: { ...answer, nodeId, position },

@@ -2,6 +2,7 @@
 // database), `update-shipped-trees` (publish Heatpath's current trees where a workshop still
 // has an earlier shipped version) and `reset` (drop everything; development and test only).
 import { loadConfig } from '../config';
+import { createDiskFileStore } from '../lib/storage/disk-file-store';
 import { initModels } from './models/index';
 import { migrateUp } from './migrator';
 import { createSequelize } from './sequelize';
@@ -25,7 +26,7 @@ async function main(): Promise<void> {
       break;
     }
     case 'seed-demo': {
-      const seeded = await seedDemo(sequelize);
+      const seeded = await seedDemo(sequelize, { store: createDiskFileStore(config.uploadDir) });
       console.log(
         seeded ? '✓ Seeded the demo workshops.' : '✓ Demo data already present; left as it is.',
       );

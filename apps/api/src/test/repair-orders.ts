@@ -1,13 +1,13 @@
 // A diagnosed case for repair-order tests: a fresh workshop, the stuck-shroud walk through the
-// API as the technician, a photo of the shroud, and "diagnosed". Also small helpers to save and
+// API as the technician (with the photo the pump removal requires), a photo of the shroud, and
+// "diagnosed". Also small helpers to save and
 // approve findings the way the screens do.
-import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import { expect } from 'vitest';
 import { signedIn } from './context';
 import type { testApp } from './context';
 import { createVehicle, createWorkshopWithTrees, testPassword } from './factories';
-import { overheatingTreeKey, stuckShroudPath } from './walks';
+import { overheatingTreeKey, stuckShroudPath, walkSteps } from './walks';
 
 export type Agent = Awaited<ReturnType<typeof signedIn>>;
 
@@ -32,15 +32,7 @@ export async function testPhoto(): Promise<Buffer> {
 }
 
 export async function walkToOutcome(agent: Agent, caseId: string): Promise<void> {
-  let position = 0;
-  for (const step of stuckShroudPath) {
-    const res = await agent.post(`/api/cases/${caseId}/walk`).send({
-      idempotencyKey: randomUUID(),
-      event: { ...step.answer, nodeId: step.nodeId, position },
-    });
-    expect(res.status, `${step.nodeId}: ${res.text}`).toBe(201);
-    position = res.body.walk.position;
-  }
+  await walkSteps(agent, caseId, stuckShroudPath);
 }
 
 export async function diagnosedCase(

@@ -1,15 +1,20 @@
 // Finished cases for the demo workshop, walked through the same services the screens use: one
 // already in the training casebook with a course for every apprentice, and one the lead can
-// still mark. Runs right after the demo workshops are created.
+// still mark. Where a step requires a photo or log, an invented one is attached first, as the
+// technician would. Runs right after the demo workshops are created.
 import { randomUUID } from 'node:crypto';
 import { Tree, User, Vehicle, Workshop } from '../models/index';
 import type { Actor } from '../../policies/permissions';
+import type { FileStore } from '../../lib/storage/file-store';
+import { addAttachment } from '../../services/attachments/add-attachment';
 import { addCaseNote } from '../../services/cases/add-case-note';
 import { createCase } from '../../services/cases/create-case';
+import { getCaseDetail } from '../../services/cases/get-case-detail';
 import { markDiagnosed } from '../../services/cases/mark-diagnosed';
 import { submitWalkEvent } from '../../services/cases/submit-walk-event';
 import { saveCourse } from '../../services/training/save-course';
 import { markTrainingCase } from '../../services/training/mark-training-case';
+import { evidenceFile, requiredEvidence } from './demo-evidence';
 import { confirmedLeakPath, overheatingTreeKey, stuckShroudPath } from './demo-walks';
 
 const actorOf = (user: User): Actor => ({
@@ -26,8 +31,9 @@ async function finishedCase(options: {
   mileage: number;
   path: typeof stuckShroudPath;
   notes: { nodeId: string; text: string }[];
+  store: FileStore;
 }): Promise<string> {
-  const { technician: actor } = options;
+  const { technician: actor, store } = options;
   const kase = await createCase({
     actor,
     input: {
@@ -38,15 +44,26 @@ async function finishedCase(options: {
       treeId: options.treeId,
     },
   });
-  let position = 0;
+  let { walk } = await getCaseDetail({ actor, caseId: kase.id });
   for (const step of options.path) {
+    for (const request of requiredEvidence(walk.currentNode)) {
+      const file = await evidenceFile(request, step.nodeId);
+      await addAttachment({
+        actor,
+        caseId: kase.id,
+        nodeId: step.nodeId,
+        photoOnly: request.kind === 'photo',
+        file: { originalName: file.originalName, bytes: file.bytes },
+        store,
+      });
+    }
     const result = await submitWalkEvent({
       actor,
       caseId: kase.id,
       idempotencyKey: randomUUID(),
-      event: { ...step.answer, nodeId: step.nodeId, position },
+      event: { ...step.answer, nodeId: step.nodeId, position: walk.position },
     });
-    position = result.walk.position;
+    walk = result.walk;
   }
   for (const note of options.notes) {
     await addCaseNote({
@@ -60,7 +77,7 @@ async function finishedCase(options: {
 }
 
 /** Seeds the finished cases of Harbour Lane Garage; does nothing if it has no technician. */
-export async function seedDemoCases(): Promise<void> {
+export async function seedDemoCases(deps: { store: FileStore }): Promise<void> {
   const workshop = await Workshop.findOne({ where: { name: 'Harbour Lane Garage' } });
   if (!workshop) return;
   const people = await User.findAll({ where: { workshopId: workshop.id } });
@@ -82,6 +99,7 @@ export async function seedDemoCases(): Promise<void> {
     complaint: 'Temperature gauge climbs on long climbs and in summer traffic, then settles.',
     mileage: 118_400,
     path: stuckShroudPath,
+    store: deps.store,
     notes: [
       {
         nodeId: 'hose-temps',
@@ -100,6 +118,7 @@ export async function seedDemoCases(): Promise<void> {
     complaint: 'Needs topping up every week; sweet smell after a drive.',
     mileage: 96_200,
     path: confirmedLeakPath,
+    store: deps.store,
     notes: [{ nodeId: 'visual-leaks', text: 'Pink crust on the lower hose clip at the pump.' }],
   });
 

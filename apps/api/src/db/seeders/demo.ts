@@ -5,6 +5,7 @@ import type { Sequelize } from 'sequelize';
 import { Customer, User, Vehicle, Workshop } from '../models/index';
 import { installShippedTrees } from '../../services/trees/install-shipped-trees';
 import { hashPassword } from '../../lib/passwords';
+import type { FileStore } from '../../lib/storage/file-store';
 import { seedDemoCases } from './demo-cases';
 
 export const demoPassword = 'heatpath-demo';
@@ -101,10 +102,11 @@ export const demoWorkshops: {
 ];
 
 /** Seed the demo when no workshop exists yet; returns whether it seeded. */
-export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
+export async function seedDemo(sequelize: Sequelize, deps: { store: FileStore }): Promise<boolean> {
   const seeded = await seedDemoWorkshops(sequelize);
-  // The finished cases go through the case services, each with its own transaction.
-  if (seeded) await seedDemoCases();
+  // The finished cases go through the case services, each with its own transaction; the
+  // photos their walks require are stored in `store`.
+  if (seeded) await seedDemoCases(deps);
   return seeded;
 }
 

@@ -78,8 +78,11 @@ describe('reviewing the findings of a diagnosed case', () => {
     );
     expect(latest.changes.some((c: string) => c.startsWith('Labour changed:'))).toBe(true);
     expect(review.body.current.photoIds).toEqual([photoId]);
-    expect(review.body.photos).toHaveLength(1);
-    expect(review.body.photos[0]).toMatchObject({ id: photoId, stepTitle: expect.any(String) });
+    // The case's photos to choose from: the shroud, and the two the walk required.
+    expect(review.body.photos).toHaveLength(3);
+    expect(review.body.photos.find((p: { id: string }) => p.id === photoId)).toMatchObject({
+      stepTitle: expect.any(String),
+    });
     expect(review.body.current.readings[0]).toMatchObject({ display: expect.any(String) });
     expect(review.body.can).toEqual({ edit: true, approve: true, send: false });
     expect(review.body.approvedRevision).toBeNull();

@@ -17,7 +17,7 @@ import { createSequelize } from '../../db/sequelize';
 import { createLogger } from '../../lib/logger';
 import { agentFor, signedIn, testConfig } from '../../test/context';
 import { createVehicle, createWorkshopWithTrees, testPassword } from '../../test/factories';
-import { overheatingTreeKey, stuckShroudPath } from '../../test/walks';
+import { attachEvidenceAhead, overheatingTreeKey, stuckShroudPath } from '../../test/walks';
 
 const walkers = 4;
 let cluster: Cluster;
@@ -97,6 +97,13 @@ describe('PostgreSQL stops in the middle of walks', () => {
         });
         expect(created.status, created.text).toBe(201);
         caseIds.push(created.body.id as string);
+        // The photos the walk requires (the block test's fluid, the pump) are taken first.
+        await attachEvidenceAhead(
+          tech,
+          created.body.id,
+          created.body.tree.definition,
+          stuckShroudPath,
+        );
       }
 
       const sent: Sent[] = [];

@@ -1,27 +1,35 @@
 // The guided walk through the API: a full walk of the shipped overheating tree to the
 // stuck-shroud outcome, the replay guard (stale, duplicate, retried), step back, readings in
-// other units, range errors, pinning across a new tree version, and diagnosis.
+// other units, range errors, pinning across a new tree version, required evidence, and diagnosis.
 import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import type { Sequelize } from 'sequelize';
-import { TreeVersion } from '../../db/models/index';
+import { Attachment, TreeVersion } from '../../db/models/index';
 import { signedIn, testApp, testSequelize } from '../../test/context';
 import { createVehicle, createWorkshopWithTrees, testPassword } from '../../test/factories';
-import { overheatingTreeKey, stuckShroudOutcome, stuckShroudPath } from '../../test/walks';
+import {
+  attachRequiredEvidence,
+  evidenceLog,
+  evidencePhoto,
+  overheatingTreeKey,
+  stuckShroudOutcome,
+  stuckShroudPath,
+  walkSteps,
+} from '../../test/walks';
 
 const app = testApp();
 
-async function openCase() {
+async function openCase(treeKey = overheatingTreeKey) {
   const w = await createWorkshopWithTrees();
   const vehicle = await createVehicle(w.workshop.id);
   const tech = await signedIn(app, w.people.technician.email, testPassword);
   const res = await tech.post('/api/cases').send({
     vehicleId: vehicle.id,
     complaint: 'Overheats now and then on long climbs.',
-    treeId: w.trees[overheatingTreeKey],
+    treeId: w.trees[treeKey],
   });
   expect(res.status).toBe(201);
-  return { ...w, tech, caseId: res.body.id as string };
+  return { ...w, tech, caseId: res.body.id as string, created: res.body };
 }
 
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -40,13 +48,18 @@ async function answer(
 
 describe('walking a case', () => {
   it('reaches the stuck-shroud outcome step by step and drafts the findings', async () => {
-    const { tech, caseId } = await openCase();
+    const { tech, caseId, created } = await openCase();
     let position = 0;
+    let currentNode = created.walk.currentNode;
     const replies: { case: Record<string, unknown> }[] = [];
     for (const step of stuckShroudPath) {
+      // Where a step requires a photo (the block test's fluid, the pump's impeller side), the
+      // technician takes it first.
+      await attachRequiredEvidence(tech, caseId, currentNode);
       const res = await answer(tech, caseId, step, position);
       expect(res.status, `${step.nodeId}: ${res.text}`).toBe(201);
       position = res.body.walk.position;
+      currentNode = res.body.walk.currentNode;
       replies.push(res.body);
     }
     const kase = await tech.get(`/api/cases/${caseId}`);
@@ -90,7 +103,14 @@ describe('walking a case', () => {
     expect(late.status).toBe(409);
 
     const audit = await tech.get(`/api/cases/${caseId}/events`);
-    expect(audit.body.events.length).toBe(stuckShroudPath.length + 1);
+    // Every answer, the photos the walk required and "diagnosed".
+    expect(audit.body.events.length).toBe(
+      stuckShroudPath.length + kase.body.attachments.length + 1,
+    );
+    expect(kase.body.attachments.map((a: { nodeId: string }) => a.nodeId)).toEqual([
+      'block-test-result',
+      'pump-removal',
+    ]);
     expect(audit.body.events[0]).toMatchObject({
       seq: 1,
       kind: 'answer',
@@ -157,10 +177,8 @@ describe('walking a case', () => {
 
   it('takes readings in °F and psi, and names the allowed range when a reading is impossible', async () => {
     const { tech, caseId } = await openCase();
-    let position = 0;
     const toWarmUp = stuckShroudPath.findIndex((s) => s.nodeId === 'warm-up-live-data');
-    for (const step of stuckShroudPath.slice(0, toWarmUp))
-      position = (await answer(tech, caseId, step, position)).body.walk.position;
+    const { position } = (await walkSteps(tech, caseId, stuckShroudPath.slice(0, toWarmUp))).walk;
     // 230 °F is 110 °C and 222.8 °F is 106 °C (°C = (°F − 32) × 5/9, the defining relation).
     const imperial = {
       nodeId: 'warm-up-live-data',
@@ -270,11 +288,8 @@ describe('walking a case', () => {
 
   it('saves edited findings with revision checks, and refuses a stale save', async () => {
     const { tech, caseId } = await openCase();
-    let position = 0;
-    for (const step of stuckShroudPath)
-      position = (await answer(tech, caseId, step, position)).body.walk.position;
-    const kase = await tech.get(`/api/cases/${caseId}`);
-    const f = kase.body.findings;
+    const reached = await walkSteps(tech, caseId, stuckShroudPath);
+    const f = reached.case.findings!;
     const edit = {
       revision: f.revision,
       concern: f.concern,
@@ -335,5 +350,139 @@ describe('walking a case', () => {
       nodeId: 'interview-pattern',
       author: { name: expect.any(String) },
     });
+  });
+});
+
+describe('required evidence', () => {
+  const toPumpRemoval = stuckShroudPath.slice(
+    0,
+    stuckShroudPath.findIndex((s) => s.nodeId === 'pump-removal'),
+  );
+  const done = { type: 'answer.procedure' as const, result: 'done' as const };
+  const photoNeeded =
+    'This step needs a photo first: Photos of the pump, impeller side. Add it, then answer.';
+
+  it('refuses an answer at a step that requires a photo until the step has one; a step back goes through', async () => {
+    const { tech, caseId } = await openCase();
+    const there = await walkSteps(tech, caseId, toPumpRemoval);
+    expect(there.walk.currentNode.id).toBe('pump-removal');
+    let position = there.walk.position;
+    const refused = await answer(tech, caseId, { nodeId: 'pump-removal', answer: done }, position);
+    expect(refused.status).toBe(422);
+    expect(refused.body.error).toMatchObject({
+      code: 'validation_failed',
+      reason: 'evidence-required',
+      message: photoNeeded,
+    });
+    const couldNot = await answer(
+      tech,
+      caseId,
+      { nodeId: 'pump-removal', answer: { type: 'answer.procedure', result: 'could-not-do' } },
+      position,
+    );
+    expect(couldNot.status).toBe(422);
+    // A photo of another step, or a log on this one, is not the photo this step asks for.
+    await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('nodeId', 'pump-actuation-test')
+      .attach('file', await evidencePhoto(), 'scan-tool.jpg')
+      .expect(201);
+    await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('nodeId', 'pump-removal')
+      .attach('file', evidenceLog(), 'notes.csv')
+      .expect(201);
+    expect(
+      (await answer(tech, caseId, { nodeId: 'pump-removal', answer: done }, position)).status,
+    ).toBe(422);
+
+    const back = await tech.post(`/api/cases/${caseId}/walk`).send({
+      idempotencyKey: randomUUID(),
+      event: { type: 'walk.back', nodeId: 'pump-removal', position },
+    });
+    expect(back.status, back.text).toBe(201);
+    const again = await answer(tech, caseId, toPumpRemoval.at(-1)!, back.body.walk.position);
+    expect(again.status, again.text).toBe(201);
+    position = again.body.walk.position;
+
+    await attachRequiredEvidence(tech, caseId, again.body.walk.currentNode);
+    const answered = await answer(tech, caseId, { nodeId: 'pump-removal', answer: done }, position);
+    expect(answered.status, answered.text).toBe(201);
+    expect(answered.body.walk.currentNodeId).toBe('shroud-inspection');
+  });
+
+  it('refuses an answer at a step that requires a log until a log is attached on it', async () => {
+    const { tech, caseId } = await openCase('slow-warm-up-little-heat');
+    const there = await walkSteps(tech, caseId, [
+      {
+        nodeId: 'interview-recent-work',
+        answer: { type: 'answer.choice', choiceId: 'no-recent-work' },
+      },
+      {
+        nodeId: 'level-cold',
+        answer: {
+          type: 'answer.measurement',
+          readings: { topUpLitres: { value: 0.2, unit: 'L' } },
+        },
+      },
+      {
+        nodeId: 'cold-sensor-check',
+        answer: {
+          type: 'answer.measurement',
+          readings: {
+            keyOnLiveTemp: { value: 15, unit: 'degC' },
+            standingAirTemp: { value: 14, unit: 'degC' },
+          },
+        },
+      },
+    ]);
+    expect(there.walk.currentNode.id).toBe('warm-up-log');
+    const warmUp = {
+      nodeId: 'warm-up-log',
+      answer: {
+        type: 'answer.measurement' as const,
+        readings: {
+          minutesTo80: { value: 12, unit: 'min' },
+          settledTemp: { value: 90, unit: 'degC' },
+          ambientTemp: { value: 14, unit: 'degC' },
+        },
+      },
+    };
+    const refused = await answer(tech, caseId, warmUp, there.walk.position);
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.message).toBe(
+      'This step needs a log first: Warm-up log. Add it, then answer.',
+    );
+    await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('nodeId', 'warm-up-log')
+      .attach('file', evidenceLog(), 'warm-up.csv')
+      .expect(201);
+    const answered = await answer(tech, caseId, warmUp, there.walk.position);
+    expect(answered.status, answered.text).toBe(201);
+  });
+
+  it('refuses "Mark diagnosed" while a step on the walk lacks its required photo', async () => {
+    const { tech, caseId } = await openCase();
+    await walkSteps(tech, caseId, stuckShroudPath);
+    // As on a case walked before photos were required: the pump photo is not there.
+    await Attachment.destroy({ where: { caseId, nodeId: 'pump-removal' } });
+    const refused = await tech.post(`/api/cases/${caseId}/diagnosed`);
+    expect(refused.status).toBe(422);
+    expect(refused.body.error).toMatchObject({
+      code: 'validation_failed',
+      reason: 'evidence-required',
+      message:
+        'The step “Remove the coolant pump for inspection” needs a photo first: Photos of the pump, impeller side. Add it, then mark the case diagnosed.',
+    });
+    expect((await tech.get(`/api/cases/${caseId}`)).body.status).toBe('in_diagnosis');
+    await tech
+      .post(`/api/cases/${caseId}/attachments`)
+      .field('nodeId', 'pump-removal')
+      .attach('file', await evidencePhoto(), 'impeller-side.jpg')
+      .expect(201);
+    const diagnosed = await tech.post(`/api/cases/${caseId}/diagnosed`);
+    expect(diagnosed.status, diagnosed.text).toBe(200);
+    expect(diagnosed.body.status).toBe('diagnosed');
   });
 });

@@ -332,7 +332,8 @@ describe('the lead’s casebook', () => {
     const candidates = await lead.get('/api/training/candidates');
     expect(candidates.status).toBe(200);
     expect(candidates.body.cases.map((c: { caseId: string }) => c.caseId)).toEqual([caseId]);
-    expect(candidates.body.cases[0].photos).toHaveLength(2);
+    // The two shroud photos and the two the walk required (test fluid, pump).
+    expect(candidates.body.cases[0].photos).toHaveLength(4);
 
     const open = await lead.post('/api/cases').send({
       vehicleId: (await lead.get(`/api/cases/${caseId}`)).body.vehicle.id,

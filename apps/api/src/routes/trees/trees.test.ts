@@ -1,11 +1,15 @@
 // Tree authoring through the API: create, import with every problem listed, drafts with
 // optimistic concurrency, publish (clean only), frozen versions, retire, diff, and regression
 // replay of finished cases with a confirmation when an outcome changes.
-import { randomUUID } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { signedIn, testApp } from '../../test/context';
 import { createVehicle, createWorkshopWithTrees, testPassword } from '../../test/factories';
-import { overheatingTreeKey, stuckShroudOutcome, stuckShroudPath } from '../../test/walks';
+import {
+  overheatingTreeKey,
+  stuckShroudOutcome,
+  stuckShroudPath,
+  walkSteps,
+} from '../../test/walks';
 
 const app = testApp();
 type Agent = Awaited<ReturnType<typeof signedIn>>;
@@ -23,14 +27,7 @@ async function finishedCase(agent: Agent, workshopId: string, treeId: string) {
   const kase = await agent
     .post('/api/cases')
     .send({ vehicleId: vehicle.id, complaint: 'Overheats on climbs', treeId });
-  let position = 0;
-  for (const step of stuckShroudPath) {
-    const r = await agent.post(`/api/cases/${kase.body.id}/walk`).send({
-      idempotencyKey: randomUUID(),
-      event: { ...step.answer, nodeId: step.nodeId, position },
-    });
-    position = r.body.walk.position;
-  }
+  await walkSteps(agent, kase.body.id, stuckShroudPath);
   expect((await agent.post(`/api/cases/${kase.body.id}/diagnosed`)).status).toBe(200);
   return kase.body as { id: string; reference: string };
 }

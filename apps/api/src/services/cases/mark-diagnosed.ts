@@ -1,12 +1,15 @@
-// The technician's "diagnosed": only when the walk stands on an outcome and findings exist.
+// The technician's "diagnosed": only when the walk stands on an outcome, findings exist and
+// every step on the way that requires a photo or log has one.
 import { Finding } from '../../db/models/index';
 import { withTransaction } from '../../db/with-transaction';
 import { AppError } from '../../errors';
+import { compiledTreeOf } from '../../lib/compiled-trees';
 import { isOpenToWalking } from '../../policies/case-policy';
 import { assertCan } from '../../policies/permissions';
 import type { Actor } from '../../policies/permissions';
 import { appendCaseEvent } from './append-case-event';
 import { findCase } from './find-case';
+import { assertEvidenceOnPath } from './required-evidence';
 import { walkOf } from './walk-state';
 
 export async function markDiagnosed(options: { actor: Actor; caseId: string }) {
@@ -31,6 +34,13 @@ export async function markDiagnosed(options: { actor: Actor; caseId: string }) {
         'The findings do not match the outcome reached; reload the case.',
       );
     }
+    if (!kase.treeVersion) throw new Error('markDiagnosed needs the tree version loaded.');
+    await assertEvidenceOnPath({
+      tree: compiledTreeOf(kase.treeVersion),
+      caseId: kase.id,
+      path: walk.path,
+      transaction,
+    });
     await appendCaseEvent({
       actor,
       kase,

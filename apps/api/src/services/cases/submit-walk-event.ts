@@ -2,6 +2,7 @@
 // replayed on the pinned tree, and the event is accepted only if the walk is where the client
 // says it is; it is stored before the response, so the next step never shows for an answer that
 // was not kept. A retry with the same idempotency key gets the stored result, not a second answer.
+// An answer at a step whose required photo or log the case does not hold yet is refused (422).
 // The reply carries what the answer changed on the case (status, findings, what the person may
 // do next), so the page never has to read the whole case again.
 import type { Transaction } from 'sequelize';
@@ -20,6 +21,7 @@ import type { Actor } from '../../policies/permissions';
 import { appendCaseEvent } from './append-case-event';
 import { draftFindings } from './draft-findings';
 import { findCase } from './find-case';
+import { assertEvidenceForAnswer } from './required-evidence';
 import { walkEventsAndKey } from './walk-state';
 
 /** JSON with keys sorted, so a stored event (jsonb reorders keys) compares with a fresh one. */
@@ -135,6 +137,7 @@ export async function submitWalkEvent(options: {
       );
     }
     const stored: WalkEvent = result.event;
+    await assertEvidenceForAnswer({ tree, caseId: kase.id, event: stored, transaction });
     const walk = summary(result.snapshot, replay.applied + 1);
     await appendCaseEvent({
       actor,
