@@ -112,7 +112,10 @@ export function createOutboxSender(options: OutboxSenderOptions): OutboxSender {
           item.seq >= from.seq &&
           isPending(item),
       );
-    for (const item of later) await store.update(item.seq, { state: 'held', problem });
+    await store.updateMany(
+      later.map((item) => item.seq),
+      { state: 'held', problem },
+    );
   };
 
   /** Sends until the queue is empty or a failure says to wait (then returns true). */

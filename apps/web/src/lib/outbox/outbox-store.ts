@@ -16,6 +16,11 @@ export interface OutboxStore {
   subscribe(listener: () => void): () => void;
   add(item: NewOutboxItem): Promise<OutboxItem>;
   update(seq: number, patch: { state: OutboxState; problem: string | null }): Promise<void>;
+  /** Several items at once, seen by the screens as one change. */
+  updateMany(
+    seqs: readonly number[],
+    patch: { state: OutboxState; problem: string | null },
+  ): Promise<void>;
   remove(seq: number): Promise<void>;
   /** Reads the queue again from IndexedDB (another tab may have changed it). */
   reload(): Promise<void>;
@@ -100,14 +105,23 @@ export function createOutboxStore(name = outboxDatabaseName): OutboxStore {
         publish([...items.filter((other) => other.seq !== seq), item], true);
         return item;
       }),
-    update: (seq, patch) =>
+    update: (seq, patch) => store.updateMany([seq], patch),
+    updateMany: (seqs, patch) =>
       serial(async () => {
-        const stored = database ? await database.get('items', seq) : undefined;
-        const current = stored ?? items.find((item) => item.seq === seq);
-        if (!current) return;
-        const next = { ...current, ...patch };
-        if (database) await database.put('items', next);
-        publish([...items.filter((item) => item.seq !== seq), next], true);
+        const changed: OutboxItem[] = [];
+        const transaction = database?.transaction('items', 'readwrite');
+        for (const seq of seqs) {
+          const stored = transaction ? await transaction.store.get(seq) : undefined;
+          const current = stored ?? items.find((item) => item.seq === seq);
+          if (!current) continue;
+          const next = { ...current, ...patch };
+          if (transaction) await transaction.store.put(next);
+          changed.push(next);
+        }
+        await transaction?.done;
+        if (changed.length === 0) return;
+        const bySeq = new Set(changed.map((item) => item.seq));
+        publish([...items.filter((item) => !bySeq.has(item.seq)), ...changed], true);
       }),
     remove: (seq) =>
       serial(async () => {

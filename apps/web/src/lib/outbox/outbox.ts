@@ -127,7 +127,7 @@ export function discardOutboxItem(seq: number): Promise<void> {
  * for the person to choose, like answers the server refused as stale.
  */
 export async function holdOutboxItems(seqs: readonly number[], problem: string): Promise<void> {
-  for (const seq of seqs) await outboxStore().update(seq, { state: 'held', problem });
+  await outboxStore().updateMany(seqs, { state: 'held', problem });
 }
 
 /** Tests only: forget the queue and the sender, so the next test starts with none. */

@@ -317,6 +317,48 @@ describe('the case page', () => {
     );
   });
 
+  it('answers held answers again from where the case stands, with their readings filled in', async () => {
+    const moved = makeCaseDetail(['idle-or-traffic']);
+    let open: () => void = () => undefined;
+    const offline = new Promise<void>((resolve) => {
+      open = resolve;
+    });
+    const { setCase } = setup({
+      detail: makeCaseDetail(paths.start),
+      // Both answers are given before the network returns; by then the case has moved on.
+      walk: async () => {
+        await offline;
+        setCase(moved);
+        return errorResponse(409, 'conflict', 'The walk is no longer at this step.');
+      },
+    });
+    const user = userEvent.setup();
+    await screen.findByRole('heading', { level: 2, name: 'When does it run hot?' }, slow);
+    await user.click(screen.getByRole('button', { name: 'At speed, uphill or towing' }));
+    await user.type(screen.getByLabelText('Coolant added to reach MAX'), '0.35');
+    await user.click(screen.getByRole('button', { name: 'Save reading' }));
+    await screen.findByRole('heading', { level: 2, name: 'Look for leaks' });
+    open();
+
+    // The page shows where the case stands (answered elsewhere), then the held answers.
+    expect(await screen.findByText('At idle or in slow traffic; fine at speed')).toBeTruthy();
+    await waitFor(() =>
+      expect(
+        within(screen.getByRole('region', { name: /moved on/ })).getAllByRole('listitem'),
+      ).toHaveLength(2),
+    );
+    await user.click(
+      screen.getByRole('button', { name: 'Answer again from where the case stands' }),
+    );
+    await waitFor(() => expect(screen.queryByRole('region', { name: /moved on/ })).toBeNull());
+    expect(
+      screen.getByRole('heading', { level: 2, name: 'Coolant level, engine cold' }),
+    ).toBeTruthy();
+    expect((screen.getByLabelText('Coolant added to reach MAX') as HTMLInputElement).value).toBe(
+      '0.35',
+    );
+  });
+
   it('keeps answers when the session has ended and asks to sign in before sending', async () => {
     setup({
       detail: makeCaseDetail(paths.start),

@@ -60,7 +60,7 @@ export function CurrentStep({ detail, controls, tree, preferences }: CurrentStep
 
   const status = (
     <>
-      <HeldAnswers caseId={detail.id} tree={tree} />
+      <HeldAnswers caseId={detail.id} tree={tree} onAnswerAgain={controls.refresh} />
       <AnswerStatus caseId={detail.id} tree={tree} notice={notice} />
     </>
   );

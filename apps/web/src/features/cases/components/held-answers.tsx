@@ -13,9 +13,11 @@ import { keepReadingsForStep } from '../undone-readings';
 interface HeldAnswersProps {
   caseId: string;
   tree: CompiledTree | null;
+  /** Shows the current step afresh, so its boxes take the readings put back. */
+  onAnswerAgain: () => void;
 }
 
-export function HeldAnswers({ caseId, tree }: HeldAnswersProps) {
+export function HeldAnswers({ caseId, tree, onAnswerAgain }: HeldAnswersProps) {
   const items = useOutbox(caseId);
   const held = items.filter(
     (item): item is WalkItem => item.kind === 'walk' && item.state === 'held',
@@ -33,12 +35,14 @@ export function HeldAnswers({ caseId, tree }: HeldAnswersProps) {
     }
   };
 
-  const answerAgain = () =>
-    settle((answers) => {
+  const answerAgain = async () => {
+    await settle((answers) => {
       for (const { event } of answers) {
         if (event.type === 'answer.measurement') keepReadingsForStep(caseId, event);
       }
     });
+    onAnswerAgain();
+  };
 
   const keepAsItIs = () =>
     settle(async (answers) => {

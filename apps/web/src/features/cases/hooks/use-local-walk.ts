@@ -39,6 +39,8 @@ export interface WalkControls {
   dismissNotice: () => void;
   /** Answers wait for the server before the next step can show (only when the tree cannot run here). */
   waitingForServer: boolean;
+  /** Shows the step afresh (its boxes read their drafts again). */
+  refresh: () => void;
 }
 
 const movedOn = 'The case had moved on elsewhere before this answer reached it.';
@@ -129,7 +131,15 @@ export function useLocalWalk({
   );
   const model = useMemo(() => ({ tree, snapshot }), [tree, snapshot]);
   const dismissNotice = useCallback(() => setNotice(null), []);
-  return { walk, model, answer, notice, dismissNotice, waitingForServer: false };
+  return {
+    walk,
+    model,
+    answer,
+    notice,
+    dismissNotice,
+    waitingForServer: false,
+    refresh: onRebuild,
+  };
 }
 
 /**
@@ -151,5 +161,6 @@ export function useServerWalk(detail: CaseDetail): WalkControls {
     notice: null,
     dismissNotice: () => undefined,
     waitingForServer: queuedAnswers(items).length > 0,
+    refresh: () => undefined,
   };
 }
