@@ -2,14 +2,16 @@
 // checkout's web app and for a baseline build of a git ref in the same run (HEATPATH_BENCH_BASELINE_REF,
 // default 0fcc839, the walk before it became local-first). The baseline's sources are taken with
 // `git archive` into .data/bench-walk-baseline, installed with the pinned pnpm from the local store
-// and only its web app built. Both builds are served by this checkout's API against ONE fresh
+// and only its web app built (into a private directory under the system's temporary directory,
+// with the uploads). Both builds are served by this checkout's API against ONE fresh
 // cluster (.data/bench-walk-pg-<port>, PGPORT_BENCH_WALK, 54382), migrated and seeded with the demo:
 // this build on BENCH_WALK_PORT (3482), the baseline on the next port (3483). Then
 // tests/e2e/bench/walk.bench.ts walks both and prints the figures. Everything is removed at the end.
 // HEATPATH_BENCH_CURRENT_REF, when set, builds "this build" from that ref the same way instead of
 // the working tree (to try the benchmark itself on two known builds).
 import { spawn } from 'node:child_process';
-import { existsSync, mkdirSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { ensureChromium, installDependencies } from './lib/install.mjs';
 import { BootstrapError, fail, ok, step } from './lib/log.mjs';
@@ -27,8 +29,8 @@ function commitOf(ref) {
   return found.stdout.trim();
 }
 
-/** The sources of `commit` in `dir` (no .git), installed and with their web app built in `dir/apps/web/dist`. */
-async function buildRef(commit, dir) {
+/** The sources of `commit` in `dir` (no .git), installed, and their web app built into `outDir`. */
+async function buildRef(commit, dir, outDir) {
   rmSync(dir, { recursive: true, force: true });
   mkdirSync(dir, { recursive: true });
   step(`Unpacking ${commit.slice(0, 10)} into ${dir}…`);
@@ -52,7 +54,7 @@ async function buildRef(commit, dir) {
     `Installing ${commit.slice(0, 10)} failed: its lockfile needs packages the store lacks and the registry did not give.`,
     { cwd: dir, env: { ...process.env, CI: 'true' } },
   );
-  await buildWeb(dir, join(dir, 'apps', 'web', 'dist'), commit.slice(0, 10));
+  await buildWeb(dir, outDir, commit.slice(0, 10));
 }
 
 async function buildWeb(checkout, outDir, name) {
@@ -107,15 +109,17 @@ async function main() {
   const chromium = await ensureChromium();
   const baselineDir = join(data, 'bench-walk-baseline');
   const currentDir = join(data, 'bench-walk-current');
-  const currentDist = currentRef
-    ? join(currentDir, 'apps', 'web', 'dist')
-    : join(data, 'bench-walk-current-dist');
-  const uploads = join(data, 'bench-walk-uploads');
+  // The built files and the uploads live outside .data: the server's sendFile refuses a path
+  // through a dot directory (index.html would answer 404, which the API maps to 400).
+  const dists = mkdtempSync(join(tmpdir(), 'heatpath-bench-walk-'));
+  const baselineDist = join(dists, 'baseline');
+  const currentDist = join(dists, 'current');
+  const uploads = join(dists, 'uploads');
   const servers = [];
   let db;
   try {
-    await buildRef(baselineCommit, join(baselineDir));
-    if (currentRef) await buildRef(currentCommit, currentDir);
+    await buildRef(baselineCommit, baselineDir, baselineDist);
+    if (currentRef) await buildRef(currentCommit, currentDir, currentDist);
     else await buildWeb(root, currentDist, 'this checkout');
 
     db = await startCluster({
@@ -143,11 +147,7 @@ async function main() {
 
     // One API (this checkout's) and one database; each build's files served by its own process.
     const builds = [
-      {
-        label: `baseline ${baselineRef}`,
-        port: baselinePort,
-        dist: join(baselineDir, 'apps', 'web', 'dist'),
-      },
+      { label: `baseline ${baselineRef}`, port: baselinePort, dist: baselineDist },
       { label: currentRef ? `current ${currentRef}` : 'this build', port, dist: currentDist },
     ];
     for (const build of builds) {
@@ -190,7 +190,7 @@ async function main() {
       db.stop();
       db.remove();
     }
-    for (const dir of [baselineDir, currentDir, join(data, 'bench-walk-current-dist'), uploads]) {
+    for (const dir of [baselineDir, currentDir, dists, uploads]) {
       rmSync(dir, { recursive: true, force: true });
     }
   }
