@@ -55,7 +55,14 @@ function AppRouterOnceRestored({ startRouter }: { startRouter: () => AppRouter }
 export function AppProvider() {
   const [{ queryClient, startRouter }] = useState(createApp);
   return (
-    <PersistQueryClientProvider client={queryClient} persistOptions={cachePersistOptions}>
+    <PersistQueryClientProvider
+      client={queryClient}
+      persistOptions={cachePersistOptions}
+      // What was kept may be older than the server's (a unit changed a moment before the reload,
+      // an answer from another tablet): shown at once, it is read again as soon as a screen uses
+      // it and the network allows.
+      onSuccess={() => queryClient.invalidateQueries()}
+    >
       <AppRouterOnceRestored startRouter={startRouter} />
     </PersistQueryClientProvider>
   );

@@ -66,7 +66,12 @@ function whenIdle(): Promise<void> {
   });
 }
 
-export const cachePersister = createAsyncStoragePersister({
+/** When the stored cache was last removed: a save taken before then must not bring it back. */
+let removedAt = 0;
+
+class SaveFromBeforeRemoval extends Error {}
+
+const persister = createAsyncStoragePersister({
   storage,
   key: cacheKey,
   // At most one save a second, written when the browser is idle: a tap at the car is painted
@@ -74,9 +79,20 @@ export const cachePersister = createAsyncStoragePersister({
   throttleTime: 1000,
   serialize: async (client) => {
     await whenIdle();
+    // A save waiting out the throttle carries the cache as it was when it was asked for; after a
+    // sign-out (or another person) it would write the last person's cases back onto the tablet.
+    if (client.timestamp <= removedAt) throw new SaveFromBeforeRemoval();
     return JSON.stringify(client);
   },
 });
+
+export const cachePersister: typeof persister = {
+  ...persister,
+  removeClient: async () => {
+    removedAt = Date.now();
+    await persister.removeClient();
+  },
+};
 
 /** The queries kept on the tablet: "me", every case list, and each case (not its audit trail). */
 export function isPersistedQueryKey(queryKey: QueryKey): boolean {
