@@ -8,14 +8,18 @@ import { useLocation, useNavigate, useNavigation } from 'react-router';
 import { Button } from '../../components/ui/button';
 import { SignOutButton } from '../../features/auth/components/sign-out-button';
 import { useMe } from '../../lib/auth';
+import { useOutboxConnection } from '../../lib/outbox';
 import { clearCachedData } from '../../lib/persist-cache';
 import { Brand } from './brand';
 import { MainNav } from './main-nav';
 import { OfflineNotice } from './offline-notice';
+import { UpdateNotice } from './update-notice';
 
 export function AppShell({ children }: { children: ReactNode }) {
   const me = useMe();
   const queryClient = useQueryClient();
+  // Answers, notes and photos queued on this tablet are sent from whichever screen is open.
+  useOutboxConnection(me.id);
   const navigate = useNavigate();
   const navigation = useNavigation();
   const location = useLocation();
@@ -85,6 +89,7 @@ export function AppShell({ children }: { children: ReactNode }) {
       <div className="flex min-w-0 flex-1 flex-col pb-20 md:pb-0">
         <div className="sticky top-0 z-20">
           <OfflineNotice />
+          <UpdateNotice />
           {navigation.state === 'loading' ? (
             <div role="status" className="bg-info-bg px-4 py-2 text-info-ink">
               Loading…
