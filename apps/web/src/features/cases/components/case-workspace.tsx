@@ -6,7 +6,7 @@
 // loaded case chunk.
 import type { CaseDetail } from '@heatpath/contracts';
 import type { CompiledTree } from '@heatpath/fault-tree';
-import { useCallback, useState } from 'react';
+import { memo, useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { ButtonLink } from '../../../components/ui/button';
 import { ErrorState, LoadingState } from '../../../components/ui/status';
@@ -84,6 +84,17 @@ function ServerWalk({ detail }: { detail: CaseDetail }) {
   return <CaseView detail={detail} tree={null} controls={controls} />;
 }
 
+// The panels below the step follow a tap a moment later (useDeferredValue): the next step is
+// painted first, then the path, values, photos, notes and history catch up, so a tap at the car
+// never waits for the whole page to be drawn again. Memoised, they skip the first, urgent render.
+const PathPanel = memo(WalkPath);
+const ValuesPanel = memo(ComputedValues);
+const PhotosPanel = memo(AttachmentsGallery);
+const NotesPanel = memo(CaseNotes);
+const FactsPanel = memo(CaseFacts);
+const HistoryPanel = memo(AuditTrail);
+const Header = memo(CaseHeader);
+
 interface CaseViewProps {
   detail: CaseDetail;
   tree: CompiledTree | null;
@@ -97,19 +108,28 @@ function CaseView({ detail, tree, controls }: CaseViewProps) {
   const { walk } = controls;
   const items = useOutbox(detail.id);
   const waiting = items.some(isPending);
+  const shownWalk = useDeferredValue(walk);
+  const shownItems = useDeferredValue(items);
   const diagnoseBlocked = useDiagnoseBlockedReason(detail, walk, tree);
   const readOnlyFindings = findings && !detail.can.editFindings ? findings : null;
   // The findings belong to the finding the server reached; shown once this tablet stands there too.
   const findingsHere = findings && findings.outcomeNodeId === walk.outcome?.id ? findings : null;
 
-  const stepTitle = (nodeId: string): string | null =>
-    tree?.nodes.get(nodeId)?.title ??
-    walk.path.find((entry) => entry.nodeId === nodeId)?.title ??
-    (walk.currentNodeId === nodeId ? walk.currentNode.title : null);
+  const stepTitle = useCallback(
+    (nodeId: string): string | null =>
+      tree?.nodes.get(nodeId)?.title ??
+      shownWalk.path.find((entry) => entry.nodeId === nodeId)?.title ??
+      (shownWalk.currentNodeId === nodeId ? shownWalk.currentNode.title : null),
+    [tree, shownWalk],
+  );
+  const currentStep = useMemo(
+    () => ({ id: shownWalk.currentNodeId, title: shownWalk.currentNode.title }),
+    [shownWalk.currentNodeId, shownWalk.currentNode.title],
+  );
 
   return (
     <div className="flex flex-col gap-5">
-      <CaseHeader detail={detail} />
+      <Header detail={detail} />
 
       {walk.divergence ? (
         <Alert tone="danger" title="This case’s record no longer fits its tree">
@@ -154,27 +174,27 @@ function CaseView({ detail, tree, controls }: CaseViewProps) {
       ) : null}
 
       <div className="grid gap-5 lg:grid-cols-2 lg:items-start">
-        <WalkPath walk={walk} />
-        <ComputedValues walk={walk} preferences={preferences} />
+        <PathPanel walk={shownWalk} />
+        <ValuesPanel walk={shownWalk} preferences={preferences} />
       </div>
       <div className="grid gap-5 lg:grid-cols-2 lg:items-start">
-        <AttachmentsGallery
+        <PhotosPanel
           caseId={detail.id}
           attachments={detail.attachments}
           stepTitle={stepTitle}
           canAttach={detail.can.walk}
         />
-        <CaseNotes
+        <NotesPanel
           caseId={detail.id}
           notes={detail.notes}
-          queued={items}
-          currentStep={{ id: walk.currentNodeId, title: walk.currentNode.title }}
+          queued={shownItems}
+          currentStep={currentStep}
           stepTitle={stepTitle}
           canWrite={detail.can.walk}
         />
       </div>
-      <CaseFacts detail={detail} />
-      <AuditTrail caseId={detail.id} stepTitle={stepTitle} />
+      <FactsPanel detail={detail} />
+      <HistoryPanel caseId={detail.id} stepTitle={stepTitle} />
     </div>
   );
 }
