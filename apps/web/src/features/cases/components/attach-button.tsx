@@ -1,5 +1,5 @@
 // One button that opens the camera or the file picker. A photo request opens the rear camera on a
-// tablet or phone, and the photo goes into the outbox: it shows at once as "waiting to send" and
+// tablet or phone, and the photo (also one chosen through "Attach file") goes into the outbox: it shows at once as "waiting to send" and
 // is sent before the answers given after it, with or without a network. Other files (logs) are
 // uploaded at once; a failed upload says why, and one lost to the network keeps the file so
 // "Retry" sends it again without choosing it anew.
@@ -43,14 +43,14 @@ export function AttachButton({
   const input = useRef<HTMLInputElement>(null);
   const upload = useUploadAttachment();
   const [file, setFile] = useState<File | null>(null);
-  const [added, setAdded] = useState<string | null>(null);
+  const [added, setAdded] = useState<{ name: string; queued: boolean } | null>(null);
   const [notKept, setNotKept] = useState(false);
 
   const queue = (chosen: File) => {
     setAdded(null);
     setNotKept(false);
     enqueuePhoto({ caseId, nodeId: nodeId ?? null, file: chosen }).then(
-      () => setAdded(chosen.name),
+      () => setAdded({ name: chosen.name, queued: true }),
       () => setNotKept(true),
     );
   };
@@ -62,7 +62,7 @@ export function AttachButton({
       {
         onSuccess: (attachment) => {
           setFile(null);
-          setAdded(attachment.name);
+          setAdded({ name: attachment.name, queued: false });
         },
       },
     );
@@ -99,7 +99,8 @@ export function AttachButton({
             const chosen = event.target.files?.[0];
             event.target.value = '';
             if (!chosen) return;
-            if (kind === 'photo') {
+            // A photo, also one chosen as "any file", waits in the outbox like an answer.
+            if (kind === 'photo' || (kind === 'any' && chosen.type.startsWith('image/'))) {
               queue(chosen);
               return;
             }
@@ -130,7 +131,7 @@ export function AttachButton({
         </Alert>
       ) : added ? (
         <p role="status" className="flex items-center gap-2 font-semibold text-ok-ink">
-          <span aria-hidden="true">✓</span> {kind === 'photo' ? 'Kept' : 'Attached'} {added}
+          <span aria-hidden="true">✓</span> {added.queued ? 'Kept' : 'Attached'} {added.name}
         </p>
       ) : null}
     </div>

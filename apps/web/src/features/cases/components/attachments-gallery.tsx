@@ -1,8 +1,10 @@
 // Every photo and file on the case, with the step each was taken at, and an upload for the case
-// as a whole.
+// as a whole (photos of it wait in the outbox until sent, shown from the tablet meanwhile).
 import type { CaseAttachment } from '@heatpath/contracts';
+import { useQueuedPhotos } from '../../../lib/outbox';
 import { AttachButton } from './attach-button';
 import { AttachmentThumbnails } from './attachment-thumbnails';
+import { QueuedPhotos } from './queued-photos';
 
 interface AttachmentsGalleryProps {
   caseId: string;
@@ -17,6 +19,8 @@ export function AttachmentsGallery({
   stepTitle,
   canAttach,
 }: AttachmentsGalleryProps) {
+  // Photos of the whole case still on this tablet (taken here, not sent yet).
+  const queued = useQueuedPhotos(caseId, null);
   return (
     <section
       aria-labelledby="attachments-heading"
@@ -26,13 +30,16 @@ export function AttachmentsGallery({
         Photos and files{' '}
         <span className="text-sm font-normal text-ink-muted">({attachments.length})</span>
       </h2>
-      {attachments.length === 0 ? <p className="text-ink-muted">Nothing attached yet.</p> : null}
+      {attachments.length === 0 && queued.length === 0 ? (
+        <p className="text-ink-muted">Nothing attached yet.</p>
+      ) : null}
       <AttachmentThumbnails
         attachments={attachments}
         captionFor={(attachment) =>
           attachment.nodeId ? stepTitle(attachment.nodeId) : 'Whole case'
         }
       />
+      <QueuedPhotos photos={queued} />
       {canAttach ? <AttachButton caseId={caseId} kind="any" /> : null}
     </section>
   );
