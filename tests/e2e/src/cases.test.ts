@@ -113,6 +113,18 @@ describe('guided diagnosis', () => {
       'Radiator hose temperatures',
       '°F',
     );
+    // The unit chosen a step ago stays chosen (and is the technician's preference now);
+    // these readings were taken in °C, so the technician switches back.
+    const hoseLabels = [
+      'Live data at the moment of the hose readings',
+      'Radiator inlet hose',
+      'Radiator outlet hose',
+    ];
+    expect(
+      await page.getByLabel(`Unit for ${hoseLabels[0]}`).locator('option:checked').textContent(),
+    ).toBe('°F');
+    for (const label of hoseLabels)
+      await page.getByLabel(`Unit for ${label}`).selectOption({ label: '°C' });
     // Read at the same moment as live data, with the thermostat known to be open.
     await page
       .getByLabel('Live data at the moment of the hose readings', { exact: true })
@@ -166,6 +178,16 @@ describe('guided diagnosis', () => {
       'Nothing changes whatever the command: the inlet stays cool, the engine climbs',
       'Remove the coolant pump for inspection',
     );
+    // The step asks for photos of the pump as required evidence: Done waits for one.
+    expect(await page.getByRole('button', { name: 'Done', exact: true }).isDisabled()).toBe(true);
+    await page
+      .getByLabel('Attach photo: choose the file')
+      .first()
+      .setInputFiles({ name: 'pump-impeller.png', mimeType: 'image/png', buffer: png });
+    await page
+      .getByRole('button', { name: 'Done', exact: true })
+      .and(page.locator(':enabled'))
+      .waitFor();
     await done(page, 'Inspect the pump shroud');
     await page
       .getByRole('button', { name: 'Yes, the shroud is stuck over the impeller', exact: true })
