@@ -95,6 +95,8 @@ const FactsPanel = memo(CaseFacts);
 const HistoryPanel = memo(AuditTrail);
 const Header = memo(CaseHeader);
 
+const belowTheStep = '[content-visibility:auto] [contain-intrinsic-size:auto_480px]';
+
 interface CaseViewProps {
   detail: CaseDetail;
   tree: CompiledTree | null;
@@ -173,11 +175,13 @@ function CaseView({ detail, tree, controls }: CaseViewProps) {
         <LoadingState label="Drafting the findings…" />
       ) : null}
 
-      <div className="grid gap-5 lg:grid-cols-2 lg:items-start">
+      {/* Below the step, and drawn only when scrolled to (content-visibility): a tap lays out
+          and paints the step, not the whole case. */}
+      <div className={`grid gap-5 lg:grid-cols-2 lg:items-start ${belowTheStep}`}>
         <PathPanel walk={shownWalk} />
         <ValuesPanel walk={shownWalk} preferences={preferences} />
       </div>
-      <div className="grid gap-5 lg:grid-cols-2 lg:items-start">
+      <div className={`grid gap-5 lg:grid-cols-2 lg:items-start ${belowTheStep}`}>
         <PhotosPanel
           caseId={detail.id}
           attachments={detail.attachments}
@@ -193,8 +197,10 @@ function CaseView({ detail, tree, controls }: CaseViewProps) {
           canWrite={detail.can.walk}
         />
       </div>
-      <FactsPanel detail={detail} />
-      <HistoryPanel caseId={detail.id} stepTitle={stepTitle} />
+      <div className={`flex flex-col gap-5 ${belowTheStep}`}>
+        <FactsPanel detail={detail} />
+        <HistoryPanel caseId={detail.id} stepTitle={stepTitle} />
+      </div>
     </div>
   );
 }
