@@ -4,6 +4,9 @@
 // loaded. Each build in BENCH_WALK_BUILDS (the first is the baseline) is walked both ways in the
 // same run, against the same API and database. Target (issue 16): p95 ≤ 100 ms, online and off.
 // Run with `npm run bench:walk` (scripts/bench-walk.mjs builds both and starts the stack).
+// BENCH_WALK_PROFILE=1 builds unminified and prints, per tap, the long animation frames it caused
+// (script, style and layout, rendering) and the page's functions by self time while taps are timed;
+// its figures carry the profiler's cost, so they are for finding where time goes, not for reporting.
 //
 // The walk: the first 17 answers of the scripted stuck-shroud path (apps/api's demo walks), each
 // on a fresh case made through the API as the demo technician. Readings are typed and the
@@ -73,6 +76,9 @@ window.__hpArm = (before, limitMs) => {
     const heading = document.querySelector('h2#current-step-title');
     return heading ? heading.textContent.trim() : null;
   };
+  const seen = [];
+  const frames = new PerformanceObserver((list) => { seen.push(...list.getEntries()); });
+  frames.observe({ type: 'long-animation-frame' });
   window.__hpDone = new Promise((resolve) => {
     let observer;
     const finish = () => {
@@ -88,7 +94,21 @@ window.__hpArm = (before, limitMs) => {
       finish();
       requestAnimationFrame(() => {
         const channel = new MessageChannel();
-        channel.port1.onmessage = () => resolve({ ms: performance.now() - state.t0, title: now });
+        channel.port1.onmessage = () => {
+          const ms = performance.now() - state.t0;
+          // Frames of the tap (long-animation-frame), delivered after the frame: read a moment later.
+          setTimeout(() => {
+            frames.disconnect();
+            const loaf = frames.takeRecords().concat(seen).filter((f) => f.startTime + f.duration >= state.t0);
+            resolve({ ms, title: now, frames: loaf.map((f) => ({
+              at: Math.round(f.startTime - state.t0), duration: Math.round(f.duration),
+              render: Math.round(f.renderStart ? f.startTime + f.duration - f.renderStart : 0),
+              styleLayout: Math.round(f.styleAndLayoutStart ? f.startTime + f.duration - f.styleAndLayoutStart : 0),
+              scripts: f.scripts.map((x) => (x.invoker || x.invokerType) + ' ' + Math.round(x.duration) + 'ms' +
+                (x.forcedStyleAndLayoutDuration ? ' (forced ' + Math.round(x.forcedStyleAndLayoutDuration) + ')' : '')).join('; '),
+            })) });
+          }, 200);
+        };
         channel.port2.postMessage(null);
       });
     });
@@ -258,6 +278,12 @@ async function walk(
       });
     }
     await page.evaluate(pageHelpers);
+    const profiling = Boolean(process.env.BENCH_WALK_PROFILE);
+    const hot = new Map<string, number>();
+    if (profiling) {
+      await cdp.send('Profiler.enable');
+      await cdp.send('Profiler.setSamplingInterval', { interval: 100 });
+    }
 
     for (let tap = 0; tap < TAPS; tap += 1) {
       const { nodeId, answer } = path[tap]!;
@@ -292,6 +318,7 @@ async function walk(
         else if (process.env.BENCH_WALK_DEBUG) console.log(`    tap ${tap + 1}: photo shown`);
       }
       await page.evaluate(`window.__hpArm(${JSON.stringify(node.title)}, ${limit})`);
+      if (profiling) await cdp.send('Profiler.start');
       try {
         await button.click({ timeout: 30_000 });
       } catch {
@@ -301,7 +328,13 @@ async function walk(
       const result = (await page.evaluate('window.__hpDone')) as {
         ms: number | null;
         title: string | null;
+        frames?: unknown[];
       };
+      if (profiling && result.ms !== null)
+        console.log(
+          `    tap ${tap + 1}: ${Math.round(result.ms)} ms ${JSON.stringify(result.frames)}`,
+        );
+      if (profiling) addSelfTimes(hot, (await cdp.send('Profiler.stop')).profile);
       if (result.ms === null) {
         run.stopped = `tap ${tap + 1}: did not advance in ${limit / 1000} s (“${node.title}”)`;
         break;
@@ -315,11 +348,35 @@ async function walk(
         console.log(`    tap ${tap + 1}: ${Math.round(result.ms)} ms`);
       await page.waitForTimeout(BETWEEN_TAPS);
     }
+    if (profiling) printHotFunctions(hot);
     await cdp.detach().catch(() => undefined);
   } finally {
     await context.close();
   }
   return run;
+}
+
+interface CpuProfile {
+  nodes: { id: number; callFrame: { functionName: string; url: string; lineNumber: number } }[];
+  samples?: number[];
+  timeDeltas?: number[];
+}
+
+/** BENCH_WALK_PROFILE: the page's self time per function while taps are timed (unminified build). */
+function addSelfTimes(into: Map<string, number>, profile: CpuProfile) {
+  const deltas = profile.timeDeltas ?? [];
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  (profile.samples ?? []).forEach((id, i) => {
+    const frame = byId.get(id)?.callFrame;
+    if (!frame) return;
+    const where = `${frame.functionName || '(anonymous)'} ${frame.url.split('/').pop()}:${frame.lineNumber + 1}`;
+    into.set(where, (into.get(where) ?? 0) + (deltas[i + 1] ?? 0) / 1000);
+  });
+}
+
+function printHotFunctions(self: ReadonlyMap<string, number>) {
+  const top = [...self.entries()].sort((a, b) => b[1] - a[1]).slice(0, 45);
+  for (const [where, ms] of top) console.log(`      ${ms.toFixed(1).padStart(8)} ms  ${where}`);
 }
 
 function percentile(sorted: readonly number[], p: number): number {
