@@ -16,6 +16,7 @@ import {
   clearCachedData,
   isPersistedQueryKey,
   keepCacheToOnePerson,
+  saveCacheNow,
 } from './persist-cache';
 import { createQueryClient } from './query-client';
 import { casesKeys, staffKeys, treesKeys } from './query-keys';
@@ -93,6 +94,18 @@ describe('the cache kept on the tablet', () => {
       makeCaseDetail(paths.blockTest),
     );
     expect(reloaded.getQueryData(staffKeys.list())).toBeUndefined();
+  });
+
+  it('writes a unit chosen a moment ago at once, so a reload straight after still has it', async () => {
+    const queryClient = filledClient();
+    const me = makeMe({ role: 'technician' });
+    const psi = { ...me.preferences.units, pressure: 'psi' as const };
+    queryClient.setQueryData(meQueryKey, { ...me, preferences: { ...me.preferences, units: psi } });
+    // No throttled save is waited for: this write alone is what the reload finds.
+    await saveCacheNow(queryClient);
+    const reloaded = createQueryClient();
+    await persistQueryClientRestore({ queryClient: reloaded, ...cachePersistOptions });
+    expect(reloaded.getQueryData<typeof me>(meQueryKey)?.preferences.units.pressure).toBe('psi');
   });
 
   it('does not read what another build stored', async () => {

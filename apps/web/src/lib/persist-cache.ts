@@ -7,6 +7,7 @@ import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persi
 import type { Me } from '@heatpath/contracts';
 import {
   defaultShouldDehydrateQuery,
+  dehydrate,
   hashKey,
   type Query,
   type QueryClient,
@@ -117,6 +118,20 @@ export const cachePersistOptions: Omit<PersistQueryClientOptions, 'queryClient'>
     shouldDehydrateMutation: () => false,
   },
 };
+
+/**
+ * Writes the kept cache at once, without waiting for the throttled save: for a rare change the
+ * tablet must not lose to a reload a moment later (a unit chosen while offline, which is the
+ * person's preference until the server has it). A refused write changes nothing else.
+ */
+export async function saveCacheNow(queryClient: QueryClient): Promise<void> {
+  const client = {
+    buster: cacheBuster,
+    timestamp: Date.now(),
+    clientState: dehydrate(queryClient, cachePersistOptions.dehydrateOptions),
+  };
+  await storage.setItem(cacheKey, JSON.stringify(client)).catch(() => undefined);
+}
 
 /**
  * Keeps the persisted queries in memory as long as they are kept on disk: an unused query is

@@ -8,6 +8,7 @@ import { meSchema, type Me, type UpdatePreferencesRequest } from '@heatpath/cont
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from './api-client';
 import { meQueryKey } from './auth';
+import { saveCacheNow } from './persist-cache';
 
 export function updateUnitPreferences(body: UpdatePreferencesRequest) {
   return apiRequest('/api/me/preferences', meSchema, { method: 'PATCH', body });
@@ -36,6 +37,9 @@ export function useUpdateUnitPreferences() {
             units: { ...previous.preferences.units, ...body.units },
           },
         });
+        // Kept on the tablet now: offline, this is the preference the next steps start from,
+        // also after a reload.
+        void saveCacheNow(queryClient);
       }
       return { previous };
     },
