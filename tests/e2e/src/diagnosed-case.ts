@@ -58,6 +58,29 @@ async function attachRequiredEvidence(
   }
 }
 
+type Api = Awaited<ReturnType<typeof apiAs>>;
+
+/** A new case on the overheating tree for the demo's HL17 KVR, opened through the API. */
+export async function openOverheatingCase(
+  api: Api,
+  complaint: string,
+  mileageAtIntake: number,
+): Promise<{ id: string; reference: string } & Walked> {
+  const { vehicles } = await api<{ vehicles: { id: string }[] }>('GET', '/api/vehicles?q=HL17');
+  const { trees } = await api<{ trees: { id: string; key: string }[] }>(
+    'GET',
+    '/api/trees/available',
+  );
+  const tree = trees.find((t) => t.key === 'overheats-intermittent-no-codes');
+  if (!vehicles[0] || !tree) throw new Error('the demo seed has no HL17 KVR or overheating tree');
+  return api<{ id: string; reference: string } & Walked>('POST', '/api/cases', {
+    vehicleId: vehicles[0].id,
+    complaint,
+    mileageAtIntake,
+    treeId: tree.id,
+  });
+}
+
 export async function diagnosedCase(options: {
   session: BrowserSession;
   complaint: string;
@@ -68,19 +91,7 @@ export async function diagnosedCase(options: {
   correctionAddition?: string;
 }): Promise<{ caseId: string; reference: string }> {
   const tech = await apiAs('tech@harbourlane.test');
-  const { vehicles } = await tech<{ vehicles: { id: string }[] }>('GET', '/api/vehicles?q=HL17');
-  const { trees } = await tech<{ trees: { id: string; key: string }[] }>(
-    'GET',
-    '/api/trees/available',
-  );
-  const tree = trees.find((t) => t.key === 'overheats-intermittent-no-codes');
-  if (!vehicles[0] || !tree) throw new Error('the demo seed has no HL17 KVR or overheating tree');
-  const kase = await tech<{ id: string; reference: string } & Walked>('POST', '/api/cases', {
-    vehicleId: vehicles[0].id,
-    complaint: options.complaint,
-    mileageAtIntake: options.mileageAtIntake,
-    treeId: tree.id,
-  });
+  const kase = await openOverheatingCase(tech, options.complaint, options.mileageAtIntake);
   let { walk } = kase;
   for (const step of stuckShroudPath) {
     await attachRequiredEvidence(tech, kase.id, walk.currentNode, options.session);

@@ -7,7 +7,7 @@ import type { Page } from 'playwright-core';
 import { apiAs } from './api-client';
 import { launch, screenshot, signIn } from './browser';
 import type { BrowserSession } from './browser';
-import { testPng } from './diagnosed-case';
+import { openOverheatingCase, testPng } from './diagnosed-case';
 
 let session: BrowserSession;
 beforeAll(async () => {
@@ -32,20 +32,7 @@ interface StoredCase {
 
 /** A fresh case on the overheating tree for the demo technician's HL17 KVR, made through the API. */
 async function freshCase(tech: Api, complaint: string): Promise<string> {
-  const { vehicles } = await tech<{ vehicles: { id: string }[] }>('GET', '/api/vehicles?q=HL17');
-  const { trees } = await tech<{ trees: { id: string; key: string }[] }>(
-    'GET',
-    '/api/trees/available',
-  );
-  const tree = trees.find((t) => t.key === 'overheats-intermittent-no-codes');
-  if (!vehicles[0] || !tree) throw new Error('the demo seed has no HL17 KVR or overheating tree');
-  const kase = await tech<{ id: string }>('POST', '/api/cases', {
-    vehicleId: vehicles[0].id,
-    complaint,
-    mileageAtIntake: 120_400,
-    treeId: tree.id,
-  });
-  return kase.id;
+  return (await openOverheatingCase(tech, complaint, 120_400)).id;
 }
 
 async function stepIs(page: Page, title: string) {
